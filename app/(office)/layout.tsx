@@ -1,0 +1,12 @@
+import { AppShell } from '@/components/layout/app-shell';
+import { officeNav } from '@/components/layout/nav-items';
+import { requirePageUser } from '@/lib/auth/page-user';
+
+export default async function OfficeLayout({ children }: { children: React.ReactNode }) {
+  const user = await requirePageUser();
+  return (
+    <AppShell user={user} nav={officeNav}>
+      {children}
+    </AppShell>
+  );
+}

@@ -1,0 +1,21 @@
+import type { Metadata, Viewport } from 'next';
+import { Providers } from '@/components/providers';
+import { monoFont, sansFont } from './fonts';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Kerfwise', template: '%s · Kerfwise' },
+  description: 'Cutting plans, saw guidance and offcut stock for timber yards.',
+};
+
+export const viewport: Viewport = { themeColor: '#1d5545' };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en-GB" className={`${sansFont.variable} ${monoFont.variable}`}>
+      <body className="min-h-screen">
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

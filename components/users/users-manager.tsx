@@ -1,0 +1,45 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Card } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { usersQuery } from '@/lib/queries/users';
+import { AddUserForm } from './add-user-form';
+import { UserRow } from './user-row';
+
+export function UsersManager() {
+  const users = useQuery(usersQuery());
+  const [rowError, setRowError] = useState<string | null>(null);
+
+  return (
+    <div className="space-y-6">
+      <Card className="overflow-x-auto p-0">
+        {rowError && <Notice tone="error" className="m-4">{rowError}</Notice>}
+        {users.isPending && <p className="p-4">Loading accounts…</p>}
+        {users.error && <Notice tone="error" className="m-4">{users.error.message}</Notice>}
+        {users.data && (
+          <table className="w-full text-left" data-testid="users-table">
+            <thead className="bg-shaving text-sm">
+              <tr>
+                <th className="p-3">Person</th>
+                <th className="p-3">Role</th>
+                <th className="p-3">Password</th>
+                <th className="p-3">Access</th>
+              </tr>
+            </thead>
+            <tbody>
+              {users.data.map((user) => (
+                <UserRow key={user.id} user={user} onError={setRowError} />
+              ))}
+            </tbody>
+          </table>
+        )}
+      </Card>
+      <Card>
+        <h2 className="mb-4 text-xl font-bold">Add an account</h2>
+        <AddUserForm />
+      </Card>
+    </div>
+  );
+}

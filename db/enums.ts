@@ -1,0 +1,34 @@
+// Value lists shared by the schema, validation and client components (no database imports here).
+export const ROLES = ['owner', 'yard_hand', 'saw_operator'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const JOB_STATUSES = ['draft', 'planned', 'released', 'cutting', 'done', 'cancelled'] as const;
+export type JobStatus = (typeof JOB_STATUSES)[number];
+
+export const OFFCUT_STATUSES = ['available', 'reserved', 'used', 'scrapped'] as const;
+export type OffcutStatus = (typeof OFFCUT_STATUSES)[number];
+
+export const PLAN_STATUSES = ['planned', 'released', 'superseded', 'done'] as const;
+export type PlanStatus = (typeof PLAN_STATUSES)[number];
+
+export const BOARD_STATUSES = ['pending', 'done', 'defective'] as const;
+export type BoardStatus = (typeof BOARD_STATUSES)[number];
+
+export const DISPLAY_UNITS = ['mm', 'imperial'] as const;
+export type DisplayUnit = (typeof DISPLAY_UNITS)[number];
+
+export const MOVEMENT_KINDS = [
+  'receipt', // a delivery of stock lengths
+  'stocktake', // a counted correction of on-hand stock
+  'stock_cut', // a stock length taken to the saw for a plan
+  'offcut_made', // a kept remainder tagged and put on the rack
+  'offcut_imported', // an existing rack piece entered from a CSV
+  'offcut_reserved',
+  'offcut_unreserved',
+  'offcut_used',
+  'offcut_scrapped',
+  'offcut_moved',
+  'defect', // a board found bad at the saw
+] as const;
+export type MovementKind = (typeof MOVEMENT_KINDS)[number];
+

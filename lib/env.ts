@@ -1,0 +1,24 @@
+// The one place that reads process.env. Everything else asks this module.
+import path from 'node:path';
+import { z } from 'zod';
+
+const envSchema = z.object({
+  KERFWISE_DATA_DIR: z.string().min(1).default('.data'),
+  NEXTAUTH_SECRET: z.string().min(16).optional(),
+  NEXTAUTH_URL: z.string().url().optional(),
+  KERFWISE_SMTP_HOST: z.string().default('127.0.0.1'),
+  KERFWISE_SMTP_PORT: z.coerce.number().int().positive().default(2525),
+  KERFWISE_MAIL_FROM: z.string().default('Kerfwise <cutting@yard.test>'),
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export function getEnv(): Env {
+  return envSchema.parse(process.env);
+}
+
+/** Absolute path of the embedded database folder. */
+export function dataDirPath(): string {
+  return path.resolve(/*turbopackIgnore: true*/ process.cwd(), getEnv().KERFWISE_DATA_DIR);
+}

@@ -1,0 +1,27 @@
+import { z } from 'zod';
+import { ROLES } from '@/db/enums';
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@/lib/auth/password-rules';
+
+const password = z
+  .string()
+  .min(PASSWORD_MIN_LENGTH, `Passwords need at least ${PASSWORD_MIN_LENGTH} characters.`)
+  .max(PASSWORD_MAX_LENGTH, `Passwords can have at most ${PASSWORD_MAX_LENGTH} characters.`);
+
+export const createUserBodySchema = z.object({
+  email: z.string().trim().toLowerCase().email('Enter a valid e-mail address.'),
+  name: z.string().trim().min(1, 'Enter a name.').max(80),
+  role: z.enum(ROLES, { message: 'Choose a role.' }),
+  password,
+});
+export type CreateUserBody = z.infer<typeof createUserBodySchema>;
+
+export const updateUserBodySchema = z
+  .object({
+    name: z.string().trim().min(1, 'Enter a name.').max(80),
+    role: z.enum(ROLES, { message: 'Choose a role.' }),
+    disabled: z.boolean(),
+    password,
+  })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;

@@ -1,0 +1,47 @@
+import { defineConfig, devices } from '@playwright/test';
+
+// Browser tests run against a production build on its own port with a fresh data folder.
+const PORT = 3107;
+const baseURL = `http://127.0.0.1:${PORT}`;
+const dataDir = '.data-e2e';
+
+export default defineConfig({
+  testDir: './tests/e2e',
+  fullyParallel: false,
+  workers: 1,
+  retries: process.env.CI ? 1 : 0,
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  reporter: process.env.CI ? [['list']] : [['list']],
+  outputDir: 'test-results',
+  use: {
+    baseURL,
+    trace: 'retain-on-failure',
+    screenshot: 'only-on-failure',
+    launchOptions: {
+      executablePath: '/usr/bin/chromium',
+      args: [
+        '--disable-gpu',
+        '--disable-dev-shm-usage',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+        '--no-first-run',
+      ],
+    },
+  },
+  projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'], channel: undefined } }],
+  webServer: {
+    command: `rm -rf ${dataDir} ${dataDir}.lock && npx next build && npx next start -p ${PORT} -H 127.0.0.1`,
+    url: `${baseURL}/api/health`,
+    timeout: 300_000,
+    reuseExistingServer: false,
+    env: {
+      KERFWISE_DATA_DIR: dataDir,
+      NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-use',
+      NEXTAUTH_URL: baseURL,
+      NEXT_TELEMETRY_DISABLED: '1',
+      KERFWISE_SMTP_PORT: '2626',
+    },
+  },
+});
