@@ -12,8 +12,7 @@ export function parseMetric(text: string): bigint | null {
   const value = readDecimal(match[1].replace(/ /g, ''));
   if (!value) return null;
   const unit = match[2] ?? 'mm';
-  const mm: Fraction = unit.startsWith('m') && !unit.startsWith('mm') && !unit.startsWith('milli')
-    ? scaleFraction(value, MM_PER_METRE)
-    : value;
+  const isMetres = unit === 'm' || unit.startsWith('met');
+  const mm: Fraction = isMetres ? scaleFraction(value, MM_PER_METRE) : value;
   return roundFraction(mm);
 }
