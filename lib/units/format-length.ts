@@ -1,0 +1,49 @@
+import { IMPERIAL_DENOMINATOR } from './length-constants';
+import type { LengthUnit } from './length-result';
+
+const SIXTEENTHS_PER_FOOT = 12 * IMPERIAL_DENOMINATOR;
+
+/** Metric as plain millimetres, grouped by spaces only from five digits up: 1500, 15 000 (Metric Handbook, ch. 1). */
+export function formatMillimetres(mm: number): string {
+  const whole = Math.round(Math.abs(mm));
+  const digits = String(whole);
+  const grouped = digits.length < 5 ? digits : digits.replace(/\B(?=(\d{3})+(?!\d))/g, ' ');
+  return mm < 0 && whole !== 0 ? `-${grouped}` : grouped;
+}
+
+/** Whole millimetres to the nearest 1/16 in, halves rounded up, computed in integers (1 in = 25.4 mm). */
+export function millimetresToSixteenths(mm: number): number {
+  const whole = Math.round(mm);
+  // sixteenths = mm × 16 / 25.4 = mm × 160 / 254
+  return Math.floor((2 * whole * 160 + 254) / (2 * 254));
+}
+
+function reduceFraction(num: number, den: number): string {
+  let [a, b] = [num, den];
+  while (b) [a, b] = [b, a % b];
+  return `${num / a}/${den / a}`;
+}
+
+function formatInches(sixteenths: number): string {
+  const whole = Math.floor(sixteenths / IMPERIAL_DENOMINATOR);
+  const rest = sixteenths % IMPERIAL_DENOMINATOR;
+  if (rest === 0) return `${whole}″`;
+  const fraction = reduceFraction(rest, IMPERIAL_DENOMINATOR);
+  return whole === 0 ? `${fraction}″` : `${whole} ${fraction}″`;
+}
+
+/**
+ * Feet-dash-inches to the nearest 1/16 in with reduced fractions: 7′-8 5/8″, 4′-0″; inches alone
+ * under a foot: 11 1/2″ (open textbook "Fundamentals – Drawings and Specifications").
+ */
+export function formatFeetInches(mm: number): string {
+  const sixteenths = millimetresToSixteenths(Math.abs(mm));
+  const sign = mm < 0 && sixteenths !== 0 ? '-' : '';
+  const feet = Math.floor(sixteenths / SIXTEENTHS_PER_FOOT);
+  const inches = formatInches(sixteenths % SIXTEENTHS_PER_FOOT);
+  return feet === 0 ? `${sign}${inches}` : `${sign}${feet}′-${inches}`;
+}
+
+export function formatLength(mm: number, unit: LengthUnit): string {
+  return unit === 'imperial' ? formatFeetInches(mm) : formatMillimetres(mm);
+}
