@@ -8,6 +8,7 @@ import type { FrameContext, Point } from './types';
 import { getWallHeightAt, isStudWall } from './wall-height';
 
 export type LayoutShape = { mark: string | null; label: string; role: 'piece' | 'opening'; points: Point[] };
+/** `offset` shifts the dimension line square to it, towards the left of from → to (negative: right). */
 export type LayoutDimension = { from: Point; to: Point; offset: number; value: number; text: string };
 export type PanelLayout = {
   view: 'elevation' | 'plan';
@@ -48,8 +49,8 @@ export function layoutPanel(
   if (isStudWall(panel)) {
     const L = panel.length;
     dimensions.push(dimension({ x: 0, y: 0 }, { x: L, y: 0 }, -250));
-    dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: getWallHeightAt(panel, 0) }, -250));
-    if (panel.kind === 'sloped_wall') dimensions.push(dimension({ x: L, y: 0 }, { x: L, y: getWallHeightAt(panel, L) }, 250));
+    dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: getWallHeightAt(panel, 0) }, 250));
+    if (panel.kind === 'sloped_wall') dimensions.push(dimension({ x: L, y: 0 }, { x: L, y: getWallHeightAt(panel, L) }, -250));
     for (const o of panels) {
       if (o.kind !== 'opening' || panel.id === undefined || o.wallId !== panel.id) continue;
       const top = o.sillHeight + o.height;
@@ -62,12 +63,12 @@ export function layoutPanel(
     view = 'plan';
     const { run } = getRoofGeometry(panel);
     dimensions.push(dimension({ x: 0, y: -panel.eavesOverhang }, { x: panel.length, y: -panel.eavesOverhang }, -250));
-    dimensions.push(dimension({ x: -panel.sideOverhang, y: 0 }, { x: -panel.sideOverhang, y: run }, -250));
-    if (panel.eavesOverhang > 0) dimensions.push(dimension({ x: -panel.sideOverhang, y: -panel.eavesOverhang }, { x: -panel.sideOverhang, y: 0 }, -250));
+    dimensions.push(dimension({ x: -panel.sideOverhang, y: 0 }, { x: -panel.sideOverhang, y: run }, 250));
+    if (panel.eavesOverhang > 0) dimensions.push(dimension({ x: -panel.sideOverhang, y: -panel.eavesOverhang }, { x: -panel.sideOverhang, y: 0 }, 250));
   } else if (panel.kind === 'base') {
     view = 'plan';
     dimensions.push(dimension({ x: 0, y: 0 }, { x: panel.length, y: 0 }, -250));
-    dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: panel.width }, -250));
+    dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: panel.width }, 250));
   }
   if (!isStudWall(panel) && panel.kind !== 'roof' && panel.kind !== 'base') {
     // Overall sizes from what was drawn: door leaf, cladding.
@@ -76,7 +77,7 @@ export function layoutPanel(
     if (xs.length) {
       const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
       dimensions.push(dimension({ x: x0, y: y0 }, { x: x1, y: y0 }, -250));
-      dimensions.push(dimension({ x: x0, y: y0 }, { x: x0, y: y1 }, -250));
+      dimensions.push(dimension({ x: x0, y: y0 }, { x: x0, y: y1 }, 250));
     }
   }
   const points = shapes.flatMap((s) => s.points);
