@@ -1,0 +1,16 @@
+import type { Point } from './types';
+
+export function rectangle(x0: number, y0: number, x1: number, y1: number): Point[] {
+  return [
+    { x: x0, y: y0 },
+    { x: x1, y: y0 },
+    { x: x1, y: y1 },
+    { x: x0, y: y1 },
+  ];
+}
+
+export const toDegrees = (radians: number) => (radians * 180) / Math.PI;
+export const toRadians = (degrees: number) => (degrees * Math.PI) / 180;
+
+/** Angles are given to 0.1 degree. */
+export const roundAngle = (degrees: number) => Math.round(degrees * 10) / 10;

@@ -1,0 +1,39 @@
+/** A section's cross-section in whole millimetres: thickness is the face seen in a wall elevation. */
+export type SectionDimensions = { thickness: number; width: number };
+
+export type FrameContext = { sections: ReadonlyMap<number, SectionDimensions> };
+
+export type Point = { x: number; y: number };
+
+/** One physical piece before grouping; lengths are exact here and rounded when grouped. */
+export type FramePiece = {
+  /** Panel whose schedule lists the piece. */
+  panelIndex: number;
+  /** Panel whose drawing shows the piece (an opening's pieces are drawn on its wall). */
+  drawingPanelIndex: number;
+  /** Label without a number, e.g. "back wall stud". */
+  label: string;
+  /** 1-based position among pieces with the same label, left to right. */
+  number: number;
+  sectionId: number;
+  length: number;
+  /** Cut angle off square in degrees (0 or absent = square ends). */
+  angle?: number;
+  note?: string;
+  /** Outline in the panel's drawing, millimetres, y up. */
+  outline: Point[];
+};
+
+export type FrameItem = {
+  /** "<panel number>.<piece number>", the same number the drawing shows. */
+  mark: string;
+  panelIndex: number;
+  label: string;
+  sectionId: number;
+  length: number;
+  quantity: number;
+  angle?: number;
+  note?: string;
+};
+
+export type FrameItemsResult = { items: FrameItem[]; warnings: string[]; notice: string };
