@@ -1,0 +1,78 @@
+// Lower bounds on boards and cost for placing a given multiset of pieces.
+// Length bound: the boards must hold the pieces' total weight (largest boards first for a count,
+// cheapest per millimetre first, fractionally, for cost). LP bound: the Gilmore–Gomory pattern LP.
+
+import { solvePatternLp, type Pattern } from './column-generation';
+import type { Model } from './model';
+import type { PlanBound } from './types';
+
+const SLACK = 1e-6;
+
+export function lengthBound(model: Model, demand: number[], binsLeft: number[]): PlanBound {
+  let total = demand.reduce((s, n, i) => s + n * model.items[i].weight, 0);
+  if (total === 0) return { boards: 0, cost: 0, method: 'length' };
+  const kinds = model.bins.map((b, j) => ({ ...b, left: binsLeft[j] })).filter((b) => b.left > 0);
+  let boards = 0;
+  let need = total;
+  for (const b of [...kinds].sort((a, c) => c.capacity - a.capacity)) {
+    if (need <= 0) break;
+    const take = Math.min(b.left, Math.ceil(need / b.capacity));
+    boards += take;
+    need -= take * b.capacity;
+  }
+  let cost = 0;
+  for (const b of [...kinds].sort((a, c) => a.cost / a.capacity - c.cost / c.capacity || c.capacity - a.capacity)) {
+    if (total <= 0) break;
+    const amount = Math.min(total, b.left * b.capacity);
+    cost += (amount / b.capacity) * b.cost;
+    total -= amount;
+  }
+  return { boards, cost: floor6(cost), method: 'length' };
+}
+
+export interface LpBoundResult {
+  bound: PlanBound;
+  /** LP solution for the cost objective, used by the rounding heuristic. */
+  solution: { pattern: Pattern; x: number }[];
+  pool: Pattern[];
+}
+
+export function lpBound(
+  model: Model,
+  demand: number[],
+  binsLeft: number[],
+  opts: { maxPivots: number; shouldStop: () => boolean },
+): LpBoundResult | null {
+  const items = model.items.map((it, i) => ({ weight: it.weight, demand: demand[i] }));
+  const bins = model.bins.map((b, j) => ({ capacity: b.capacity, cost: b.cost, limit: binsLeft[j] }));
+  const lp = solvePatternLp(items, bins, opts);
+  if (!lp.converged || !lp.feasible) return null;
+  const costs = new Set(bins.map((b) => b.cost));
+  const uniformCost = costs.size === 1 ? bins[0].cost : 0;
+  let boards: number;
+  let cost = lp.value;
+  let pool = lp.pool;
+  if (uniformCost > 0) {
+    boards = Math.ceil(lp.value / uniformCost - SLACK);
+    cost = boards * uniformCost;
+  } else {
+    const unit = solvePatternLp(items, bins.map((b) => ({ ...b, cost: 1 })), { ...opts, pool });
+    if (!unit.converged || !unit.feasible) return null;
+    boards = Math.ceil(unit.value - SLACK);
+    pool = unit.pool;
+  }
+  return { bound: { boards, cost: floor6(cost - SLACK * Math.max(1, cost)), method: 'lp' }, solution: lp.solution, pool };
+}
+
+function floor6(x: number): number {
+  return Math.floor(x * 1e6 + 1e-9) / 1e6;
+}
+
+export function maxBound(a: PlanBound, b: PlanBound | null): PlanBound {
+  if (!b) return a;
+  return {
+    boards: Math.max(a.boards, b.boards),
+    cost: Math.max(a.cost, b.cost),
+    method: b.boards >= a.boards && b.cost >= a.cost ? b.method : a.method,
+  };
+}

@@ -1,0 +1,20 @@
+// Stopping rules. The search path is fixed by iteration caps, so the same job gives the same plan;
+// the wall clock (timeLimitMs) is only a safety stop, and a plan that hit it says so.
+
+export class SearchBudget {
+  private readonly deadline: number;
+  private readonly now: () => number;
+  timedOut = false;
+
+  constructor(timeLimitMs: number, now: () => number = () => performance.now()) {
+    this.now = now;
+    this.deadline = now() + timeLimitMs;
+  }
+
+  expired(): boolean {
+    if (!this.timedOut && this.now() > this.deadline) this.timedOut = true;
+    return this.timedOut;
+  }
+
+  readonly shouldStop = (): boolean => this.expired();
+}

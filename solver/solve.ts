@@ -1,0 +1,48 @@
+// The public entry point: validated job in, cheapest plan found plus its lower bound out.
+
+import { firstFitDecreasing, sequentialFill } from './greedy-fill';
+import { lengthBound, lpBound, maxBound } from './lower-bounds';
+import { buildModel, type Model } from './model';
+import { compareScores, scorePacking, type Packing } from './packing';
+import { buildPlan } from './plan-builder';
+import { SearchBudget } from './search-budget';
+import { improvePacking } from './improve';
+import type { PlanBound, SolveInput, SolvePlan } from './types';
+
+/** Iteration caps that fix the search path (see README, "Determinism"). */
+export const SEARCH_CAPS = { lpPivots: 20_000 };
+
+export function solve(input: SolveInput): SolvePlan {
+  const started = performance.now();
+  const budget = new SearchBudget(input.timeLimitMs);
+  const model = buildModel(input);
+  const demand = model.items.map((it) => it.count);
+  const limits = model.bins.map((b) => b.limit);
+
+  let best = sequentialFill(model, demand, limits);
+  const consider = (p: Packing | null) => {
+    if (p && compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
+  };
+  consider(firstFitDecreasing(model, demand, limits));
+
+  let bound = lengthBound(model, placedDemand(model, best), limits);
+  const allPlaced = best.unplaced.every((n) => n === 0);
+  if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
+    const lp = lpBound(model, demand, limits, { maxPivots: SEARCH_CAPS.lpPivots, shouldStop: budget.shouldStop });
+    bound = maxBound(bound, lp?.bound ?? null);
+    if (!meetsBound(model, best, bound)) {
+      consider(improvePacking(model, best, bound, lp, budget));
+    }
+  }
+  if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
+  return buildPlan(model, best, bound, { timeMs: Math.round(performance.now() - started), stoppedByTime: budget.timedOut });
+}
+
+function placedDemand(model: Model, p: Packing): number[] {
+  return model.items.map((it, i) => it.count - p.unplaced[i]);
+}
+
+export function meetsBound(model: Model, p: Packing, bound: PlanBound): boolean {
+  const cost = scorePacking(model, p).cost;
+  return cost <= bound.cost + 1e-5 * Math.max(1, cost);
+}
