@@ -1,0 +1,59 @@
+// The shapes a plan is stored in (plans.settings, plans.sections, plans.totals, plan_boards.pieces).
+// Reports, the plan page and the saw station read these; change them only with all three in mind.
+import type { SolveInput, SolvePlan } from '@/solver';
+
+/** Settings the plan was made with: the yard's, with the yard hand's overrides applied. */
+export type PlanSettings = {
+  kerfMm: number;
+  trimMm: number;
+  minOffcutMm: number;
+  useOffcuts: boolean;
+  /** Stock length ids the yard hand allowed; null means every active length. */
+  stockLengthIds: number[] | null;
+  timeLimitMs: number;
+};
+
+/** One section of a plan: exactly what the solver was given and what it returned. */
+export type PlanSection = {
+  sectionId: number;
+  sectionName: string;
+  input: SolveInput;
+  output: SolvePlan;
+};
+
+/** Figures over the whole plan, in mm and pence. */
+export type PlanTotals = {
+  boards: number;
+  stockBoards: number;
+  offcutsUsed: number;
+  materialMm: number;
+  pieceMm: number;
+  kerfMm: number;
+  scrapMm: number;
+  keptMm: number;
+  keptOffcuts: number;
+  yieldPercent: number;
+  /** New stock at yard prices. */
+  stockCostPence: number;
+  cuts: number;
+  lowerBoundBoards: number;
+  gapBoards: number;
+  unplacedPieces: number;
+  /** What a plain longest-first plan (first-fit decreasing, new stock only) would have used. */
+  baseline: { boards: number; stockCostPence: number; scrapMm: number };
+};
+
+/** One piece of a board in cut order; markMm is where the cut falls, from the squared end. */
+export type BoardPiece = { pieceId: string; jobItemId: number; label: string; lengthMm: number; markMm: number };
+
+/** Solver source ids: stock lengths and offcuts are told apart by prefix. */
+export const stockSourceId = (stockLengthId: number) => `S${stockLengthId}`;
+export const offcutSourceId = (offcutId: number) => `O${offcutId}`;
+export const pieceIdFor = (jobItemId: number) => `I${jobItemId}`;
+
+export function parseSourceId(sourceId: string): { kind: 'stock' | 'offcut'; id: number } {
+  const id = Number(sourceId.slice(1));
+  return { kind: sourceId.startsWith('O') ? 'offcut' : 'stock', id };
+}
+
+export const parsePieceId = (pieceId: string) => Number(pieceId.slice(1));
