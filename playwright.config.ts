@@ -1,9 +1,10 @@
 import { defineConfig, devices } from '@playwright/test';
 
 // Browser tests run against a production build on its own port with a fresh data folder.
-const PORT = 3107;
+// PW_PORT lets several worktrees run their browser tests side by side.
+const PORT = Number(process.env.PW_PORT ?? 3107);
 const baseURL = `http://127.0.0.1:${PORT}`;
-const dataDir = '.data-e2e';
+const dataDir = `.data-e2e-${PORT}`;
 
 export default defineConfig({
   testDir: './tests/e2e',
