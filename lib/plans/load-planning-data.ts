@@ -1,4 +1,3 @@
-import 'server-only';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { DbOrTx } from '@/db';
 import { jobItems, jobs, offcuts, sections, stockLengths } from '@/db/schema';
