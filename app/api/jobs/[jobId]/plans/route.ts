@@ -2,6 +2,7 @@
 import { NextResponse } from 'next/server';
 import { parseId, route } from '@/lib/api/route';
 import { AppError } from '@/lib/errors';
+import { getJobById } from '@/lib/jobs/get-job';
 import { createPlan } from '@/lib/plans/create-plan';
 import { createPlanBodySchema } from '@/lib/validations/plans';
 
@@ -17,4 +18,11 @@ export const POST = route<{ jobId: string }>('plans:create', async ({ req, user,
   const overrides = createPlanBodySchema.parse(raw);
   const plan = await createPlan({ jobId, overrides, userId: user.id });
   return NextResponse.json(plan, { status: 201 });
+});
+
+// GET /api/jobs/[jobId]/plans – the job's plans, newest first
+export const GET = route<{ jobId: string }>('plans:read', async ({ params }) => {
+  const jobId = parseId(params.jobId, 'That job');
+  const { job, plans } = await getJobById({ jobId });
+  return NextResponse.json({ jobId: job.id, plans });
 });

@@ -1,0 +1,25 @@
+'use client';
+
+import { cn } from '@/lib/cn';
+import { useDisplayUnit } from './display-unit';
+
+/** Switches how lengths are shown for this person: millimetres or feet-inches. */
+export function UnitToggle() {
+  const { unit, setUnit } = useDisplayUnit();
+  const option = (value: 'mm' | 'imperial', label: string) => (
+    <button
+      type="button"
+      aria-pressed={unit === value}
+      onClick={() => setUnit(value)}
+      className={cn('min-h-9 px-3 text-sm font-semibold', unit === value ? 'bg-spruce text-white' : 'bg-white text-bark hover:bg-shaving')}
+    >
+      {label}
+    </button>
+  );
+  return (
+    <div role="group" aria-label="Show lengths in" className="no-print inline-flex overflow-hidden rounded-lg border-2 border-grain">
+      {option('mm', 'mm')}
+      {option('imperial', 'ft-in')}
+    </div>
+  );
+}

@@ -1,0 +1,37 @@
+import 'server-only';
+import { and, asc, eq, gte, ilike, lte, or, sql, type SQL } from 'drizzle-orm';
+import { getDb } from '@/db';
+import { jobItems, jobs } from '@/db/schema';
+import type { ListJobsQuery } from '@/lib/validations/jobs';
+
+const like = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/** Jobs matching the office's filters, soonest due first (undated last), with piece counts. */
+export async function listJobs(query: ListJobsQuery = {}) {
+  const db = await getDb();
+  const where: SQL[] = [];
+  if (query.q) {
+    where.push(or(ilike(jobs.reference, like(query.q)), ilike(jobs.customerName, like(query.q)))!);
+  }
+  if (query.customer) where.push(ilike(jobs.customerName, like(query.customer)));
+  if (query.status) where.push(eq(jobs.status, query.status));
+  if (query.dueFrom) where.push(gte(jobs.dueDate, query.dueFrom));
+  if (query.dueTo) where.push(lte(jobs.dueDate, query.dueTo));
+  return db
+    .select({
+      id: jobs.id,
+      reference: jobs.reference,
+      customerName: jobs.customerName,
+      customerEmail: jobs.customerEmail,
+      dueDate: jobs.dueDate,
+      status: jobs.status,
+      itemCount: sql<number>`count(${jobItems.id})::int`,
+      pieceCount: sql<number>`coalesce(sum(${jobItems.quantity}), 0)::int`,
+    })
+    .from(jobs)
+    .leftJoin(jobItems, eq(jobItems.jobId, jobs.id))
+    .where(where.length ? and(...where) : undefined)
+    .groupBy(jobs.id)
+    .orderBy(sql`${jobs.dueDate} asc nulls last`, asc(jobs.reference));
+}
+export type JobListRow = Awaited<ReturnType<typeof listJobs>>[number];

@@ -1,0 +1,81 @@
+import { queryOptions } from '@tanstack/react-query';
+import type { JobStatus, PlanStatus } from '@/db/enums';
+import type { PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
+import { fetchJson } from './fetch-json';
+
+export type JobFilters = { q?: string; status?: JobStatus | ''; dueFrom?: string; dueTo?: string };
+
+export type JobListRow = {
+  id: number;
+  reference: string;
+  customerName: string;
+  customerEmail: string;
+  dueDate: string | null;
+  status: JobStatus;
+  itemCount: number;
+  pieceCount: number;
+};
+
+export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount'> & { notes: string; createdAt: string; updatedAt: string };
+
+export type JobItemRow = {
+  id: number;
+  sectionId: number;
+  sectionName: string;
+  sectionCode: string;
+  lengthMm: number;
+  quantity: number;
+  label: string;
+  note: string;
+  position: number;
+};
+
+export type JobPlanRow = {
+  id: number;
+  status: PlanStatus;
+  settings: PlanSettings;
+  totals: PlanTotals;
+  pricePence: number;
+  createdAt: string;
+  releasedAt: string | null;
+};
+
+export type JobDetail = { job: JobRecord; items: JobItemRow[]; plans: JobPlanRow[] };
+
+export const jobsQuery = (filters: JobFilters) =>
+  queryOptions({
+    queryKey: ['jobs', filters],
+    queryFn: () => {
+      const params = new URLSearchParams(Object.entries(filters).filter(([, v]) => v) as [string, string][]);
+      return fetchJson<{ jobs: JobListRow[] }>(`/api/jobs?${params}`).then((r) => r.jobs);
+    },
+  });
+
+export const jobQuery = (jobId: number) =>
+  queryOptions({ queryKey: ['job', jobId], queryFn: () => fetchJson<JobDetail>(`/api/jobs/${jobId}`) });
+
+export type JobDetailsBody = { customer?: string; reference?: string; dueDate?: string | null; customerEmail?: string; notes?: string; status?: 'cancelled' | 'draft' };
+
+export const createJobRequest = (body: JobDetailsBody) =>
+  fetchJson<{ job: JobRecord }>('/api/jobs', { method: 'POST', body: JSON.stringify(body) });
+
+export const updateJobRequest = (jobId: number, body: JobDetailsBody) =>
+  fetchJson<{ job: JobRecord }>(`/api/jobs/${jobId}`, { method: 'PATCH', body: JSON.stringify(body) });
+
+export type ItemBody = { sectionId?: number; length?: number | string; quantity?: number; label?: string; note?: string };
+
+export const addItemRequest = (jobId: number, body: ItemBody) =>
+  fetchJson(`/api/jobs/${jobId}/items`, { method: 'POST', body: JSON.stringify(body) });
+
+export const updateItemRequest = (jobId: number, itemId: number, body: ItemBody) =>
+  fetchJson(`/api/jobs/${jobId}/items/${itemId}`, { method: 'PATCH', body: JSON.stringify(body) });
+
+export const deleteItemRequest = (jobId: number, itemId: number) =>
+  fetchJson(`/api/jobs/${jobId}/items/${itemId}`, { method: 'DELETE' });
+
+export const importItemsRequest = (jobId: number, csvText: string, replace: boolean) =>
+  fetchJson<{ imported: number }>(`/api/jobs/${jobId}/items/import${replace ? '?replace=1' : ''}`, {
+    method: 'POST',
+    body: csvText,
+    headers: { 'content-type': 'text/csv' },
+  });

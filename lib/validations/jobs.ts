@@ -1,0 +1,74 @@
+import { z } from 'zod';
+import { JOB_STATUSES } from '@/db/enums';
+import { lengthInputSchema } from '@/lib/units/length-input-schema';
+
+const dueDate = z
+  .string()
+  .refine(isCalendarDate, 'Use a real date like 2026-12-24.');
+
+/** "2026-02-30" is refused: the date must exist, not only look right. */
+function isCalendarDate(text: string): boolean {
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(text)) return false;
+  const time = Date.parse(`${text}T00:00:00Z`);
+  return !Number.isNaN(time) && new Date(time).toISOString().startsWith(text);
+}
+const email = z.union([z.literal(''), z.string().trim().toLowerCase().email('Enter a valid e-mail address.')]);
+
+/** POST /api/jobs. The reference is generated (next J-number) when left out. */
+export const createJobBodySchema = z.object({
+  customer: z.string().trim().min(1, 'Enter the customer.').max(120),
+  reference: z.string().trim().max(40).optional().transform((v) => v || undefined),
+  dueDate: dueDate.nullable().optional(),
+  customerEmail: email.optional(),
+  notes: z.string().max(2000).optional(),
+});
+export type CreateJobBody = z.infer<typeof createJobBodySchema>;
+
+/** PATCH /api/jobs/[jobId]: edit details, cancel (status "cancelled") or reopen a cancelled job (status "draft"). */
+export const updateJobBodySchema = z
+  .object({
+    customer: z.string().trim().min(1, 'Enter the customer.').max(120),
+    reference: z.string().trim().min(1, 'Enter a reference.').max(40),
+    dueDate: dueDate.nullable(),
+    customerEmail: email,
+    notes: z.string().max(2000),
+    status: z.enum(['cancelled', 'draft'], { message: 'A job can only be cancelled or reopened here.' }),
+  })
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+export type UpdateJobBody = z.infer<typeof updateJobBodySchema>;
+
+/** GET /api/jobs query: search text (reference or customer), status, due date range. */
+export const listJobsQuerySchema = z.object({
+  q: z.string().trim().max(100).optional(),
+  customer: z.string().trim().max(120).optional(),
+  status: z.enum(JOB_STATUSES).optional(),
+  dueFrom: dueDate.optional(),
+  dueTo: dueDate.optional(),
+});
+export type ListJobsQuery = z.infer<typeof listJobsQuerySchema>;
+
+const quantity = z
+  .number({ message: 'Quantity must be a number.' })
+  .int('Quantity must be a whole number.')
+  .min(1, 'Quantity must be at least 1.')
+  .max(10_000, 'Quantity must be at most 10 000.');
+
+/** One line item from the editable table; length in mm or any notation lib/units reads. */
+export const jobItemBodySchema = z.object({
+  sectionId: z.number().int().positive('Choose a section.'),
+  length: lengthInputSchema,
+  quantity,
+  label: z.string().trim().max(100).default(''),
+  note: z.string().trim().max(500).default(''),
+});
+export type JobItemBody = z.input<typeof jobItemBodySchema>;
+
+export const updateJobItemBodySchema = jobItemBodySchema
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+
+/** Largest cut list the import accepts, in bytes. */
+export const MAX_IMPORT_BYTES = 5 * 1024 * 1024;
