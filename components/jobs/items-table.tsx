@@ -1,0 +1,94 @@
+'use client';
+
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { useDisplayUnit } from '@/components/units/display-unit';
+import { addItemRequest, deleteItemRequest, updateItemRequest, type ItemBody, type JobItemRow } from '@/lib/queries/jobs';
+import { sectionsQuery } from '@/lib/queries/sections';
+import { ItemRow } from './item-row';
+import { sumItemsPerSection } from './section-totals';
+
+const PAGE = 200;
+
+/** The job's cut list as an editable table, with pieces and running length per section. */
+export function ItemsTable({ jobId, items, editable }: { jobId: number; items: JobItemRow[]; editable: boolean }) {
+  const queryClient = useQueryClient();
+  const sections = useQuery(sectionsQuery());
+  const { format, suffix } = useDisplayUnit();
+  const [shown, setShown] = useState(PAGE);
+  const [error, setError] = useState<string | null>(null);
+  const refresh = () => queryClient.invalidateQueries({ queryKey: ['job', jobId] });
+  const mutate = useMutation({
+    mutationFn: (run: () => Promise<unknown>) => run(),
+    onMutate: () => setError(null),
+    onError: (e) => setError(e.message),
+    onSettled: refresh,
+  });
+  const run = (fn: () => Promise<unknown>) => mutate.mutateAsync(fn);
+  const totals = sumItemsPerSection(items);
+
+  return (
+    <div className="space-y-3">
+      {error && <Notice tone="error">{error}</Notice>}
+      <div className="overflow-x-auto">
+        <table className="w-full text-left" data-testid="items-table">
+          <thead className="bg-shaving text-sm">
+            <tr>
+              <th className="p-2">Section</th>
+              <th className="p-2 text-right">Length</th>
+              <th className="p-2 text-right">Qty</th>
+              <th className="p-2">Label</th>
+              <th className="p-2">Note</th>
+              <th className="p-2"><span className="sr-only">Actions</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            {items.slice(0, shown).map((item) => (
+              <ItemRow
+                key={item.id}
+                item={item}
+                sections={sections.data ?? []}
+                editable={editable}
+                onSave={(body: ItemBody) => run(() => updateItemRequest(jobId, item.id, body))}
+                onDelete={() => run(() => deleteItemRequest(jobId, item.id))}
+              />
+            ))}
+            {editable && sections.data && (
+              <ItemRow sections={sections.data} editable onSave={(body) => run(() => addItemRequest(jobId, body))} />
+            )}
+          </tbody>
+        </table>
+      </div>
+      {items.length > shown && (
+        <Button variant="secondary" onClick={() => setShown((n) => n + PAGE * 5)}>
+          Show more rows ({items.length - shown} not shown)
+        </Button>
+      )}
+      {totals.length > 0 && (
+        <table className="w-full max-w-2xl text-left text-sm" data-testid="section-totals">
+          <caption className="mb-1 text-left font-semibold">Totals per section</caption>
+          <thead>
+            <tr className="border-b-2 border-grain">
+              <th className="py-1">Section</th>
+              <th className="py-1 text-right">Rows</th>
+              <th className="py-1 text-right">Pieces</th>
+              <th className="py-1 text-right">Running length</th>
+            </tr>
+          </thead>
+          <tbody>
+            {totals.map((t) => (
+              <tr key={t.sectionId} className="border-b border-shaving">
+                <td className="py-1">{t.sectionName}</td>
+                <td className="py-1 text-right tabular-nums">{t.rows}</td>
+                <td className="py-1 text-right tabular-nums">{t.pieces}</td>
+                <td className="py-1 text-right tabular-nums">{format(t.lengthMm)}{suffix}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </div>
+  );
+}

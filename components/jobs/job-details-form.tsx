@@ -1,0 +1,68 @@
+'use client';
+
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Field } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/queries/fetch-json';
+import type { JobDetailsBody } from '@/lib/queries/jobs';
+
+type Values = { customer: string; reference: string; dueDate: string; customerEmail: string; notes: string };
+const fieldNames: (keyof Values)[] = ['customer', 'reference', 'dueDate', 'customerEmail', 'notes'];
+
+/** Customer, reference, due date, e-mail and notes: used to create a job and to edit one. */
+export function JobDetailsForm({
+  initial,
+  submitLabel,
+  onSubmit,
+  testId,
+}: {
+  initial?: Partial<Values>;
+  submitLabel: string;
+  onSubmit: (body: JobDetailsBody) => Promise<unknown>;
+  testId?: string;
+}) {
+  const [errors, setErrors] = useState<Partial<Record<keyof Values | 'form', string>>>({});
+  const [busy, setBusy] = useState(false);
+
+  async function submit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const data = new FormData(e.currentTarget);
+    const v = Object.fromEntries(fieldNames.map((k) => [k, String(data.get(k) ?? '')])) as Values;
+    setBusy(true);
+    setErrors({});
+    try {
+      await onSubmit({ customer: v.customer, reference: v.reference || undefined, dueDate: v.dueDate || null, customerEmail: v.customerEmail, notes: v.notes });
+    } catch (error) {
+      const issues = error instanceof ApiError ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+      setErrors({ form: (error as Error).message, ...Object.fromEntries(issues.map((i) => [i.path, i.message])) });
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  const input = (name: keyof Values, label: string, type = 'text', hint?: string) => (
+    <Field label={label} error={errors[name]} hint={hint}>
+      {(p) => <input {...p} name={name} type={type} defaultValue={initial?.[name] ?? ''} />}
+    </Field>
+  );
+  return (
+    <form onSubmit={submit} className="grid gap-4 sm:grid-cols-2" data-testid={testId} noValidate>
+      {input('customer', 'Customer')}
+      {input('reference', 'Reference', 'text', initial ? undefined : 'Leave empty for the next J-number.')}
+      {input('dueDate', 'Due date', 'date')}
+      {input('customerEmail', 'Customer e-mail', 'email')}
+      <div className="sm:col-span-2">
+        <Field label="Notes" error={errors.notes}>
+          {(p) => <textarea {...p} name="notes" rows={2} defaultValue={initial?.notes ?? ''} />}
+        </Field>
+      </div>
+      {errors.form && <Notice tone="error" className="sm:col-span-2">{errors.form}</Notice>}
+      <div className="sm:col-span-2">
+        <Button type="submit" disabled={busy}>
+          {busy ? 'Saving…' : submitLabel}
+        </Button>
+      </div>
+    </form>
+  );
+}

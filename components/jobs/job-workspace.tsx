@@ -1,0 +1,84 @@
+'use client';
+
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { UnitToggle } from '@/components/units/unit-toggle';
+import { jobQuery, updateJobRequest } from '@/lib/queries/jobs';
+import { CutListImport } from './cut-list-import';
+import { ItemsTable } from './items-table';
+import { JobDetailsForm } from './job-details-form';
+import { JobPlans } from './job-plans';
+import { JobStatusBadge } from './job-status-badge';
+
+/** Everything the yard hand does to one job: details, cut list, import, planning. */
+export function JobWorkspace({ jobId }: { jobId: number }) {
+  const queryClient = useQueryClient();
+  const job = useQuery(jobQuery(jobId));
+  const [editing, setEditing] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  if (job.isPending) return <p>Loading the job…</p>;
+  if (job.error) return <Notice tone="error">{job.error.message}</Notice>;
+  const { job: j, items, plans } = job.data;
+  const listEditable = j.status === 'draft' || j.status === 'planned';
+  const refresh = () => queryClient.invalidateQueries({ queryKey: ['job', jobId] });
+  const setStatus = async (status: 'cancelled' | 'draft') => {
+    setError(null);
+    await updateJobRequest(jobId, { status }).then(refresh, (e: Error) => setError(e.message));
+  };
+
+  return (
+    <div className="space-y-6">
+      <header className="flex flex-wrap items-end justify-between gap-4">
+        <div>
+          <h1 className="text-3xl font-bold tracking-tight">
+            {j.reference} <span className="font-normal text-bark-soft">· {j.customerName}</span>
+          </h1>
+          <p className="mt-1 flex items-center gap-3 text-bark-soft">
+            <JobStatusBadge status={j.status} /> Due {j.dueDate ?? 'not set'} {j.customerEmail && <>· {j.customerEmail}</>}
+          </p>
+        </div>
+        <div className="flex flex-wrap gap-2">
+          <UnitToggle />
+          <Button variant="secondary" onClick={() => setEditing((e) => !e)} aria-expanded={editing}>
+            {editing ? 'Close details' : 'Edit details'}
+          </Button>
+          {(j.status === 'draft' || j.status === 'planned') && <Button variant="danger" onClick={() => setStatus('cancelled')}>Cancel job</Button>}
+          {j.status === 'cancelled' && <Button variant="secondary" onClick={() => setStatus('draft')}>Reopen job</Button>}
+        </div>
+      </header>
+      {error && <Notice tone="error">{error}</Notice>}
+      {editing && (
+        <Card>
+          <JobDetailsForm
+            initial={{ customer: j.customerName, reference: j.reference, dueDate: j.dueDate ?? '', customerEmail: j.customerEmail, notes: j.notes }}
+            submitLabel="Save details"
+            onSubmit={async (body) => {
+              await updateJobRequest(jobId, body);
+              await refresh();
+              setEditing(false);
+            }}
+          />
+        </Card>
+      )}
+      {j.notes && !editing && <p className="text-bark-soft">{j.notes}</p>}
+      <Card>
+        <h2 className="mb-3 text-xl font-bold">Cut list</h2>
+        {!listEditable && <Notice tone="info" className="mb-3">The cut list is locked while the job is {j.status}.</Notice>}
+        <ItemsTable jobId={jobId} items={items} editable={listEditable} />
+      </Card>
+      {listEditable && (
+        <Card>
+          <h2 className="mb-3 text-xl font-bold">Import a cut list</h2>
+          <CutListImport jobId={jobId} />
+        </Card>
+      )}
+      <Card>
+        <h2 className="mb-3 text-xl font-bold">Plans</h2>
+        <JobPlans jobId={jobId} plans={plans} canPlan={listEditable && items.length > 0} />
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,83 @@
+'use client';
+
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import Link from 'next/link';
+import { useRouter } from 'next/navigation';
+import { useDeferredValue, useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { createJobRequest, jobsQuery, type JobFilters as Filters } from '@/lib/queries/jobs';
+import { JobDetailsForm } from './job-details-form';
+import { JobFilters } from './job-filters';
+import { JobStatusBadge } from './job-status-badge';
+
+/** The office's job list: filters, the table, and a form for a new job. */
+export function JobsBoard() {
+  const router = useRouter();
+  const [filters, setFilters] = useState<Filters>({});
+  const deferred = useDeferredValue(filters);
+  const jobs = useQuery({ ...jobsQuery(deferred), placeholderData: keepPreviousData });
+  const [creating, setCreating] = useState(false);
+
+  return (
+    <div className="space-y-6">
+      <div className="flex justify-end">
+        <Button onClick={() => setCreating((c) => !c)} variant={creating ? 'secondary' : 'primary'} aria-expanded={creating}>
+          {creating ? 'Close' : 'New job'}
+        </Button>
+      </div>
+      {creating && (
+        <Card>
+          <h2 className="mb-4 text-xl font-bold">New job</h2>
+          <JobDetailsForm
+            submitLabel="Create job"
+            testId="new-job-form"
+            onSubmit={async (body) => {
+              const { job } = await createJobRequest(body);
+              router.push(`/jobs/${job.id}`);
+            }}
+          />
+        </Card>
+      )}
+      <Card>
+        <JobFilters value={filters} onChange={setFilters} />
+        {jobs.error && <Notice tone="error">{jobs.error.message}</Notice>}
+        {jobs.isPending && <p>Loading jobs…</p>}
+        {jobs.data && jobs.data.length === 0 && <p className="py-4 text-bark-soft">No jobs match these filters.</p>}
+        {jobs.data && jobs.data.length > 0 && (
+          <div className="overflow-x-auto">
+            <table className="w-full text-left" data-testid="jobs-table">
+              <thead className="bg-shaving text-sm">
+                <tr>
+                  <th className="p-3">Reference</th>
+                  <th className="p-3">Customer</th>
+                  <th className="p-3">Due</th>
+                  <th className="p-3 text-right">Pieces</th>
+                  <th className="p-3">Status</th>
+                </tr>
+              </thead>
+              <tbody>
+                {jobs.data.map((job) => (
+                  <tr key={job.id} className="border-t border-shaving hover:bg-sawdust">
+                    <td className="p-3 font-semibold">
+                      <Link href={`/jobs/${job.id}`} className="text-spruce underline">
+                        {job.reference}
+                      </Link>
+                    </td>
+                    <td className="p-3">{job.customerName}</td>
+                    <td className="p-3 tabular-nums">{job.dueDate ?? '—'}</td>
+                    <td className="p-3 text-right tabular-nums">{job.pieceCount}</td>
+                    <td className="p-3">
+                      <JobStatusBadge status={job.status} />
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </Card>
+    </div>
+  );
+}

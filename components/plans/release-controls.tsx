@@ -1,0 +1,80 @@
+'use client';
+
+import { useQueryClient } from '@tanstack/react-query';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/queries/fetch-json';
+import { createPlanRequest, releasePlanRequest, unreleasePlanRequest, type PlanViewData } from '@/lib/queries/plans';
+
+type Taken = { id: number; tag: string; status: string };
+
+/** Release to the saw, or take back. A release that lost an offcut names it and offers a fresh plan. */
+export function ReleaseControls({ plan }: { plan: PlanViewData }) {
+  const queryClient = useQueryClient();
+  const router = useRouter();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const [taken, setTaken] = useState<Taken[]>([]);
+
+  async function act(request: () => Promise<unknown>) {
+    setBusy(true);
+    setError(null);
+    setTaken([]);
+    try {
+      await request();
+      await Promise.all([queryClient.invalidateQueries({ queryKey: ['plan', plan.id] }), queryClient.invalidateQueries({ queryKey: ['job', plan.jobId] })]);
+      router.refresh();
+    } catch (e) {
+      setError((e as Error).message);
+      if (e instanceof ApiError && e.status === 409) setTaken(((e.body as { details?: { offcuts?: Taken[] } })?.details?.offcuts) ?? []);
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  async function replan() {
+    setBusy(true);
+    try {
+      const { stockLengthIds, kerfMm, trimMm, minOffcutMm, useOffcuts, timeLimitMs } = plan.settings;
+      const next = await createPlanRequest(plan.jobId, { stockLengthIds, kerfMm, trimMm, minOffcutMm, useOffcuts, timeLimitMs });
+      router.push(`/plans/${next.id}`);
+    } catch (e) {
+      setError((e as Error).message);
+      setBusy(false);
+    }
+  }
+
+  return (
+    <div className="space-y-3" data-testid="release-controls">
+      <div className="flex flex-wrap gap-2">
+        {plan.status === 'planned' && (
+          <Button size="lg" disabled={busy} onClick={() => act(() => releasePlanRequest(plan.id))}>
+            Release to the saw
+          </Button>
+        )}
+        {plan.status === 'released' && (
+          <Button variant="secondary" disabled={busy} onClick={() => act(() => unreleasePlanRequest(plan.id))}>
+            Take back from the saw
+          </Button>
+        )}
+      </div>
+      {plan.status === 'released' && <Notice>Released to the saw{plan.releasedAt ? ` on ${new Date(plan.releasedAt).toLocaleString('en-GB')}` : ''}. Its offcuts are reserved.</Notice>}
+      {plan.status === 'superseded' && <Notice tone="warning">This plan was replaced by another plan of the job, or its cut list changed. Plan the job again to release it.</Notice>}
+      {error && (
+        <Notice tone="error" data-testid="release-error">
+          <p>{error}</p>
+          {taken.length > 0 && (
+            <>
+              <p className="mt-1">Taken from the rack since this plan was made: {taken.map((o) => `${o.tag} (${o.status})`).join(', ')}.</p>
+              <Button className="mt-2" variant="secondary" disabled={busy} onClick={replan}>
+                Plan again with what is on the rack now
+              </Button>
+            </>
+          )}
+        </Notice>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,83 @@
+'use client';
+
+import { useQuery } from '@tanstack/react-query';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Field } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { useFormatLength } from '@/components/units/display-unit';
+import { ApiError } from '@/lib/queries/fetch-json';
+import { createPlanRequest, type PlanViewData } from '@/lib/queries/plans';
+import { sectionsQuery } from '@/lib/queries/sections';
+
+/** Plan the job again with other settings; the new plan opens beside a link to compare with this one. */
+export function ReplanForm({ plan }: { plan: PlanViewData }) {
+  const router = useRouter();
+  const fmt = useFormatLength();
+  const sections = useQuery(sectionsQuery());
+  const [busy, setBusy] = useState(false);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const planSections = (sections.data ?? []).filter((s) => plan.sections.some((p) => p.sectionId === s.id));
+  const allowed = plan.settings.stockLengthIds;
+
+  async function submit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const data = new FormData(e.currentTarget);
+    const ids = data.getAll('stockLengthId').map(Number);
+    const everyLength = planSections.flatMap((s) => s.stockLengths).length;
+    setBusy(true);
+    setErrors({});
+    try {
+      const next = await createPlanRequest(plan.jobId, {
+        kerfMm: Number(data.get('kerfMm')),
+        trimMm: Number(data.get('trimMm')),
+        minOffcutMm: Number(data.get('minOffcutMm')),
+        useOffcuts: data.get('useOffcuts') === 'on',
+        timeLimitMs: Math.round(Number(data.get('seconds')) * 1000),
+        stockLengthIds: ids.length === everyLength ? null : ids,
+      });
+      router.push(`/plans/${next.id}?previous=${plan.id}`);
+    } catch (error) {
+      const issues = error instanceof ApiError ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+      setErrors({ form: (error as Error).message, ...Object.fromEntries(issues.map((i) => [i.path, i.message])) });
+      setBusy(false);
+    }
+  }
+
+  const number = (name: string, label: string, value: number, step = 1) => (
+    <Field label={label} error={errors[name]}>
+      {(p) => <input {...p} name={name} type="number" min={0} step={step} defaultValue={value} />}
+    </Field>
+  );
+  return (
+    <form onSubmit={submit} className="space-y-4" data-testid="replan-form">
+      <div className="grid gap-3 sm:grid-cols-4">
+        {number('kerfMm', 'Kerf (mm)', plan.settings.kerfMm)}
+        {number('trimMm', 'End trim (mm)', plan.settings.trimMm)}
+        {number('minOffcutMm', 'Keep offcuts from (mm)', plan.settings.minOffcutMm)}
+        {number('seconds', 'Search time (s)', plan.settings.timeLimitMs / 1000, 0.5)}
+      </div>
+      <label className="flex items-center gap-2">
+        <input type="checkbox" name="useOffcuts" defaultChecked={plan.settings.useOffcuts} className="h-5 w-5" /> Use offcuts from the rack
+      </label>
+      {planSections.map((s) => (
+        <fieldset key={s.id}>
+          <legend className="text-sm font-semibold">{s.name}: stock lengths allowed</legend>
+          <div className="mt-1 flex flex-wrap gap-3">
+            {s.stockLengths.map((l) => (
+              <label key={l.id} className="flex items-center gap-1 text-sm">
+                <input type="checkbox" name="stockLengthId" value={l.id} defaultChecked={!allowed || allowed.includes(l.id)} className="h-5 w-5" />
+                {fmt(l.lengthMm)}
+              </label>
+            ))}
+          </div>
+        </fieldset>
+      ))}
+      {errors.form && <Notice tone="error">{errors.form}</Notice>}
+      <Button type="submit" variant="secondary" disabled={busy}>
+        {busy ? 'Planning…' : 'Plan again with these settings'}
+      </Button>
+    </form>
+  );
+}
