@@ -5,6 +5,10 @@ import { defineConfig, devices } from '@playwright/test';
 const PORT = Number(process.env.PW_PORT ?? 3107);
 const baseURL = `http://127.0.0.1:${PORT}`;
 const dataDir = `.data-e2e-${PORT}`;
+// The mail catcher listens for SMTP 500 below the app's port (3141 → 2641) unless PW_SMTP_PORT says
+// otherwise, and lists caught mail over HTTP 10 000 above its SMTP port.
+const SMTP_PORT = Number(process.env.PW_SMTP_PORT ?? PORT - 500);
+const MAIL_CATCHER_URL = `http://127.0.0.1:${SMTP_PORT + 10_000}`;
 
 export default defineConfig({
   testDir: './tests/e2e',
@@ -32,17 +36,27 @@ export default defineConfig({
     },
   },
   projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'], channel: undefined } }],
-  webServer: {
-    command: `rm -rf ${dataDir} ${dataDir}.lock && npx next build && npx next start -p ${PORT} -H 127.0.0.1`,
-    url: `${baseURL}/api/health`,
-    timeout: 300_000,
-    reuseExistingServer: false,
-    env: {
-      KERFWISE_DATA_DIR: dataDir,
-      NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-use',
-      NEXTAUTH_URL: baseURL,
-      NEXT_TELEMETRY_DISABLED: '1',
-      KERFWISE_SMTP_PORT: '2626',
+  webServer: [
+    {
+      command: 'npx tsx scripts/mail-catcher.ts',
+      url: `${MAIL_CATCHER_URL}/health`,
+      timeout: 60_000,
+      reuseExistingServer: false,
+      env: { KERFWISE_SMTP_PORT: String(SMTP_PORT), KERFWISE_MAIL_CATCHER_URL: MAIL_CATCHER_URL },
     },
-  },
+    {
+      command: `rm -rf ${dataDir} ${dataDir}.lock && npx next build && npx next start -p ${PORT} -H 127.0.0.1`,
+      url: `${baseURL}/api/health`,
+      timeout: 300_000,
+      reuseExistingServer: false,
+      env: {
+        KERFWISE_DATA_DIR: dataDir,
+        NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-use',
+        NEXTAUTH_URL: baseURL,
+        NEXT_TELEMETRY_DISABLED: '1',
+        KERFWISE_SMTP_PORT: String(SMTP_PORT),
+        KERFWISE_MAIL_CATCHER_URL: MAIL_CATCHER_URL,
+      },
+    },
+  ],
 });

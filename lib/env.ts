@@ -9,6 +9,8 @@ const envSchema = z.object({
   KERFWISE_SMTP_HOST: z.string().default('127.0.0.1'),
   KERFWISE_SMTP_PORT: z.coerce.number().int().positive().default(2525),
   KERFWISE_MAIL_FROM: z.string().default('Kerfwise <cutting@yard.test>'),
+  // Development and tests: the local mail catcher's HTTP address, so the outbox can show caught mail.
+  KERFWISE_MAIL_CATCHER_URL: z.string().url().optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
 });
 

@@ -1,10 +1,26 @@
-// `npm run dev`: makes sure a sign-in secret exists, then serves Kerfwise on http://localhost:3000.
-// The database is migrated and the demo yard seeded by the server itself on first request.
+// `npm run dev`: makes sure a sign-in secret exists, starts the local mail catcher, then serves
+// Kerfwise on http://localhost:3000. The database is migrated and the demo yard seeded by the server
+// itself on first request.
 import { spawn } from 'node:child_process';
+import { getEnv } from '../lib/env';
+import { catcherHttpPort } from '../lib/mail/mail-catcher';
 import { ensureLocalSecret } from './ensure-secret';
 
 ensureLocalSecret();
 
-const next = spawn('npx', ['next', 'dev', ...process.argv.slice(2)], { stdio: 'inherit' });
-next.on('exit', (code) => process.exit(code ?? 0));
-for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => next.kill(signal));
+const smtpPort = getEnv().KERFWISE_SMTP_PORT;
+const catcherUrl = getEnv().KERFWISE_MAIL_CATCHER_URL ?? `http://127.0.0.1:${catcherHttpPort(smtpPort)}`;
+const env = { ...process.env, KERFWISE_MAIL_CATCHER_URL: catcherUrl };
+
+const catcher = spawn('npx', ['tsx', 'scripts/mail-catcher.ts'], { stdio: 'inherit', env });
+const next = spawn('npx', ['next', 'dev', ...process.argv.slice(2)], { stdio: 'inherit', env });
+next.on('exit', (code) => {
+  catcher.kill('SIGTERM');
+  process.exit(code ?? 0);
+});
+for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  process.on(signal, () => {
+    catcher.kill(signal);
+    next.kill(signal);
+  });
+}

@@ -1,0 +1,37 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { AccessDenied } from '@/components/layout/access-denied';
+import { CaughtMailList } from '@/components/mail/caught-mail-list';
+import { SentMailTable } from '@/components/mail/sent-mail-table';
+import { Card } from '@/components/ui/field';
+import { PageHeader } from '@/components/ui/page-header';
+import { requirePageUser } from '@/lib/auth/page-user';
+import { can } from '@/lib/auth/permissions';
+import { listCaughtMail, listSentMail } from '@/lib/mail/list-outbox';
+
+export const metadata: Metadata = { title: 'Outbox' };
+export const dynamic = 'force-dynamic';
+
+export default async function OutboxPage() {
+  const user = await requirePageUser();
+  if (!can(user.role, 'mail:outbox')) return <AccessDenied />;
+  const [sent, caught] = await Promise.all([listSentMail(), listCaughtMail()]);
+  return (
+    <>
+      <PageHeader title="Outbox" lead="Cut sheets and quotes the yard has e-mailed, and whether the mail server took them." />
+      <div className="space-y-6">
+        <Card className="overflow-x-auto p-0">
+          <SentMailTable rows={sent} />
+        </Card>
+        {caught && (
+          <Card>
+            <h2 className="mb-3 text-xl font-bold">Caught by the local mail catcher</h2>
+            <p className="mb-3 text-sm text-bark-soft">In development nothing leaves this machine: messages land here instead of in the customer&apos;s inbox.</p>
+            <CaughtMailList messages={caught} />
+          </Card>
+        )}
+        <p className="text-sm"><Link href="/jobs" className="text-spruce underline">Back to jobs</Link></p>
+      </div>
+    </>
+  );
+}

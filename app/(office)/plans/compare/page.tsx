@@ -1,0 +1,25 @@
+import type { Metadata } from 'next';
+import { AccessDenied } from '@/components/layout/access-denied';
+import { PlanCompare } from '@/components/plans/plan-compare';
+import { Notice } from '@/components/ui/notice';
+import { PageHeader } from '@/components/ui/page-header';
+import { DisplayUnitProvider } from '@/components/units/display-unit';
+import { requirePageUser } from '@/lib/auth/page-user';
+import { can } from '@/lib/auth/permissions';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
+
+export const metadata: Metadata = { title: 'Compare plans' };
+
+export default async function ComparePlansPage({ searchParams }: { searchParams: Promise<{ a?: string; b?: string }> }) {
+  const user = await requirePageUser();
+  if (!can(user.role, 'plans:read')) return <AccessDenied />;
+  const [{ a, b }, yard] = await Promise.all([searchParams, getYardSettings()]);
+  const ids = [Number(a), Number(b)];
+  const valid = ids.every((id) => Number.isSafeInteger(id) && id > 0);
+  return (
+    <DisplayUnitProvider yardUnit={yard.displayUnit}>
+      <PageHeader title="Compare plans" lead="Two plans side by side; the better figure in each row is in bold." />
+      {valid ? <PlanCompare ids={ids as [number, number]} /> : <Notice tone="warning">Choose two plans to compare from a job page.</Notice>}
+    </DisplayUnitProvider>
+  );
+}

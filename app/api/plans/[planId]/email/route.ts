@@ -1,0 +1,11 @@
+// POST /api/plans/[planId]/email – e-mail the cut sheet (PDF) and quote to the customer; 503 if the mail server refuses
+import { NextResponse } from 'next/server';
+import { parseId, parseJsonBody, route } from '@/lib/api/route';
+import { emailCutSheet } from '@/lib/cut-sheets/email-cut-sheet';
+import { emailCutSheetBodySchema } from '@/lib/validations/mail';
+
+export const POST = route<{ planId: string }>('mail:send', async ({ req, params }) => {
+  const planId = parseId(params.planId, 'That plan');
+  const body = await parseJsonBody(req, emailCutSheetBodySchema);
+  return NextResponse.json(await emailCutSheet({ planId, ...body }));
+});
