@@ -2,6 +2,7 @@
 // optionally as JSON files), and lists caught mail over HTTP. Never used in production.
 import { mkdirSync, writeFileSync } from 'node:fs';
 import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
@@ -60,6 +61,8 @@ export async function startMailCatcher({ smtpPort, httpPort, host = '127.0.0.1',
     });
   }
   return {
+    /** The SMTP port actually listened on (useful when started on port 0). */
+    smtpPort: (smtp.server.address() as AddressInfo).port,
     messages: () => [...caught],
     close: async () => {
       await new Promise<void>((resolve) => smtp.close(() => resolve()));
