@@ -3,8 +3,8 @@ import { asc } from 'drizzle-orm';
 import { getDb, type DbOrTx } from '@/db';
 import { sections } from '@/db/schema';
 import type { SectionDimensions } from '@/lib/frames';
+import type { FrameSectionOption } from './frame-section-option';
 
-export type FrameSectionOption = { id: number; name: string; thickness: number; width: number; active: boolean };
 
 /** The yard's sections with the sizes the frame geometry needs, for the editor and the server checks. */
 export async function getYardFrameSections({ db }: { db?: DbOrTx } = {}) {

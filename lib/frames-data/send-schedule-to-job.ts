@@ -35,7 +35,7 @@ export async function sendScheduleToJob({ scheduleId, body, userId }: { schedule
 
   return db.transaction(async (tx) => {
     let jobId: number;
-    if ('jobId' in body) {
+    if (body.jobId !== undefined) {
       const [job] = await tx.select({ id: jobs.id, status: jobs.status, reference: jobs.reference }).from(jobs).where(eq(jobs.id, body.jobId));
       if (!job) throw notFound('That job');
       if (!(OPEN_STATUSES as readonly string[]).includes(job.status))
@@ -45,15 +45,16 @@ export async function sendScheduleToJob({ scheduleId, body, userId }: { schedule
         await tx.update(plans).set({ status: 'superseded' }).where(and(eq(plans.jobId, jobId), inArray(plans.status, ['planned'])));
       await tx.update(jobs).set({ frameScheduleId: scheduleId, status: 'draft', updatedAt: new Date() }).where(eq(jobs.id, jobId));
     } else {
-      const reference = body.newJob.reference || (await nextJobReference(tx));
+      const newJob = body.newJob!; // the body schema allows exactly one of jobId and newJob
+      const reference = newJob.reference || (await nextJobReference(tx));
       const [taken] = await tx.select({ id: jobs.id }).from(jobs).where(eq(jobs.reference, reference));
       if (taken) throw new AppError('conflict', `There is already a job ${reference}; choose another reference.`);
       const [job] = await tx
         .insert(jobs)
         .values({
           reference,
-          customerName: body.newJob.customerName,
-          dueDate: body.newJob.dueDate || null,
+          customerName: newJob.customerName,
+          dueDate: newJob.dueDate || null,
           notes: `Cut list from frame schedule "${schedule.name}".`,
           frameScheduleId: scheduleId,
           createdBy: userId,

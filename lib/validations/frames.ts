@@ -23,24 +23,25 @@ export type SaveFrameScheduleBody = z.output<typeof saveFrameScheduleBodySchema>
 
 const dueDateSchema = z.iso.date({ error: 'Due date must be a date like 2026-12-01' });
 
-/** Send a schedule's cut list to an existing draft or planned job, or to a new job. */
-export const sendScheduleToJobBodySchema = z.union(
-  [
-    z.object({ jobId: z.number({ error: 'Choose a job' }).int().positive({ error: 'Choose a job' }) }).strict(),
-    z
+/** Send a schedule's cut list to an existing draft or planned job ({ jobId }), or to a new job ({ newJob }). */
+export const sendScheduleToJobBodySchema = z
+  .object({
+    jobId: z.number({ error: 'Choose a job' }).int({ error: 'Choose a job' }).positive({ error: 'Choose a job' }).optional(),
+    newJob: z
       .object({
-        newJob: z.object({
-          customerName: z
-            .string({ error: 'Give the customer name' })
-            .trim()
-            .min(1, { error: 'Give the customer name' })
-            .max(120, { error: 'Customer name must be at most 120 characters' }),
-          reference: z.string().trim().max(40, { error: 'Reference must be at most 40 characters' }).optional(),
-          dueDate: z.union([dueDateSchema, z.literal('')]).optional(),
-        }),
+        customerName: z
+          .string({ error: 'Give the customer name' })
+          .trim()
+          .min(1, { error: 'Give the customer name' })
+          .max(120, { error: 'Customer name must be at most 120 characters' }),
+        reference: z.string().trim().max(40, { error: 'Reference must be at most 40 characters' }).optional(),
+        dueDate: z.union([dueDateSchema, z.literal('')]).optional(),
       })
-      .strict(),
-  ],
-  { error: 'Send to an existing job ({ jobId }) or a new one ({ newJob: { customerName } })' },
-);
+      .optional(),
+  })
+  .strict()
+  .refine((body) => (body.jobId === undefined) !== (body.newJob === undefined), {
+    error: 'Send to an existing job or to a new one (one of the two)',
+    path: ['jobId'],
+  });
 export type SendScheduleToJobBody = z.output<typeof sendScheduleToJobBodySchema>;
