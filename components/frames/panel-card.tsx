@@ -5,6 +5,7 @@ import { Card } from '@/components/ui/field';
 import type { PanelLayout } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
 import type { FrameUnit } from '@/lib/queries/frames';
+import { formatLength } from '@/lib/units';
 import { PanelElevation } from './panel-elevation';
 import type { PanelDraft } from './panel-draft';
 import { KIND_NAMES } from './panel-fields';
@@ -44,7 +45,10 @@ export function PanelCard({ index, count, draft, layout, onMove, onRemove, ...fo
         <PanelForm draft={draft} {...form} onChange={form.onChange} />
         <div className="min-h-40 rounded-lg border border-shaving bg-sawdust p-2">
           {layout && layout.shapes.length > 0 ? (
-            <PanelElevation layout={layout} className="h-auto max-h-96 w-full" />
+            <PanelElevation
+              layout={{ ...layout, dimensions: layout.dimensions.map((d) => ({ ...d, text: formatLength(d.value, form.unit) })) }}
+              className="h-auto max-h-[28rem] w-full"
+            />
           ) : (
             <p className="p-4 text-sm text-bark-soft">
               {draft.kind === 'opening'

@@ -70,7 +70,7 @@ export function PanelForm({ draft, drafts, sections, unit, errors, onChange }: P
   return (
     <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
       <div className="col-span-2 sm:col-span-3">
-        <Field label="Panel name" error={errors.name} hint="Says where its pieces go, e.g. back wall">
+        <Field label="Panel name" error={errors.name} hint="Names its pieces: “back wall stud 4”">
           {(p) => <input {...p} value={draft.name} onChange={(e) => onChange({ ...draft, name: e.target.value })} autoComplete="off" />}
         </Field>
       </div>

@@ -15,7 +15,7 @@ function leanToPanels(section: (code: string) => number): FrameSchedulePanelInpu
     { kind: 'sloped_wall', id: 'right', name: 'right side', sectionId: stud, length: 1500, lowHeight: 1900, highHeight: 2200, centres: 400 },
     { kind: 'opening', id: 'door', name: 'side door', wallId: 'right', position: 450, width: 700, height: 1650 },
     { kind: 'door_leaf', id: 'leaf', name: 'door', sectionId: section('P18094'), boardSectionId: section('TG19125'), openingId: 'door', boardCover: 110 },
-    { kind: 'roof', id: 'roof', name: 'roof', sectionId: section('T47150'), span: 1500, rise: 300, centres: 400, length: 2400, eavesOverhang: 150, sideOverhang: 50 },
+    { kind: 'roof', id: 'roof', name: 'roof', sectionId: section('T47150'), span: 1500, rise: 300, centres: 400, length: 2400, eavesOverhang: 150 },
     { kind: 'cladding', id: 'clad-front', name: 'front cladding', sectionId: section('SHP19125'), wallId: 'front', cover: 110 },
   ];
 }
