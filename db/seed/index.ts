@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import type { PgliteDatabase } from 'drizzle-orm/pglite';
 import { hashPassword } from '@/lib/auth/password';
 import * as schema from '../schema';
+import { seedDemoPlans } from './demo-plans';
 import {
   DEMO_PASSWORD,
   demoJobItems,
@@ -24,7 +25,7 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const random = seededRandom(20261201);
 
-  await db.transaction(async (tx) => {
+  const handId = await db.transaction(async (tx) => {
     const users = await tx
       .insert(schema.users)
       .values(demoUsers.map((u) => ({ ...u, passwordHash })))
@@ -114,6 +115,8 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       );
     }
     await seedDemoFrameSchedules(tx, { sectionIds, userId: users.find((u) => u.role === 'yard_hand')!.id });
+    return users.find((u) => u.role === 'yard_hand')!.id;
   });
+  await seedDemoPlans(db, handId);
   return true;
 }
