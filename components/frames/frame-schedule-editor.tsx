@@ -45,6 +45,8 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
   const remove = useMutation({ mutationFn: () => deleteFrameScheduleRequest(schedule.id), onSuccess: () => router.push('/frames') });
   const dirty = bodyKey !== savedKey;
 
+  // A new first panel starts on a framing size rather than whatever sorts first.
+  const framingSectionId = (sections.find((s) => s.thickness >= 38 && s.width >= 75) ?? sections[0])?.id;
   const dimensions = useMemo(() => new Map<number, SectionDimensions>(sections.map((s) => [s.id, { thickness: s.thickness, width: s.width }])), [sections]);
   const layouts = useMemo(() => {
     const panels = preview.data?.panels ?? [];
@@ -99,7 +101,7 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
             onRemove={() => setDrafts((ds) => ds.filter((_, k) => k !== index))}
           />
         ))}
-        <AddPanelBar onAdd={(kind) => setDrafts((ds) => [...ds, newPanelDraft(kind, ds, sections[0]?.id, details.unit)])} />
+        <AddPanelBar onAdd={(kind) => setDrafts((ds) => [...ds, newPanelDraft(kind, ds, framingSectionId, details.unit)])} />
       </section>
 
       <Card className="space-y-3" data-testid="cut-list">

@@ -4,7 +4,8 @@ import { POST as create } from '@/app/api/frames/route';
 import { POST as preview } from '@/app/api/frames/preview/route';
 import { DELETE as remove } from '@/app/api/frames/[scheduleId]/route';
 import { POST as send } from '@/app/api/frames/[scheduleId]/send-to-job/route';
-import { jobItems, jobs } from '@/db/schema';
+import { POST as plan } from '@/app/api/jobs/[jobId]/plans/route';
+import { jobItems, jobs, plans } from '@/db/schema';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 import { leanToPanels, sectionIdOf } from './helpers';
@@ -54,8 +55,18 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
     expect(items.find((i) => i.label === 'front wall stud')?.angleTenths).toBeNull();
   });
 
+  it('a job made from a schedule plans with every piece on a board', async () => {
+    const { jobId } = (await sendTo({ newJob: { customerName: 'Nell Ashdown' } })).json;
+    const planned = await call(plan, { method: 'POST', params: { jobId: String(jobId) }, body: {} });
+    expect(planned.status).toBe(201);
+    const items = await t.db.select().from(jobItems).where(eq(jobItems.jobId, jobId));
+    const onBoards = planned.json.boards.flatMap((b: { pieces: { jobItemId: number }[] }) => b.pieces.map((p) => p.jobItemId));
+    for (const item of items) expect(onBoards.filter((id: number) => id === item.id)).toHaveLength(item.quantity);
+  });
+
   it('adds to an existing draft job, after its own items', async () => {
-    const [draft] = await t.db.select().from(jobs).where(eq(jobs.reference, 'J-1002'));
+    const [draft] = await t.db.select().from(jobs).where(eq(jobs.reference, 'J-1001'));
+    expect(draft.status).toBe('draft');
     const before = await t.db.select().from(jobItems).where(eq(jobItems.jobId, draft.id));
     const res = await sendTo({ jobId: draft.id });
     expect(res.status).toBe(201);
@@ -66,14 +77,27 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
     expect((await t.db.select().from(jobs).where(eq(jobs.id, draft.id)))[0].frameScheduleId).toBe(scheduleId);
   });
 
+  it('sends to a planned job, which goes back to draft because its plan no longer covers every piece', async () => {
+    const [job] = await t.db.select().from(jobs).where(eq(jobs.reference, 'J-1003'));
+    expect(job.status).toBe('planned');
+    expect((await sendTo({ jobId: job.id })).status).toBe(201);
+    expect((await t.db.select().from(jobs).where(eq(jobs.id, job.id)))[0].status).toBe('draft');
+    const jobPlans = await t.db.select().from(plans).where(eq(plans.jobId, job.id));
+    expect(jobPlans.map((p) => p.status)).toEqual(jobPlans.map(() => 'superseded'));
+  });
+
   it('changes nothing for an unknown job, a cancelled job, a taken reference or a bad body', async () => {
     const start = await countRows();
     expect((await sendTo({ jobId: 9999 })).status).toBe(404);
     const [cancelled] = await t.db.select().from(jobs).where(eq(jobs.reference, 'J-1004'));
     expect((await sendTo({ jobId: cancelled.id })).status).toBe(409);
+    const [released] = await t.db.select().from(jobs).where(eq(jobs.reference, 'J-1002'));
+    expect((await sendTo({ jobId: released.id })).status).toBe(409);
     expect((await sendTo({ newJob: { customerName: 'X', reference: 'J-1001' } })).status).toBe(409);
     const bad = await sendTo({ newJob: { customerName: '', dueDate: 'Friday' } });
     expect(bad.status).toBe(422);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['newJob.customerName', 'newJob.dueDate']);
+    expect((await sendTo({ jobId: 1, newJob: { customerName: 'X' } })).status).toBe(422);
     expect((await sendTo({ newJob: { customerName: 'X' } }, 9999)).status).toBe(404);
     expect(await countRows()).toEqual(start);
     expect((await t.db.select().from(jobs).where(eq(jobs.id, cancelled.id)))[0].frameScheduleId).toBeNull();
