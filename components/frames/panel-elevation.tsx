@@ -15,8 +15,8 @@ export function PanelElevation({
   const viewBox = `${minX - MARGIN} ${-MARGIN} ${maxX - minX + 2 * MARGIN} ${maxY - minY + 2 * MARGIN}`;
   // Text grows with the drawing so marks stay readable when a large panel is drawn small.
   const extent = Math.max(maxX - minX, maxY - minY);
-  const markSize = Math.max(60, extent / 45);
-  const dimensionSize = Math.max(70, extent / 30);
+  const markSize = Math.max(60, extent / 32);
+  const dimensionSize = Math.max(70, extent / 24);
   return (
     <svg
       viewBox={viewBox}
