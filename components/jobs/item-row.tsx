@@ -13,10 +13,12 @@ type Props = {
   editable: boolean;
   onSave: (body: ItemBody) => Promise<unknown>;
   onDelete?: () => Promise<unknown>;
+  /** Section a new row starts with: the last row's, so a list of one section is quick to type. */
+  defaultSectionId?: number;
 };
 
 /** One line item: read-only text, or inputs while editing. Without an item it is the "add a row" form. */
-export function ItemRow({ item, sections, editable, onSave, onDelete }: Props) {
+export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSectionId }: Props) {
   const { format, suffix } = useDisplayUnit();
   const [editing, setEditing] = useState(!item);
   const [busy, setBusy] = useState(false);
@@ -71,7 +73,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete }: Props) {
     <tr className="border-t border-shaving bg-sawdust" data-testid={item ? 'item-row-editing' : 'new-item-row'}>
       <td className="p-2">
         <form id={formId} onSubmit={save} />
-        <select form={formId} name="sectionId" aria-label={`Section, ${name}`} className={inputClass} defaultValue={item?.sectionId ?? sections[0]?.id}>
+        <select form={formId} name="sectionId" aria-label={`Section, ${name}`} className={inputClass} defaultValue={item?.sectionId ?? defaultSectionId ?? sections[0]?.id}>
           {sections.map((s) => (
             <option key={s.id} value={s.id}>{s.name}</option>
           ))}

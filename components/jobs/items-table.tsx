@@ -56,7 +56,7 @@ export function ItemsTable({ jobId, items, editable }: { jobId: number; items: J
               />
             ))}
             {editable && sections.data && (
-              <ItemRow sections={sections.data} editable onSave={(body) => run(() => addItemRequest(jobId, body))} />
+              <ItemRow sections={sections.data} editable defaultSectionId={items.at(-1)?.sectionId} onSave={(body) => run(() => addItemRequest(jobId, body))} />
             )}
           </tbody>
         </table>

@@ -11,7 +11,6 @@ export const officeNav: NavItem[] = [
   { href: '/stock', label: 'Stock', roles: ['owner', 'yard_hand'] },
   { href: '/reports', label: 'Reports', roles: ['owner'] },
   { href: '/saw', label: 'Saw queue', roles: ['owner', 'saw_operator'] },
-  { href: '/outbox', label: 'Outbox', roles: ['owner'] },
   { href: '/users', label: 'Users', roles: ['owner'] },
   { href: '/settings', label: 'Yard settings', roles: ['owner'] },
 ];

@@ -47,7 +47,7 @@ export function CutSheet({ plan, job, yardName, offcutTags }: { plan: PlanViewDa
       })}
       <DiagramLegend />
       {plan.price && (
-        <table className="w-full max-w-xl text-left break-inside-avoid">
+        <table className="w-full max-w-3xl text-left break-inside-avoid">
           <caption className="text-left text-xl font-bold">Quote</caption>
           <tbody>
             {plan.price.lines.map((l, i) => (

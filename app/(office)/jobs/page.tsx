@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { JobsBoard } from '@/components/jobs/jobs-board';
 import { AccessDenied } from '@/components/layout/access-denied';
 import { PageHeader } from '@/components/ui/page-header';
@@ -12,7 +13,11 @@ export default async function JobsPage() {
   if (!can(user.role, 'jobs:edit')) return <AccessDenied />;
   return (
     <>
-      <PageHeader title="Jobs" lead="Customer cut lists, soonest due first." />
+      <PageHeader
+        title="Jobs"
+        lead="Customer cut lists, soonest due first."
+        actions={can(user.role, 'mail:outbox') ? <Link href="/outbox" className="font-semibold text-spruce underline">Outbox: sent cut sheets</Link> : undefined}
+      />
       <JobsBoard />
     </>
   );
