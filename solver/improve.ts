@@ -1,13 +1,22 @@
-// Improvement stage, run only when the first plan does not meet the lower bound.
+// Improvement stage, run only when the first plan does not meet the lower bound. With one board
+// kind: a short bin completion towards the bound first. Then LP rounding with residual repair,
+// and (one board kind) pool-based repacking of the rounded plan, then of the best plan.
 
+import { packIntoTarget, type CompletionCaps } from './bin-completion';
 import type { LpBoundResult } from './lower-bounds';
 import { roundLpSolution } from './lp-rounding';
 import type { Model } from './model';
-import { compareScores, scorePacking, type Packing } from './packing';
+import { compareScores, makeBoard, scorePacking, type Packing } from './packing';
 import type { SearchBudget } from './search-budget';
+import { repackToTarget, type RepackCaps } from './target-repack';
 import type { PlanBound } from './types';
 
-export const IMPROVE_CAPS = { roundingSteps: 400, roundingPivots: 5_000 };
+export const IMPROVE_CAPS = {
+  roundingSteps: 400,
+  roundingPivots: 5_000,
+  completion: { maxNodes: 4_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34 } satisfies CompletionCaps,
+  repack: { maxRounds: 400, starts: 6 } satisfies RepackCaps,
+};
 
 export function improvePacking(
   model: Model,
@@ -17,12 +26,44 @@ export function improvePacking(
   budget: SearchBudget,
 ): Packing {
   let best = incumbent;
-  const consider = (p: Packing) => {
-    if (compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
+  const better = (p: Packing | null): boolean => {
+    if (p && compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
+    return best.boards.length <= bound.boards && scorePacking(model, best).cost <= bound.cost + 1e-9;
   };
+  const oneKind = model.bins.length === 1 && bound.boards <= model.bins[0].limit;
+  if (oneKind && better(completeTowardsBound(model, bound.boards, budget))) return best;
   if (lp && !budget.expired()) {
-    consider(roundLpSolution(model, lp, budget, { maxSteps: IMPROVE_CAPS.roundingSteps, maxPivots: IMPROVE_CAPS.roundingPivots }));
+    const rounded = roundLpSolution(model, lp, budget, { maxSteps: IMPROVE_CAPS.roundingSteps, maxPivots: IMPROVE_CAPS.roundingPivots });
+    if (better(rounded)) return best;
+    if (oneKind && !budget.expired() && better(repackTowardsBound(model, rounded, bound.boards, budget))) return best;
   }
-  void bound;
+  if (oneKind && !budget.expired()) better(repackTowardsBound(model, best, bound.boards, budget));
   return best;
+}
+
+function completeTowardsBound(model: Model, target: number, budget: SearchBudget): Packing | null {
+  const found = packIntoTarget(
+    model.items.map((it) => it.weight),
+    model.items.map((it) => it.count),
+    model.bins[0].capacity,
+    target,
+    IMPROVE_CAPS.completion,
+    budget.shouldStop,
+  );
+  return found ? { boards: found.map((items) => makeBoard(model, 0, items)), unplaced: model.items.map(() => 0) } : null;
+}
+
+function repackTowardsBound(model: Model, from: Packing, target: number, budget: SearchBudget): Packing | null {
+  if (from.unplaced.some((n) => n > 0) || from.boards.length <= target) return null;
+  const pieceType: number[] = [];
+  const initial = from.boards.map((b) =>
+    b.items.map((t) => {
+      pieceType.push(t);
+      return pieceType.length - 1;
+    }),
+  );
+  const weights = pieceType.map((t) => model.items[t].weight);
+  const found = repackToTarget(weights, model.bins[0].capacity, target, initial, IMPROVE_CAPS.repack, budget.shouldStop);
+  if (!found) return null;
+  return { boards: found.filter((b) => b.length > 0).map((b) => makeBoard(model, 0, b.map((p) => pieceType[p]))), unplaced: model.items.map(() => 0) };
 }
