@@ -2,6 +2,7 @@
 // kind: a short bin completion towards the bound first. Then LP rounding with residual repair,
 // and (one board kind) pool-based repacking of the rounded plan, then of the best plan.
 
+import { downsizeBoards, mergeBoards } from './board-swaps';
 import { packIntoTarget, type CompletionCaps } from './bin-completion';
 import type { LpBoundResult } from './lower-bounds';
 import { roundLpSolution } from './lp-rounding';
@@ -38,6 +39,7 @@ export function improvePacking(
     if (oneKind && !budget.expired() && better(repackTowardsBound(model, rounded, bound.boards, budget))) return best;
   }
   if (oneKind && !budget.expired()) better(repackTowardsBound(model, best, bound.boards, budget));
+  if (!oneKind) better(downsizeBoards(model, mergeBoards(model, best, 60)));
   return best;
 }
 

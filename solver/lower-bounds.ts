@@ -51,15 +51,14 @@ export function lpBound(
   const uniformCost = costs.size === 1 ? bins[0].cost : 0;
   let boards: number;
   let cost = lp.value;
-  let pool = lp.pool;
+  const pool = lp.pool;
   if (uniformCost > 0) {
     boards = Math.ceil(lp.value / uniformCost - SLACK);
     cost = boards * uniformCost;
   } else {
-    const unit = solvePatternLp(items, bins.map((b) => ({ ...b, cost: 1 })), { ...opts, pool });
-    if (!unit.converged || !unit.feasible) return null;
-    boards = Math.ceil(unit.value - SLACK);
-    pool = unit.pool;
+    // With differing costs the board count gets the length bound only: a second LP (unit costs)
+    // would double the time, and the cost is what the plan is judged on.
+    boards = 0;
   }
   return { bound: { boards, cost: floor6(cost - SLACK * Math.max(1, cost)), method: 'lp' }, solution: lp.solution, pool };
 }
