@@ -13,6 +13,8 @@ export interface CompletionCaps {
   listSteps: number;
   /** Fail-first choice (checking every piece) is used while the waste budget is at most this share of a board. */
   failFirstBudgetShare: number;
+  /** Limited discrepancy search: passes allow 0, 1, … up to this many steps off the first choice. */
+  maxDiscrepancies: number;
 }
 
 interface Completion {
@@ -81,14 +83,14 @@ export function packIntoTarget(
     return out;
   };
 
-  const search = (left: number): boolean => {
+  const search = (left: number, discrepancies: number): boolean => {
     if (remaining === 0) return true;
     if (left <= 0) return false;
     if (++nodes > caps.maxNodes || (nodes % 128 === 0 && shouldStop())) {
       aborted = true;
       return false;
     }
-    const key = `${left}|${counts.join(',')}`;
+    const key = `${discrepancies}|${left}|${counts.join(',')}`;
     if (failed.has(key)) return false;
     const budget = left * capacity - remaining;
     const room = (i: number) => capacity - weights[i];
@@ -115,7 +117,9 @@ export function packIntoTarget(
       counts[item]++;
     }
     counts[item]--;
-    for (const opt of options.slice(0, caps.branching)) {
+    const tries = options.slice(0, Math.min(caps.branching, discrepancies + 1));
+    for (let k = 0; k < tries.length; k++) {
+      const opt = tries[k];
       opt.counts.forEach((c, j) => (counts[j] -= c));
       const load = weights[item] + opt.load;
       remaining -= load;
@@ -124,7 +128,7 @@ export function packIntoTarget(
         for (let k = 0; k < c; k++) items.push(j);
       });
       boards.push(items);
-      if (search(left - 1)) return true;
+      if (search(left - 1, discrepancies - k)) return true;
       boards.pop();
       remaining += load;
       opt.counts.forEach((c, j) => (counts[j] += c));
@@ -135,5 +139,10 @@ export function packIntoTarget(
     return false;
   };
 
-  return search(target) ? boards : null;
+  // maxDiscrepancies = Infinity: one plain depth-first pass.
+  const passes = Number.isFinite(caps.maxDiscrepancies) ? caps.maxDiscrepancies + 1 : 1;
+  for (let p = 0; p < passes && !aborted; p++) {
+    if (search(target, Number.isFinite(caps.maxDiscrepancies) ? p : Infinity)) return boards;
+  }
+  return null;
 }

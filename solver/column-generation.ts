@@ -36,6 +36,8 @@ export interface LpResult {
 
 interface Column extends SparseColumn {
   cost: number;
+  /** 1/‖a‖: entering by normalised reduced cost takes far fewer degenerate pivots than plain Dantzig. */
+  scale?: number;
   pattern?: Pattern;
   artificial?: boolean;
 }
@@ -144,7 +146,7 @@ export function solvePatternLp(
 
   let pivots = 0;
   let converged = false;
-  const refactorEvery = Math.max(100, 3 * m);
+  const refactorEvery = Math.max(500, 10 * m);
   lu.duals(costB, y);
   while (pivots < opts.maxPivots) {
     if (pivots % 64 === 0 && opts.shouldStop?.()) break;
@@ -155,8 +157,9 @@ export function solvePatternLp(
       const col = columns[c];
       let rc = col.cost;
       for (let t = 0; t < col.rows.length; t++) rc -= y[col.rows[t]] * col.vals[t];
-      if (rc < best) {
-        best = rc;
+      const scale = col.scale ?? (col.scale = 1 / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0)));
+      if (rc < -EPS && rc * scale < best) {
+        best = rc * scale;
         enter = c;
       }
     }
@@ -170,8 +173,11 @@ export function solvePatternLp(
         const rc = bins[j].cost - pp.value - capDual;
         if (rc < -1e-7) {
           const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
-          if (idx >= 0 && rc < best) {
-            best = rc;
+          if (idx < 0) return;
+          const col = columns[idx];
+          const scaled = rc / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0));
+          if (scaled < best) {
+            best = scaled;
             enter = idx;
           }
         }

@@ -15,8 +15,9 @@ import type { PlanBound } from './types';
 export const IMPROVE_CAPS = {
   roundingSteps: 400,
   roundingPivots: 5_000,
-  completion: { maxNodes: 4_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34 } satisfies CompletionCaps,
+  completion: { maxNodes: 4_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
   repack: { maxRounds: 400, starts: 6 } satisfies RepackCaps,
+  quickCompletion: { maxNodes: 600, branching: 6, listSteps: 4_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
 };
 
 export function improvePacking(
@@ -25,6 +26,7 @@ export function improvePacking(
   bound: PlanBound,
   lp: LpBoundResult | null,
   budget: SearchBudget,
+  lengthTarget: number,
 ): Packing {
   let best = incumbent;
   const better = (p: Packing | null): boolean => {
@@ -32,7 +34,7 @@ export function improvePacking(
     return best.boards.length <= bound.boards && scorePacking(model, best).cost <= bound.cost + 1e-9;
   };
   const oneKind = model.bins.length === 1 && bound.boards <= model.bins[0].limit;
-  if (oneKind && better(completeTowardsBound(model, bound.boards, budget))) return best;
+  if (oneKind && bound.boards > lengthTarget && better(completeTowardsBound(model, bound.boards, budget))) return best;
   if (lp && !budget.expired()) {
     const rounded = roundLpSolution(model, lp, budget, { maxSteps: IMPROVE_CAPS.roundingSteps, maxPivots: IMPROVE_CAPS.roundingPivots });
     if (better(rounded)) return best;
@@ -43,19 +45,38 @@ export function improvePacking(
   return best;
 }
 
-function completeTowardsBound(model: Model, target: number, budget: SearchBudget): Packing | null {
+function completeTowardsBound(model: Model, target: number, budget: SearchBudget, caps: CompletionCaps = IMPROVE_CAPS.completion): Packing | null {
   const found = packIntoTarget(
     model.items.map((it) => it.weight),
     model.items.map((it) => it.count),
     model.bins[0].capacity,
     target,
-    IMPROVE_CAPS.completion,
+    caps,
     budget.shouldStop,
   );
   return found ? { boards: found.map((items) => makeBoard(model, 0, items)), unplaced: model.items.map(() => 0) } : null;
 }
 
-function repackTowardsBound(model: Model, from: Packing, target: number, budget: SearchBudget): Packing | null {
+/** Repacks one board fewer at a time, down to the target; returns the smallest plan reached. */
+function repackTowardsBound(model: Model, from: Packing, target: number, budget: SearchBudget, caps: RepackCaps = IMPROVE_CAPS.repack): Packing | null {
+  let best: Packing | null = null;
+  let current = from;
+  while (current.boards.length > target && !budget.expired()) {
+    const next = repackOnce(model, current, current.boards.length - 1, budget, caps);
+    if (!next) break;
+    best = current = next;
+  }
+  return best;
+}
+
+/** Before any LP: a short bin completion towards the length bound (one board kind). */
+export function quickTargetSearch(model: Model, incumbent: Packing, target: number, budget: SearchBudget): Packing {
+  if (model.bins.length !== 1 || target > model.bins[0].limit) return incumbent;
+  // Repacking the greedy plan here rarely paid off in the benchmarks; the LP-rounded plan is a better start.
+  return completeTowardsBound(model, target, budget, IMPROVE_CAPS.quickCompletion) ?? incumbent;
+}
+
+function repackOnce(model: Model, from: Packing, target: number, budget: SearchBudget, caps: RepackCaps): Packing | null {
   if (from.unplaced.some((n) => n > 0) || from.boards.length <= target) return null;
   const pieceType: number[] = [];
   const initial = from.boards.map((b) =>
@@ -65,7 +86,7 @@ function repackTowardsBound(model: Model, from: Packing, target: number, budget:
     }),
   );
   const weights = pieceType.map((t) => model.items[t].weight);
-  const found = repackToTarget(weights, model.bins[0].capacity, target, initial, IMPROVE_CAPS.repack, budget.shouldStop);
+  const found = repackToTarget(weights, model.bins[0].capacity, target, initial, caps, budget.shouldStop);
   if (!found) return null;
   return { boards: found.filter((b) => b.length > 0).map((b) => makeBoard(model, 0, b.map((p) => pieceType[p]))), unplaced: model.items.map(() => 0) };
 }
