@@ -15,9 +15,9 @@ import type { PlanBound } from './types';
 export const IMPROVE_CAPS = {
   roundingSteps: 400,
   roundingPivots: 5_000,
-  completion: { maxNodes: 4_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
+  completion: { maxNodes: 3_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
   repack: { maxRounds: 400, starts: 6 } satisfies RepackCaps,
-  quickCompletion: { maxNodes: 600, branching: 6, listSteps: 4_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
+  quickCompletion: { maxNodes: 300, branching: 6, listSteps: 4_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
 };
 
 export function improvePacking(
@@ -31,7 +31,8 @@ export function improvePacking(
   let best = incumbent;
   const better = (p: Packing | null): boolean => {
     if (p && compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
-    return best.boards.length <= bound.boards && scorePacking(model, best).cost <= bound.cost + 1e-9;
+    const cost = scorePacking(model, best).cost;
+    return cost <= bound.cost + 1e-5 * Math.max(1, cost);
   };
   const oneKind = model.bins.length === 1 && bound.boards <= model.bins[0].limit;
   if (oneKind && bound.boards > lengthTarget && better(completeTowardsBound(model, bound.boards, budget))) return best;
@@ -40,6 +41,7 @@ export function improvePacking(
     if (better(rounded)) return best;
     if (oneKind && !budget.expired() && better(repackTowardsBound(model, rounded, bound.boards, budget))) return best;
   }
+  if (oneKind && bound.boards === lengthTarget && better(completeTowardsBound(model, bound.boards, budget))) return best;
   if (oneKind && !budget.expired()) better(repackTowardsBound(model, best, bound.boards, budget));
   if (!oneKind) better(downsizeBoards(model, mergeBoards(model, best, 60)));
   return best;
@@ -72,8 +74,12 @@ function repackTowardsBound(model: Model, from: Packing, target: number, budget:
 /** Before any LP: a short bin completion towards the length bound (one board kind). */
 export function quickTargetSearch(model: Model, incumbent: Packing, target: number, budget: SearchBudget): Packing {
   if (model.bins.length !== 1 || target > model.bins[0].limit) return incumbent;
-  // Repacking the greedy plan here rarely paid off in the benchmarks; the LP-rounded plan is a better start.
-  return completeTowardsBound(model, target, budget, IMPROVE_CAPS.quickCompletion) ?? incumbent;
+  // Repacking the greedy plan here rarely paid off in the benchmarks; the LP-rounded plan is a better
+  // start. Bin completion is strong when little waste is allowed (exact fills), weak otherwise.
+  const slack = target * model.bins[0].capacity - model.items.reduce((s, it) => s + it.weight * it.count, 0);
+  const tight = slack <= IMPROVE_CAPS.quickCompletion.failFirstBudgetShare * model.bins[0].capacity;
+  const caps = tight ? IMPROVE_CAPS.completion : IMPROVE_CAPS.quickCompletion;
+  return completeTowardsBound(model, target, budget, caps) ?? incumbent;
 }
 
 function repackOnce(model: Model, from: Packing, target: number, budget: SearchBudget, caps: RepackCaps): Packing | null {
