@@ -29,6 +29,8 @@ export function packIntoTarget(
   target: number,
   caps: CompletionCaps,
   shouldStop: () => boolean,
+  /** Optional LP values of boards, keyed by their item-type counts joined with commas: tried first among equally full completions. */
+  guide?: Map<string, number>,
 ): number[][] | null {
   const counts = [...demand];
   const n = weights.length;
@@ -117,6 +119,17 @@ export function packIntoTarget(
       counts[item]++;
     }
     counts[item]--;
+    if (guide) {
+      const score = (o: Completion) => {
+        o.counts[item]++;
+        const v = guide.get(o.counts.join(',')) ?? 0;
+        o.counts[item]--;
+        return v;
+      };
+      const scored = options.map((o) => ({ o, v: score(o) }));
+      scored.sort((a, b) => b.o.load - a.o.load || b.v - a.v);
+      options = scored.map((x) => x.o);
+    }
     const tries = options.slice(0, Math.min(caps.branching, discrepancies + 1));
     for (let k = 0; k < tries.length; k++) {
       const opt = tries[k];

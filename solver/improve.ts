@@ -17,6 +17,7 @@ export const IMPROVE_CAPS = {
   roundingPivots: 5_000,
   completion: { maxNodes: 3_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
   repack: { maxRounds: 400, starts: 6 } satisfies RepackCaps,
+  quickTightCompletion: { maxNodes: 800, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
   quickCompletion: { maxNodes: 300, branching: 6, listSteps: 4_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
 };
 
@@ -35,19 +36,35 @@ export function improvePacking(
     return cost <= bound.cost + 1e-5 * Math.max(1, cost);
   };
   const oneKind = model.bins.length === 1 && bound.boards <= model.bins[0].limit;
-  if (oneKind && bound.boards > lengthTarget && better(completeTowardsBound(model, bound.boards, budget))) return best;
+  // LP-guided bin completion: among equally full completions, boards the LP uses come first.
+  const guided = () => oneKind && !budget.expired() && better(completeTowardsBound(model, bound.boards, budget, IMPROVE_CAPS.completion, lp));
+  const tight = oneKind && isTight(model, bound.boards);
+  if (tight && (bound.boards > lengthTarget || lp) && guided()) return best;
   if (lp && !budget.expired()) {
     const rounded = roundLpSolution(model, lp, budget, { maxSteps: IMPROVE_CAPS.roundingSteps, maxPivots: IMPROVE_CAPS.roundingPivots });
     if (better(rounded)) return best;
     if (oneKind && !budget.expired() && better(repackTowardsBound(model, rounded, bound.boards, budget))) return best;
   }
-  if (oneKind && bound.boards === lengthTarget && better(completeTowardsBound(model, bound.boards, budget))) return best;
+  if (oneKind && !tight && guided()) return best;
   if (oneKind && !budget.expired()) better(repackTowardsBound(model, best, bound.boards, budget));
   if (!oneKind) better(downsizeBoards(model, mergeBoards(model, best, 60)));
   return best;
 }
 
-function completeTowardsBound(model: Model, target: number, budget: SearchBudget, caps: CompletionCaps = IMPROVE_CAPS.completion): Packing | null {
+/** Little waste allowed at this board count: bin completion's home ground. */
+function isTight(model: Model, target: number): boolean {
+  const slack = target * model.bins[0].capacity - model.items.reduce((s, it) => s + it.weight * it.count, 0);
+  return slack <= IMPROVE_CAPS.completion.failFirstBudgetShare * model.bins[0].capacity;
+}
+
+function completeTowardsBound(
+  model: Model,
+  target: number,
+  budget: SearchBudget,
+  caps: CompletionCaps = IMPROVE_CAPS.completion,
+  lp: LpBoundResult | null = null,
+): Packing | null {
+  const guide = lp ? new Map(lp.solution.map((s) => [s.pattern.counts.join(','), s.x] as const)) : undefined;
   const found = packIntoTarget(
     model.items.map((it) => it.weight),
     model.items.map((it) => it.count),
@@ -55,6 +72,7 @@ function completeTowardsBound(model: Model, target: number, budget: SearchBudget
     target,
     caps,
     budget.shouldStop,
+    guide,
   );
   return found ? { boards: found.map((items) => makeBoard(model, 0, items)), unplaced: model.items.map(() => 0) } : null;
 }
@@ -76,9 +94,7 @@ export function quickTargetSearch(model: Model, incumbent: Packing, target: numb
   if (model.bins.length !== 1 || target > model.bins[0].limit) return incumbent;
   // Repacking the greedy plan here rarely paid off in the benchmarks; the LP-rounded plan is a better
   // start. Bin completion is strong when little waste is allowed (exact fills), weak otherwise.
-  const slack = target * model.bins[0].capacity - model.items.reduce((s, it) => s + it.weight * it.count, 0);
-  const tight = slack <= IMPROVE_CAPS.quickCompletion.failFirstBudgetShare * model.bins[0].capacity;
-  const caps = tight ? IMPROVE_CAPS.completion : IMPROVE_CAPS.quickCompletion;
+  const caps = isTight(model, target) ? IMPROVE_CAPS.quickTightCompletion : IMPROVE_CAPS.quickCompletion;
   return completeTowardsBound(model, target, budget, caps) ?? incumbent;
 }
 
