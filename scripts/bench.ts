@@ -8,6 +8,7 @@ import { loadInstance, readOptima, toSolveInput } from './bench/benchmark-files'
 import { runInstance } from './bench/run-instance';
 import { generateYardJob } from './bench/yard-jobs';
 import { renderReport, type SetRow, type YardRow } from './bench/report';
+import { checkPlan } from '../tests/solver/plan-checker';
 
 const SET_LIMITS: Record<string, { timeLimitMs: number; target: string }> = {
   falkenauer_u120: { timeLimitMs: 2000, target: 'all at optimum, each < 2 s' },
@@ -49,11 +50,12 @@ for (const set of chosen.filter((s) => s in SET_LIMITS)) {
   const misses: string[] = [];
   for (const meta of list) {
     const inst = loadInstance(meta);
-    const r = runInstance(toSolveInput(inst, SET_LIMITS[set].timeLimitMs));
+    const job = toSolveInput(inst, SET_LIMITS[set].timeLimitMs);
+    const r = runInstance(job);
     sample();
+    if (checkPlan(job, r.plan).length > 0 || r.plan.unplaced.length > 0) invalid++;
     times.push(r.ms);
     const boards = r.plan.totals.boards;
-    if (r.plan.unplaced.length > 0) invalid++;
     if (boards === inst.optimum) atOpt++;
     else misses.push(`${inst.name} ${boards}/${inst.optimum}`);
     above += boards - inst.optimum;
@@ -88,6 +90,8 @@ if (chosen.includes('yard')) {
     const job = generateYardJob(seed);
     const r = runInstance(job);
     sample();
+    const errors = checkPlan(job, r.plan);
+    if (errors.length > 0) console.log(`  INVALID yard plan #${seed}: ${errors[0]}`);
     const longest = Math.max(...job.stock.map((s) => s.cost ?? s.length / 1000));
     yardRows.push({
       seed,

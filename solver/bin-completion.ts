@@ -88,7 +88,7 @@ export function packIntoTarget(
   const search = (left: number, discrepancies: number): boolean => {
     if (remaining === 0) return true;
     if (left <= 0) return false;
-    if (++nodes > caps.maxNodes || (nodes % 128 === 0 && shouldStop())) {
+    if (++nodes > caps.maxNodes || (nodes % 16 === 0 && shouldStop())) {
       aborted = true;
       return false;
     }

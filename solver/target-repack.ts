@@ -59,6 +59,7 @@ export function repackToTarget(
       }
       if (changed) continue;
       for (let a = 0; a < state.bins.length && !changed; a++) {
+        if (shouldStop()) return false;
         for (let b = a + 1; b < state.bins.length && !changed; b++) {
           if (refill(state, [a, b])) changed = true;
         }
