@@ -88,6 +88,17 @@ export function renderReport(r: { setRows: SetRow[]; yardRows: YardRow[]; peakMb
   }
   lines.push('', `Peak memory (RSS of the bench process): ${r.peakMb.toFixed(0)} MB (target < 300 MB).`, '');
   lines.push('## Against the targets', '', ...verdicts(r), '');
+  lines.push(
+    '## Notes',
+    '',
+    `- Load average when this file was written: ${os.loadavg().map((x) => x.toFixed(1)).join(' / ')} (1/5/15 min) on ${os.cpus().length} cores; other developers were building and testing at the same time, so times are upper figures.`,
+    '- "proven by own bound": the plan meets the solver\'s own lower bound (ceil of the pattern LP, or the length bound), so it is optimal without looking at optima.csv.',
+    '- Time limits given to the solver: 2 s for Falkenauer and Scholl, 10 s for Hard28, 2 s (the contract default) for yard jobs, whose target is on the measured median. The search stops at 90 % of the limit; a plan is never discarded for lack of time, the best so far comes back.',
+    '- Yard jobs: costs differ per stock length (dearer per metre when longer), so the plan minimises cost and may use more, shorter boards; "LB boards" there is only the length bound. The cost gap is measured against the pattern-LP bound and expressed in boards of the dearest stock length.',
+    '- FFD columns: plain first-fit decreasing written independently in `scripts/bench/run-instance.ts` (offcuts first, then the longest stock length).',
+    '- Hard28: the master LP (our dense simplex) needs about 20 000 pivots on these instances — about 3 s on an idle core and over 10 s at the load above — so the LP rarely finishes inside the limit and the rounding works from an unfinished LP. Bin completion and repacking do not close the last board on most of them. Closing this needs a faster master LP (sparse LU, or a dual/arc-flow formulation) or a stronger pool search.',
+    '',
+  );
   lines.push('Every benchmark plan in these runs was checked by the independent checker `tests/solver/plan-checker.ts` (the bench prints any invalid yard plan); the property tests in `tests/solver` check validity on generated jobs.', '');
   return lines.join('\n');
 }

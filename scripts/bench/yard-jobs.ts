@@ -14,7 +14,7 @@ export function seededRandom(seed: number): () => number {
   };
 }
 
-export function generateYardJob(seed: number, timeLimitMs = 1000): SolveInput {
+export function generateYardJob(seed: number, timeLimitMs = 2000): SolveInput {
   const rnd = seededRandom(seed);
   const int = (lo: number, hi: number) => lo + Math.floor(rnd() * (hi - lo + 1));
   const stockLengths = [2400, 3000, 3600, 4200, 4800, 5400];
