@@ -40,3 +40,9 @@ export async function getOffcutsForLabels({ ids }: { ids: number[] }) {
   return ids.flatMap((id) => rows.filter((r) => r.id === id));
 }
 export type OffcutBrief = Awaited<ReturnType<typeof findOffcutByTag>>;
+
+/** Every offcut a plan's boards made (kept remainders and sound parts), for a sheet of labels. */
+export async function getOffcutsMadeByPlan({ planId }: { planId: number }) {
+  const db = await getDb();
+  return offcutQuery(db).where(eq(offcuts.originPlanId, planId)).orderBy(offcuts.id);
+}

@@ -1,0 +1,46 @@
+// Every board of the plan with its state; tap one to cut it out of order.
+import { formatLength } from '@/lib/units';
+import type { SawBoard } from '@/lib/queries/saw';
+import { cn } from '@/lib/cn';
+
+const STATE = { pending: 'to cut', done: 'cut', defective: 'bad' } as const;
+
+export function BoardList({
+  boards,
+  current,
+  unit,
+  onPick,
+}: {
+  boards: SawBoard[];
+  current: number | null;
+  unit: 'mm' | 'imperial';
+  onPick: (boardNo: number) => void;
+}) {
+  return (
+    <ol className="grid gap-2" aria-label="Boards" data-testid="board-list">
+      {boards.map((b) => (
+        <li key={b.boardNo}>
+          <button
+            type="button"
+            onClick={() => onPick(b.boardNo)}
+            data-testid={`board-${b.boardNo}`}
+            data-status={b.status}
+            aria-current={b.boardNo === current ? 'step' : undefined}
+            className={cn(
+              'flex min-h-12 w-full items-center gap-3 rounded-lg border-2 px-3 text-left text-base',
+              b.boardNo === current ? 'border-spruce bg-spruce-light font-bold' : 'border-grain bg-white',
+              b.status === 'done' && 'text-bark-soft',
+              b.status === 'defective' && 'border-brick text-brick',
+            )}
+          >
+            <span className="w-7 font-bold">{b.boardNo}</span>
+            <span className="flex-1">
+              {b.source === 'offcut' ? b.offcut?.tag : 'Stock'} {formatLength(b.lengthMm, unit)} · {b.pieces.length} pc
+            </span>
+            <span className="text-sm font-semibold uppercase">{STATE[b.status]}</span>
+          </button>
+        </li>
+      ))}
+    </ol>
+  );
+}
