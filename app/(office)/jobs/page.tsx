@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { AccessDenied } from '@/components/layout/access-denied';
 import { PageHeader } from '@/components/ui/page-header';
+import { SawProgressPanel } from '@/components/saw/saw-progress-panel';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { can } from '@/lib/auth/permissions';
 import { listJobsBrief } from '@/lib/jobs/list-jobs-brief';
@@ -14,6 +15,7 @@ export default async function JobsPage() {
   return (
     <>
       <PageHeader title="Jobs" lead="Customer cut lists, soonest due first." />
+      <SawProgressPanel />
       <table className="w-full overflow-hidden rounded-xl bg-white text-left" data-testid="jobs-table">
         <thead className="bg-shaving text-sm">
           <tr>
