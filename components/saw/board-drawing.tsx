@@ -18,7 +18,7 @@ export function BoardDrawing({ board, kerfMm, nextCut }: { board: SawBoard; kerf
       data-testid="board-drawing"
     >
       <rect x={0} y={0} width={W} height={H} fill="#efe4d0" />
-      {board.trimMm > 0 && <rect x={0} y={0} width={board.trimMm} height={H} fill="#a3271f" />}
+      {board.trimMm > 0 && <rect x={0} y={0} width={Math.max(board.trimMm, W / 150)} height={H} fill="#a3271f" />}
       {board.pieces.map((p, i) => {
         const x = start + p.markMm - p.lengthMm;
         const isNext = nextCut === i;

@@ -1,5 +1,5 @@
 // Every board of the plan with its state; tap one to cut it out of order.
-import { formatLength } from '@/lib/units';
+import { sawLength } from './format-saw-length';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
 
@@ -35,7 +35,7 @@ export function BoardList({
           >
             <span className="w-7 font-bold">{b.boardNo}</span>
             <span className="flex-1">
-              {b.source === 'offcut' ? b.offcut?.tag : 'Stock'} {formatLength(b.lengthMm, unit)} · {b.pieces.length} pc
+              {b.source === 'offcut' ? b.offcut?.tag : 'Stock'} {sawLength(b.lengthMm, unit)} · {b.pieces.length} pc
             </span>
             <span className="text-sm font-semibold uppercase">{STATE[b.status]}</span>
           </button>

@@ -1,12 +1,12 @@
 // What to fetch, the trim, each cut as a mark from the squared end, and what is left.
-import { formatLength } from '@/lib/units';
+import { sawLength } from './format-saw-length';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
 
 type Unit = 'mm' | 'imperial';
 
 export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
-  const len = (mm: number) => formatLength(mm, unit);
+  const len = (mm: number) => sawLength(mm, unit);
   return (
     <p className="text-2xl font-bold text-bark" data-testid="fetch-line">
       {board.source === 'offcut' && board.offcut ? (
@@ -26,8 +26,8 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
   );
 }
 
-export function CutList({ board, unit, kerfMm, nextCut }: { board: SawBoard; unit: Unit; kerfMm: number; nextCut: number }) {
-  const len = (mm: number) => formatLength(mm, unit);
+export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit; nextCut: number }) {
+  const len = (mm: number) => sawLength(mm, unit);
   const totals = board.pieces.map((_, i) => board.pieces.slice(0, i + 1).reduce((n, p) => n + p.lengthMm, 0));
   return (
     <ol className="space-y-2" data-testid="cut-list">
@@ -35,7 +35,7 @@ export function CutList({ board, unit, kerfMm, nextCut }: { board: SawBoard; uni
         <li className="flex min-h-12 items-center gap-3 rounded-lg border-2 border-grain bg-white px-3 text-lg">
           <span className="w-8 font-bold">0</span>
           <span className="flex-1 font-semibold">Square the end: trim {len(board.trimMm)}</span>
-          <span className="text-sm text-bark-soft">then measure from the squared end</span>
+          <span className="text-sm text-bark-soft">measure every mark from the squared end</span>
         </li>
       )}
       {board.pieces.map((p, i) => {
@@ -61,9 +61,7 @@ export function CutList({ board, unit, kerfMm, nextCut }: { board: SawBoard; uni
               <span className="block text-xl font-bold">
                 {p.label || 'piece'} · {len(p.lengthMm)}
               </span>
-              <span className="block text-sm text-bark-soft">
-                running total {len(totals[i])} + {i + 1} kerf{i ? 's' : ''} of {kerfMm} mm
-              </span>
+              <span className="block text-sm text-bark-soft">running total of pieces {len(totals[i])}</span>
             </span>
           </li>
         );
@@ -74,7 +72,7 @@ export function CutList({ board, unit, kerfMm, nextCut }: { board: SawBoard; uni
 
 export function LeftOver({ board, unit }: { board: SawBoard; unit: Unit }) {
   if (board.remainderMm <= 0) return <p className="text-lg font-semibold">Nothing left over.</p>;
-  const len = formatLength(board.remainderMm, unit);
+  const len = sawLength(board.remainderMm, unit);
   return board.keepRemainder ? (
     <p className="rounded-lg bg-amber px-4 py-3 text-xl font-bold text-white" data-testid="left-over">
       Keep {len}: it gets a tag when you confirm — label it and rack it.

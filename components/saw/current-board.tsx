@@ -25,16 +25,16 @@ export function CurrentBoard({ board, total, unit, kerfMm, nextCut, busy, onNext
       </h2>
       <FetchLine board={board} unit={unit} />
       <BoardDrawing board={board} kerfMm={kerfMm} nextCut={allMarked ? null : nextCut} />
-      <CutList board={board} unit={unit} kerfMm={kerfMm} nextCut={nextCut} />
+      <CutList board={board} unit={unit} nextCut={nextCut} />
       <LeftOver board={board} unit={unit} />
-      <div className="grid grid-cols-2 gap-3">
+      <div className="sticky bottom-0 -mx-4 grid grid-cols-[1fr_1fr_auto] gap-3 border-t-2 border-grain bg-white px-4 py-3">
         <Button variant="secondary" size="lg" className="min-h-16 text-xl" onClick={onNextCut} disabled={allMarked}>
           {allMarked ? 'All cuts made' : `Cut ${nextCut + 1} made`}
         </Button>
         <Button size="lg" className="min-h-16 text-xl" onClick={onDone} disabled={busy} data-testid="board-done">
           Board {board.boardNo} done
         </Button>
-        <Button variant="danger" size="lg" className="col-span-2 min-h-14" onClick={onDefect} disabled={busy}>
+        <Button variant="danger" size="lg" className="min-h-16" onClick={onDefect} disabled={busy}>
           Board is bad…
         </Button>
       </div>

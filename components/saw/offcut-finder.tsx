@@ -6,7 +6,7 @@ import { useMutation } from '@tanstack/react-query';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { findOffcutRequest, type OffcutBrief } from '@/lib/queries/saw';
-import { formatLength } from '@/lib/units';
+import { sawLength } from './format-saw-length';
 import { LabelScanner } from './label-scanner';
 
 export function OffcutFinder({ unit }: { unit: 'mm' | 'imperial' }) {
@@ -62,7 +62,7 @@ function OffcutCard({ offcut, unit }: { offcut: OffcutBrief; unit: 'mm' | 'imper
     <section className="space-y-1 rounded-xl border-2 border-bark bg-white p-4 text-lg" data-testid="offcut-card">
       <h2 className="font-mono text-3xl font-bold">{offcut.tag}</h2>
       <p className="text-2xl font-bold">
-        {offcut.sectionName} · {formatLength(offcut.lengthMm, unit)}
+        {offcut.sectionName} · {sawLength(offcut.lengthMm, unit)}
       </p>
       <p>
         <strong>Where:</strong> {offcut.location || 'not recorded'} · <strong>Status:</strong> {offcut.status}
