@@ -34,8 +34,11 @@ export function BoardList({
             )}
           >
             <span className="w-7 font-bold">{b.boardNo}</span>
-            <span className="flex-1">
-              {b.source === 'offcut' ? b.offcut?.tag : 'Stock'} {sawLength(b.lengthMm, unit)} · {b.pieces.length} pc
+            <span className="flex-1 leading-tight">
+              <span className="block">{b.source === 'offcut' ? `Offcut ${b.offcut?.tag}` : 'New stock'}</span>
+              <span className="block text-sm">
+                {sawLength(b.lengthMm, unit)} · {b.pieces.length} {b.pieces.length === 1 ? 'piece' : 'pieces'}
+              </span>
             </span>
             <span className="text-sm font-semibold uppercase">{STATE[b.status]}</span>
           </button>

@@ -29,29 +29,30 @@ export function SawStation({ planId }: { planId: number }) {
 
   const done = useMutation({
     mutationFn: (boardNo: number) => confirmBoardRequest(planId, boardNo),
-    onSuccess: (r) => {
+    // Fresh boards first, then the message: the screen never shows a confirmed board as the next one.
+    onSuccess: async (r) => {
+      await refresh();
       setMessage({ kind: 'done', boardNo: r.boardNo, offcut: r.newOffcut, finished: r.planStatus === 'done' });
       moveOn();
-      return refresh();
     },
     onError: (e) => setMessage({ kind: 'error', text: e.message }),
   });
   const undo = useMutation({
     mutationFn: () => undoBoardRequest(planId),
-    onSuccess: (r) => {
+    onSuccess: async (r) => {
+      await refresh();
       setMessage({ kind: 'undone', boardNo: r.boardNo });
       setPicked(r.boardNo);
       setNextCut(0);
-      return refresh();
     },
     onError: (e) => setMessage({ kind: 'error', text: e.message }),
   });
   const defect = useMutation({
     mutationFn: ({ boardNo, body }: { boardNo: number; body: ReportDefectBody }) => reportDefectRequest(planId, boardNo, body),
-    onSuccess: (r) => {
+    onSuccess: async (r) => {
+      await refresh();
       setMessage({ kind: 'defect', boardNo: r.boardNo, added: r.replan?.boardNos ?? [], unplaced: r.replan?.unplaced ?? [], offcut: r.newOffcut });
       moveOn();
-      return refresh();
     },
   });
 
