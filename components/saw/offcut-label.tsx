@@ -1,6 +1,6 @@
 // One printable offcut label: the tag as text and as a QR code, section, length, date and place.
 import QRCode from 'qrcode';
-import { formatLength } from '@/lib/units';
+import { sawLength } from './format-saw-length';
 import type { OffcutBrief } from '@/lib/saw/find-offcut';
 import { RackLocationForm } from './rack-location-form';
 
@@ -13,11 +13,10 @@ export async function OffcutLabel({ offcut, unit }: { offcut: OffcutBrief; unit:
         <div className="label-qr" dangerouslySetInnerHTML={{ __html: svg }} aria-label={`QR code for ${offcut.tag}`} role="img" />
         <div className="label-text">
           <p className="label-tag">{offcut.tag}</p>
-          <p className="label-length">{formatLength(offcut.lengthMm, unit)}</p>
+          <p className="label-length">{sawLength(offcut.lengthMm, unit)}</p>
           <p className="label-section">{offcut.sectionName}</p>
-          <p className="label-meta">
-            {offcut.createdAt.toISOString().slice(0, 10)} · {offcut.location}
-          </p>
+          <p className="label-meta">{offcut.createdAt.toISOString().slice(0, 10)}</p>
+          <p className="label-meta">{offcut.location}</p>
         </div>
       </div>
       <RackLocationForm offcutId={offcut.id} location={offcut.location} />

@@ -11,7 +11,7 @@ export function RackLocationForm({ offcutId, location }: { offcutId: number; loc
   const move = useMutation({ mutationFn: () => moveOffcutRequest(offcutId, value.trim()), onSuccess: () => router.refresh() });
   return (
     <form
-      className="no-print mt-2 flex gap-2"
+      className="no-print mt-2 grid max-w-[62mm] grid-cols-[1fr_auto] gap-2"
       onSubmit={(e) => {
         e.preventDefault();
         move.mutate();
@@ -24,12 +24,12 @@ export function RackLocationForm({ offcutId, location }: { offcutId: number; loc
         id={`loc-${offcutId}`}
         value={value}
         onChange={(e) => setValue(e.target.value)}
-        className="min-h-12 flex-1 rounded-lg border-2 border-grain px-2 text-base"
+        className="min-h-12 min-w-0 rounded-lg border-2 border-grain px-2 text-base"
       />
       <button type="submit" className="min-h-12 rounded-lg border-2 border-spruce px-3 font-semibold text-spruce" disabled={move.isPending || !value.trim()}>
-        {move.isSuccess && value.trim() === location ? 'Saved' : 'Set place'}
+        Set place
       </button>
-      {move.error && <span className="text-sm font-semibold text-brick">{move.error.message}</span>}
+      {move.error && <span className="col-span-2 text-sm font-semibold text-brick">{move.error.message}</span>}
     </form>
   );
 }
