@@ -14,6 +14,7 @@ import {
   rackLocations,
   seededRandom,
 } from './demo-yard';
+import { seedDemoFrameSchedules } from './frames';
 
 type SeedDb = PgliteDatabase<typeof schema>;
 const DAY_MS = 86_400_000;
@@ -113,6 +114,7 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
         })),
       );
     }
+    await seedDemoFrameSchedules(tx, { sectionIds, userId: users.find((u) => u.role === 'yard_hand')!.id });
     return users.find((u) => u.role === 'yard_hand')!.id;
   });
   await seedDemoPlans(db, handId);
