@@ -13,6 +13,7 @@ import {
   rackLocations,
   seededRandom,
 } from './demo-yard';
+import { seedHistory } from './history';
 
 type SeedDb = PgliteDatabase<typeof schema>;
 const DAY_MS = 86_400_000;
@@ -112,6 +113,9 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
         })),
       );
     }
+
+    const userId = (role: string) => users.find((u) => u.role === role)!.id;
+    await seedHistory(tx, { now, userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') } });
   });
   return true;
 }
