@@ -1,0 +1,12 @@
+import type { DisplayUnit } from '@/db/enums';
+import { formatLength } from '@/lib/units';
+import type { SectionRow, StockLengthRow } from '@/lib/queries/stock';
+
+export const onHandText = (l: Pick<StockLengthRow, 'onHand'>) => (l.onHand === null ? 'unlimited' : `${l.onHand} on hand`);
+
+/** Every active stock length as a choice: "47×100 C24 treated — 4800 mm (23 on hand)". */
+export function stockLengthChoices(sections: SectionRow[], unit: DisplayUnit) {
+  return sections
+    .filter((s) => s.active)
+    .flatMap((s) => s.lengths.filter((l) => l.active).map((l) => ({ id: l.id, label: `${s.name} — ${formatLength(l.lengthMm, unit)} (${onHandText(l)})` })));
+}
