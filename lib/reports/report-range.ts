@@ -24,3 +24,11 @@ export function defaultReportRange(now: Date): ReportRange {
   const from = new Date(now.getTime() - 83 * 86_400_000).toISOString().slice(0, 10);
   return { from, to };
 }
+
+/** The range asked for in a page's query, or the default when it is missing or wrong (with the reason). */
+export function readReportRange(params: { from?: string; to?: string }, now = new Date()): { range: ReportRange; problem: string | null } {
+  if (!params.from && !params.to) return { range: defaultReportRange(now), problem: null };
+  const parsed = reportRangeSchema.safeParse(params);
+  if (parsed.success) return { range: parsed.data, problem: null };
+  return { range: defaultReportRange(now), problem: `${parsed.error.issues[0]?.message ?? 'That range is not valid.'} Showing the last twelve weeks instead.` };
+}
