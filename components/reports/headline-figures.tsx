@@ -8,7 +8,7 @@ export function HeadlineFigures({ waste, offcuts, savings }: { waste: WasteRepor
   const figures = [
     { label: 'Yield', value: waste.totals.boards ? `${waste.totals.yieldPercent}%` : '—', note: `${waste.totals.boards} boards cut` },
     { label: 'Waste', value: formatMetres(waste.totals.wasteMm), note: `worth ${formatPence(waste.totals.wastePence)}` },
-    { label: 'Saved by planning', value: formatPence(savings.totals.savedPence), note: `${savings.totals.savedBoards} boards over ${savings.totals.jobs} jobs` },
+    { label: 'Saved by planning', value: formatPence(savings.totals.savedPence), note: `new stock over ${savings.totals.jobs} jobs against a longest-first plan` },
     { label: 'On the rack', value: formatPence(offcuts.totals.rackValuePence), note: `${offcuts.totals.rackCount} offcuts, ${formatMetres(offcuts.totals.rackMm)}` },
   ];
   return (

@@ -7,7 +7,12 @@ import { CHART } from './chart-theme';
 
 export function StockReportView({ report }: { report: StockReport }) {
   const counted = report.lines.filter((l) => l.onHand !== null);
-  const data = counted.map((l) => ({ ...l, label: `${l.sectionName.split(' ')[0]} ${l.lengthMm}` }));
+  // The chart shows the busiest counted lengths (and every short one); the table lists them all.
+  const CHART_LENGTHS = 14;
+  const data = [...counted]
+    .sort((a, b) => Number(b.short) - Number(a.short) || b.used - a.used)
+    .slice(0, CHART_LENGTHS)
+    .map((l) => ({ ...l, label: `${l.sectionName.split(' ')[0]} ${l.lengthMm}` }));
   return (
     <div className="space-y-4">
       {report.short.length > 0 ? (
@@ -22,7 +27,7 @@ export function StockReportView({ report }: { report: StockReport }) {
       ) : (
         <p className="rounded-lg bg-spruce-light px-4 py-3">No counted length runs short at this range’s rate of use.</p>
       )}
-      <ChartPanel id="stock-on-hand" title="On hand against use" lead={`Boards on hand now, and boards cut in the ${report.weeks} weeks of the range. Unlimited lengths are left out of the chart.`}
+      <ChartPanel id="stock-on-hand" title="On hand against use" lead={`Boards on hand now against boards cut in the ${report.weeks} weeks of the range, for the ${CHART_LENGTHS} busiest counted lengths; the figures list every length.`}
         rows={report.lines} empty={counted.length === 0} emptyText="No stock length is counted yet: take stock to start counting."
         columns={[
           { key: 'sectionName', label: 'Section' }, { key: 'lengthMm', label: 'Length mm' },

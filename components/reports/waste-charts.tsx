@@ -9,7 +9,8 @@ import { CHART, metres, shortWeek } from './chart-theme';
 const NOTHING_CUT = 'The saw finished no boards in this range. Choose a wider range, or come back once jobs are cut.';
 
 export function WasteCharts({ report }: { report: WasteReport }) {
-  const weekly = report.weekly.map((w) => ({ ...w, label: shortWeek(w.week), wasteM: metres(w.wasteMm) }));
+  // Weeks with nothing cut have no yield: a gap in the line, not a drop to zero.
+  const weekly = report.weekly.map((w) => ({ ...w, label: shortWeek(w.week), wasteM: metres(w.wasteMm), yieldPercent: w.boards ? w.yieldPercent : null }));
   const sections = report.bySection.map((s) => ({ ...s, wasteM: metres(s.wasteMm) }));
   const flows = report.cutVersusBought.map((f) => ({ ...f, label: shortWeek(f.week), cutM: metres(f.cutMm), boughtM: metres(f.boughtMm) }));
   const mm = (v: unknown) => formatMetres(Number(v));

@@ -18,7 +18,7 @@ export function RackFiltersBar({ filters, onChange, sections, locations, clearAf
   const set = (change: Partial<RackFilters>) => onChange({ ...change, page: '1' });
   const small = `${inputClass} text-sm`;
   return (
-    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-6" data-testid="rack-filters">
+    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4 xl:grid-cols-7" data-testid="rack-filters">
       <label className="lg:col-span-2"><span className="text-sm font-semibold">Search</span>
         <input className={small} type="search" value={filters.q} onChange={(e) => set({ q: e.target.value })} placeholder="Tag, location, job…" />
       </label>
@@ -40,7 +40,7 @@ export function RackFiltersBar({ filters, onChange, sections, locations, clearAf
           {locations.map((l) => <option key={l} value={l}>{l}</option>)}
         </select>
       </label>
-      <div className="grid grid-cols-2 gap-1">
+      <div className="grid grid-cols-2 gap-1 lg:col-span-2">
         <label><span className="text-sm font-semibold">Age</span>
           <select className={small} value={filters.minAgeDays} onChange={(e) => set({ minAgeDays: e.target.value })}>
             <option value="">Any age</option>

@@ -47,7 +47,7 @@ export function RackTable({ rows, unit, clearAfterDays, canEdit, chosen, onChoos
           return (
             <tr key={o.id} className="border-t border-shaving" data-testid={`offcut-row-${o.tag}`}>
               <td className="p-2"><input type="checkbox" aria-label={`Choose ${o.tag}`} checked={chosen.has(o.id)} onChange={(e) => onChoose([o.id], e.target.checked)} /></td>
-              <td className="p-2 font-mono font-semibold">{o.tag}</td>
+              <td className="p-2 font-mono font-semibold whitespace-nowrap">{o.tag}</td>
               <td className="p-2">{o.sectionName}</td>
               <td className="p-2 whitespace-nowrap">{formatLength(o.lengthMm, unit)}</td>
               <td className="p-2"><OffcutLocationCell offcut={o} canEdit={canEdit} onError={onError} /></td>
