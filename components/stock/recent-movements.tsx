@@ -1,10 +1,10 @@
 'use client';
 
+import { lengthText } from './stock-length-label';
 import { useQuery } from '@tanstack/react-query';
 import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit } from '@/db/enums';
-import { formatLength } from '@/lib/units';
 import { stockMovementsQuery } from '@/lib/queries/stock';
 
 const KIND_NAMES: Record<string, string> = { receipt: 'Delivery', stocktake: 'Stocktake' };
@@ -22,7 +22,7 @@ export function RecentMovements({ unit }: { unit: DisplayUnit }) {
             <tr key={m.id} className="border-t border-shaving">
               <td className="p-2 whitespace-nowrap">{new Date(m.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}</td>
               <td className="p-2">{KIND_NAMES[m.kind] ?? m.kind}</td>
-              <td className="p-2">{m.sectionName} — {formatLength(m.lengthMm, unit)}</td>
+              <td className="p-2">{m.sectionName} — {lengthText(m.lengthMm, unit)}</td>
               <td className={`p-2 text-right font-semibold ${m.quantityDelta < 0 ? 'text-brick' : 'text-spruce-dark'}`}>{m.quantityDelta > 0 ? '+' : ''}{m.quantityDelta}</td>
               <td className="p-2">{m.reason}</td>
               <td className="p-2">{m.userName ?? '—'}</td>

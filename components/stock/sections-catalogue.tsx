@@ -5,10 +5,9 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
 import type { DisplayUnit } from '@/db/enums';
 import { formatPence } from '@/lib/format/money';
-import { formatLength } from '@/lib/units';
 import type { SectionRow } from '@/lib/queries/stock';
 import { SectionEditor } from './section-editor';
-import { onHandText } from './stock-length-label';
+import { lengthText, onHandText } from './stock-length-label';
 
 /** The sections the yard sells. The owner edits; everyone else reads. */
 export function SectionsCatalogue({ sections, unit, canEdit }: { sections: SectionRow[]; unit: DisplayUnit; canEdit: boolean }) {
@@ -36,7 +35,7 @@ export function SectionsCatalogue({ sections, unit, canEdit }: { sections: Secti
                   <ul className="flex flex-wrap gap-2 text-sm">
                     {s.lengths.map((l) => (
                       <li key={l.id} className={`rounded-md px-2 py-1 ${l.onHand === 0 ? 'bg-brick-light text-brick' : 'bg-shaving'} ${l.active ? '' : 'line-through'}`} data-testid={`stock-length-${l.id}`}>
-                        <span className="font-semibold">{formatLength(l.lengthMm, unit)}</span> · {formatPence(l.pricePence)} · {onHandText(l)}
+                        <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span> · {formatPence(l.pricePence)} · {onHandText(l)}
                       </li>
                     ))}
                   </ul>

@@ -1,12 +1,12 @@
 'use client';
 
+import { lengthText } from './stock-length-label';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit } from '@/db/enums';
-import { formatLength } from '@/lib/units';
 import { stocktakeRequest, type SectionRow } from '@/lib/queries/stock';
 
 /** Counted boards per stock length of one section; only lengths whose count changed are sent. */
@@ -43,10 +43,10 @@ export function StocktakeForm({ sections, unit }: { sections: SectionRow[]; unit
           {section.lengths.map((l) => (
             <label key={l.id} className="flex items-center justify-between gap-3 rounded-lg bg-shaving px-3 py-2">
               <span>
-                <span className="font-semibold">{formatLength(l.lengthMm, unit)}</span>
+                <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span>
                 <span className="block text-sm text-bark-soft">{l.onHand === null ? 'Unlimited — a count starts counting it' : `Records say ${l.onHand}`}</span>
               </span>
-              <input aria-label={`Counted ${formatLength(l.lengthMm, unit)}`} className={`${inputClass} w-24`} type="number" min={0} inputMode="numeric" value={counts[l.id] ?? ''} onChange={(e) => setCounts({ ...counts, [l.id]: e.target.value })} placeholder={l.onHand === null ? '—' : String(l.onHand)} />
+              <input aria-label={`Counted ${lengthText(l.lengthMm, unit)}`} className={`${inputClass} w-24`} type="number" min={0} inputMode="numeric" value={counts[l.id] ?? ''} onChange={(e) => setCounts({ ...counts, [l.id]: e.target.value })} placeholder={l.onHand === null ? '—' : String(l.onHand)} />
             </label>
           ))}
         </div>

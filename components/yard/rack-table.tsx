@@ -1,7 +1,7 @@
 'use client';
 
 import type { DisplayUnit } from '@/db/enums';
-import { formatLength } from '@/lib/units';
+import { lengthText } from '@/components/stock/stock-length-label';
 import type { OffcutRow, RackFilters } from '@/lib/queries/offcuts';
 import { OffcutLocationCell } from './offcut-location-cell';
 
@@ -49,7 +49,7 @@ export function RackTable({ rows, unit, clearAfterDays, canEdit, chosen, onChoos
               <td className="p-2"><input type="checkbox" aria-label={`Choose ${o.tag}`} checked={chosen.has(o.id)} onChange={(e) => onChoose([o.id], e.target.checked)} /></td>
               <td className="p-2 font-mono font-semibold whitespace-nowrap">{o.tag}</td>
               <td className="p-2">{o.sectionName}</td>
-              <td className="p-2 whitespace-nowrap">{formatLength(o.lengthMm, unit)}</td>
+              <td className="p-2 whitespace-nowrap">{lengthText(o.lengthMm, unit)}</td>
               <td className="p-2"><OffcutLocationCell offcut={o} canEdit={canEdit} onError={onError} /></td>
               <td className="p-2 whitespace-nowrap">
                 {age} d{age >= clearAfterDays && (o.status === 'available' || o.status === 'reserved') && <span className="ml-2 rounded bg-amber-light px-1.5 py-0.5 text-xs font-semibold">clear?</span>}
