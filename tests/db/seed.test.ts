@@ -1,5 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { eq, sql } from 'drizzle-orm';
+import { inArray, sql } from 'drizzle-orm';
 import type { PgTable } from 'drizzle-orm/pg-core';
 import * as schema from '@/db/schema';
 import { seedDemoYard } from '@/db/seed';
@@ -37,13 +37,14 @@ describe('schema and demo seed on in-memory PGlite', () => {
     await close();
   });
 
-  it('records every rack offcut as a stock movement', async () => {
+  it('records every offcut entering the rack as a stock movement', async () => {
     const { db, close } = await createTestDb();
     const offcuts = await db.select().from(schema.offcuts);
     const moves = await db
       .select()
       .from(schema.stockMovements)
-      .where(eq(schema.stockMovements.kind, 'offcut_imported'));
+      .where(inArray(schema.stockMovements.kind, ['offcut_imported', 'offcut_made']));
+    expect(moves.length).toBe(offcuts.length);
     expect(new Set(moves.map((m) => m.offcutId))).toEqual(new Set(offcuts.map((o) => o.id)));
     await close();
   });
