@@ -12,7 +12,7 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
   const t = report.totals;
   return (
     <ChartPanel id="savings" title="What planning saved, job by job"
-      lead={`Across ${t.jobs} planned jobs a plain longest-first plan would have used ${t.baselineBoards} new boards (${formatPence(t.baselineCostPence)}); Kerfwise used ${t.stockBoards} (${formatPence(t.stockCostPence)}): ${t.savedBoards} boards and ${formatPence(t.savedPence)} saved.`}
+      lead={t.jobs === 0 ? undefined : `Across ${t.jobs} planned jobs a plain longest-first plan would have used ${t.baselineBoards} new boards (${formatPence(t.baselineCostPence)}); Kerfwise used ${t.stockBoards} (${formatPence(t.stockCostPence)}): ${t.savedBoards} boards and ${formatPence(t.savedPence)} saved.`}
       rows={report.jobs} empty={t.jobs === 0} emptyText="No jobs were planned in this range, so there is nothing to compare yet."
       columns={[
         { key: 'jobReference', label: 'Job' }, { key: 'customerName', label: 'Customer' },
