@@ -5,5 +5,5 @@ import { withAuth } from 'next-auth/middleware';
 export default withAuth({ pages: { signIn: '/sign-in' } });
 
 export const config = {
-  matcher: ['/((?!api|_next/static|_next/image|favicon.ico|logo.svg|fonts|sign-in).*)'],
+  matcher: ['/((?!api|_next/static|_next/image|favicon.ico|icon.svg|logo.svg|fonts|sign-in).*)'],
 };

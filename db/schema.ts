@@ -173,6 +173,8 @@ export const plans = pgTable('plans', {
   sections: jsonb('sections').notNull(),
   totals: jsonb('totals').notNull(),
   pricePence: integer('price_pence').notNull().default(0),
+  // The quote: { lines, materials, cutting, total } in pounds (lib/pricing).
+  price: jsonb('price'),
   createdBy: integer('created_by').references(() => users.id),
   createdAt: createdAt(),
   releasedAt: timestamp('released_at', { withTimezone: true }),

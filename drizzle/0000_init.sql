@@ -82,6 +82,7 @@ CREATE TABLE "plans" (
 	"sections" jsonb NOT NULL,
 	"totals" jsonb NOT NULL,
 	"price_pence" integer DEFAULT 0 NOT NULL,
+	"price" jsonb,
 	"created_by" integer,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"released_at" timestamp with time zone

@@ -36,6 +36,8 @@ export interface LpResult {
 
 interface Column extends SparseColumn {
   cost: number;
+  /** 1/‖a‖: entering by normalised reduced cost takes far fewer degenerate pivots than plain Dantzig. */
+  scale?: number;
   pattern?: Pattern;
   artificial?: boolean;
 }
@@ -60,13 +62,32 @@ export function solvePatternLp(
   const empty: LpResult = { value: 0, converged: true, feasible: true, solution: [], pool: opts.pool ?? [], pivots: 0 };
   if (itemRows === 0) return empty;
 
+  const seenStart = new Set<string>();
   const maxCost = bins.reduce((s, b) => Math.max(s, b.cost), 0);
   const bigM = 2 * Math.max(1, maxCost) + 1;
   const columns: Column[] = [];
   const rhs = new Float64Array(m);
+  // Start from the classic diagonal basis: for each piece length, a board cut to as many of it as fit
+  // (on the cheapest unlimited board per piece); an artificial column only where no such board exists.
   items.forEach((it, i) => {
-    if (rowOfItem[i] >= 0) {
-      rhs[rowOfItem[i]] = it.demand;
+    if (rowOfItem[i] < 0) return;
+    rhs[rowOfItem[i]] = it.demand;
+    let bestBin = -1;
+    let bestCopies = 0;
+    bins.forEach((b, j) => {
+      if (Number.isFinite(b.limit)) return;
+      const copies = Math.min(it.demand, Math.floor(b.capacity / it.weight));
+      if (copies > 0 && (bestBin < 0 || b.cost / copies < bins[bestBin].cost / bestCopies)) {
+        bestBin = j;
+        bestCopies = copies;
+      }
+    });
+    if (bestBin >= 0) {
+      const counts = items.map((_, k) => (k === i ? bestCopies : 0));
+      const pattern: Pattern = { bin: bestBin, counts, load: bestCopies * it.weight };
+      seenStart.add(patternKey(pattern));
+      columns.push({ rows: [rowOfItem[i]], vals: [bestCopies], cost: bins[bestBin].cost, pattern });
+    } else {
       columns.push({ rows: [rowOfItem[i]], vals: [1], cost: bigM, artificial: true });
     }
   });
@@ -80,7 +101,7 @@ export function solvePatternLp(
   items.forEach((_, i) => {
     if (rowOfItem[i] >= 0) columns.push({ rows: [rowOfItem[i]], vals: [-1], cost: 0 });
   });
-  const seen = new Set<string>();
+  const seen = seenStart;
   const addPattern = (p: Pattern): number => {
     const key = patternKey(p);
     if (seen.has(key)) return -1;
@@ -107,8 +128,13 @@ export function solvePatternLp(
   let basisPos = new Int32Array(columns.length + 1024).fill(-1);
   const isBasic = (c: number) => c < basisPos.length && basisPos[c] >= 0;
   basis.forEach((c, k) => (basisPos[c] = k));
+  // A tiny fixed perturbation of the right-hand side keeps the simplex from stalling on these
+  // highly degenerate LPs; the reported value is the dual objective on the true data, so it stays a bound.
+  const trueRhs = Float64Array.from(rhs);
+  for (let r = 0; r < m; r++) rhs[r] += 1e-6 * (1 + ((r * 7919) % 997) / 997);
   const lu = new DenseBasis(m);
-  const xB = Float64Array.from(rhs);
+  basis.forEach((c, k) => (lu.inv[k * m + k] = 1 / columns[c].vals[0]));
+  const xB = Float64Array.from(rhs, (r, k) => r / columns[basis[k]].vals[0]);
   const costB = new Float64Array(m);
   basis.forEach((c, k) => (costB[k] = columns[c].cost));
   const y = new Float64Array(m);
@@ -120,9 +146,10 @@ export function solvePatternLp(
 
   let pivots = 0;
   let converged = false;
+  const refactorEvery = Math.max(500, 10 * m);
+  lu.duals(costB, y);
   while (pivots < opts.maxPivots) {
     if (pivots % 64 === 0 && opts.shouldStop?.()) break;
-    lu.duals(costB, y);
     let enter = -1;
     let best = -EPS;
     for (let c = 0; c < columns.length; c++) {
@@ -130,8 +157,9 @@ export function solvePatternLp(
       const col = columns[c];
       let rc = col.cost;
       for (let t = 0; t < col.rows.length; t++) rc -= y[col.rows[t]] * col.vals[t];
-      if (rc < best) {
-        best = rc;
+      const scale = col.scale ?? (col.scale = 1 / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0)));
+      if (rc < -EPS && rc * scale < best) {
+        best = rc * scale;
         enter = c;
       }
     }
@@ -145,8 +173,11 @@ export function solvePatternLp(
         const rc = bins[j].cost - pp.value - capDual;
         if (rc < -1e-7) {
           const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
-          if (idx >= 0 && rc < best) {
-            best = rc;
+          if (idx < 0) return;
+          const col = columns[idx];
+          const scaled = rc / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0));
+          if (scaled < best) {
+            best = scaled;
             enter = idx;
           }
         }
@@ -176,21 +207,31 @@ export function solvePatternLp(
     if (leave < 0) break; // unbounded cannot happen with non-negative costs; stop defensively
     for (let k = 0; k < m; k++) xB[k] -= ratio * d[k];
     xB[leave] = ratio;
+    const entering = columns[enter];
+    let rcEnter = entering.cost;
+    for (let t = 0; t < entering.rows.length; t++) rcEnter -= y[entering.rows[t]] * entering.vals[t];
     lu.pivot(leave, d);
+    // New duals: y + rc_q · (new row `leave` of B⁻¹), an O(m) update instead of O(m²).
+    const rowBase = leave * m;
+    for (let r = 0; r < m; r++) y[r] += rcEnter * lu.inv[rowBase + r];
     basisPos[basis[leave]] = -1;
     basis[leave] = enter;
     basisPos[enter] = leave;
     costB[leave] = columns[enter].cost;
     pivots++;
-    if (pivots % 100 === 0) {
+    if (pivots % refactorEvery === 0) {
       if (lu.refactor(basis.map((c) => columns[c]))) {
         xB.fill(0);
         for (let k = 0; k < m; k++) for (let r = 0; r < m; r++) xB[k] += lu.inv[k * m + r] * rhs[r];
       }
+      lu.duals(costB, y);
     }
   }
   let value = 0;
   let feasible = true;
+  lu.duals(costB, y);
+  let dualValue = 0;
+  for (let r = 0; r < m; r++) dualValue += y[r] * trueRhs[r];
   const solution: { pattern: Pattern; x: number }[] = [];
   basis.forEach((c, k) => {
     const x = Math.max(0, xB[k]);
@@ -200,5 +241,5 @@ export function solvePatternLp(
     if (col.pattern && x > 1e-9) solution.push({ pattern: col.pattern, x });
   });
   const pool = columns.filter((c) => c.pattern).map((c) => c.pattern as Pattern);
-  return { value, converged, feasible, solution, pool, pivots };
+  return { value: converged ? Math.min(value, dualValue) : value, converged, feasible, solution, pool, pivots };
 }

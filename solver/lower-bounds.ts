@@ -31,7 +31,7 @@ export function lengthBound(model: Model, demand: number[], binsLeft: number[]):
 }
 
 export interface LpBoundResult {
-  bound: PlanBound;
+  bound: PlanBound | null;
   /** LP solution for the cost objective, used by the rounding heuristic. */
   solution: { pattern: Pattern; x: number }[];
   pool: Pattern[];
@@ -46,20 +46,21 @@ export function lpBound(
   const items = model.items.map((it, i) => ({ weight: it.weight, demand: demand[i] }));
   const bins = model.bins.map((b, j) => ({ capacity: b.capacity, cost: b.cost, limit: binsLeft[j] }));
   const lp = solvePatternLp(items, bins, opts);
-  if (!lp.converged || !lp.feasible) return null;
+  if (!lp.feasible) return null;
+  // Stopped early: the LP solution still guides rounding, but its value proves nothing.
+  if (!lp.converged) return { bound: null, solution: lp.solution, pool: lp.pool };
   const costs = new Set(bins.map((b) => b.cost));
   const uniformCost = costs.size === 1 ? bins[0].cost : 0;
   let boards: number;
   let cost = lp.value;
-  let pool = lp.pool;
+  const pool = lp.pool;
   if (uniformCost > 0) {
     boards = Math.ceil(lp.value / uniformCost - SLACK);
     cost = boards * uniformCost;
   } else {
-    const unit = solvePatternLp(items, bins.map((b) => ({ ...b, cost: 1 })), { ...opts, pool });
-    if (!unit.converged || !unit.feasible) return null;
-    boards = Math.ceil(unit.value - SLACK);
-    pool = unit.pool;
+    // With differing costs the board count gets the length bound only: a second LP (unit costs)
+    // would double the time, and the cost is what the plan is judged on.
+    boards = 0;
   }
   return { bound: { boards, cost: floor6(cost - SLACK * Math.max(1, cost)), method: 'lp' }, solution: lp.solution, pool };
 }

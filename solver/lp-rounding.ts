@@ -26,7 +26,19 @@ export function roundLpSolution(
       const copies = Math.floor(x + 1e-6);
       for (let k = 0; k < copies; k++) if (fixPattern(model, pattern, demand, left, boards)) fixed++;
     }
-    if (fixed === 0 && !fixPattern(model, sorted[0].pattern, demand, left, boards)) break;
+    if (fixed === 0) {
+      // Dive: fix the largest fraction, plus further near-whole columns that still fit the demand
+      // entirely, up to a tenth of the boards left, so the LP is solved again far fewer times.
+      const boardsLeft = sorted.reduce((a, s) => a + s.x, 0);
+      const most = Math.max(1, Math.floor(boardsLeft / 10));
+      const floor = Math.max(0.5, sorted[0].x * 0.8);
+      for (const { pattern, x } of sorted) {
+        if (fixed >= most || (fixed > 0 && x < floor)) break;
+        if (fixed > 0 && pattern.counts.some((c, i) => c > demand[i])) continue;
+        if (fixPattern(model, pattern, demand, left, boards)) fixed++;
+      }
+      if (fixed === 0) break;
+    }
     if (demand.every((d) => d === 0) || budget.expired()) break;
     const lp = solvePatternLp(
       model.items.map((it, i) => ({ weight: it.weight, demand: demand[i] })),

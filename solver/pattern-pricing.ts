@@ -29,9 +29,16 @@ export function priceBestPatterns(
   const maxCap = capacities.reduce((m, c) => Math.max(m, c), 0);
   const partItem: number[] = [];
   const partMult: number[] = [];
+  // partMult 0 marks an item whose bound never binds: one unbounded pass instead of log(b) parts.
   for (let i = 0; i < weights.length; i++) {
     if (!(values[i] > 1e-12)) continue;
-    let b = Math.min(bounds[i], Math.floor(maxCap / weights[i]));
+    const fit = Math.floor(maxCap / weights[i]);
+    if (fit > 1 && bounds[i] >= fit) {
+      partItem.push(i);
+      partMult.push(0);
+      continue;
+    }
+    let b = Math.min(bounds[i], fit);
     for (let k = 1; b > 0; k *= 2) {
       const take = Math.min(k, b);
       partItem.push(i);
@@ -43,9 +50,21 @@ export function priceBestPatterns(
   const f = new Float64Array(width);
   const keep = new Uint8Array(partItem.length * width);
   for (let k = 0; k < partItem.length; k++) {
+    const base = k * width;
+    if (partMult[k] === 0) {
+      const w = weights[partItem[k]];
+      const v = values[partItem[k]];
+      for (let c = w; c <= maxCap; c++) {
+        const cand = f[c - w] + v;
+        if (cand > f[c] + 1e-12) {
+          f[c] = cand;
+          keep[base + c] = 1;
+        }
+      }
+      continue;
+    }
     const w = weights[partItem[k]] * partMult[k];
     const v = values[partItem[k]] * partMult[k];
-    const base = k * width;
     for (let c = maxCap; c >= w; c--) {
       const cand = f[c - w] + v;
       if (cand > f[c] + 1e-12) {
@@ -59,6 +78,15 @@ export function priceBestPatterns(
     let c = cap;
     let load = 0;
     for (let k = partItem.length - 1; k >= 0; k--) {
+      if (partMult[k] === 0) {
+        const w = weights[partItem[k]];
+        while (keep[k * width + c]) {
+          counts[partItem[k]]++;
+          load += w;
+          c -= w;
+        }
+        continue;
+      }
       if (keep[k * width + c]) {
         const w = weights[partItem[k]] * partMult[k];
         counts[partItem[k]] += partMult[k];

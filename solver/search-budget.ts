@@ -8,7 +8,8 @@ export class SearchBudget {
 
   constructor(timeLimitMs: number, now: () => number = () => performance.now()) {
     this.now = now;
-    this.deadline = now() + timeLimitMs;
+    // Stop the search a little early so building the plan still fits inside the limit.
+    this.deadline = now() + timeLimitMs * 0.9;
   }
 
   expired(): boolean {

@@ -6,7 +6,7 @@ import { buildModel, type Model } from './model';
 import { compareScores, scorePacking, type Packing } from './packing';
 import { buildPlan } from './plan-builder';
 import { SearchBudget } from './search-budget';
-import { improvePacking } from './improve';
+import { improvePacking, quickTargetSearch } from './improve';
 import type { PlanBound, SolveInput, SolvePlan } from './types';
 
 /** Iteration caps that fix the search path (see README, "Determinism"). */
@@ -28,10 +28,15 @@ export function solve(input: SolveInput): SolvePlan {
   let bound = lengthBound(model, placedDemand(model, best), limits);
   const allPlaced = best.unplaced.every((n) => n === 0);
   if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
+    const lengthTarget = bound.boards;
+    consider(quickTargetSearch(model, best, lengthTarget, budget));
+  }
+  if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
+    const lengthTarget = bound.boards;
     const lp = lpBound(model, demand, limits, { maxPivots: SEARCH_CAPS.lpPivots, shouldStop: budget.shouldStop });
     bound = maxBound(bound, lp?.bound ?? null);
     if (!meetsBound(model, best, bound)) {
-      consider(improvePacking(model, best, bound, lp, budget));
+      consider(improvePacking(model, best, bound, lp, budget, lengthTarget));
     }
   }
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);

@@ -13,6 +13,10 @@ export function PanelElevation({
   const { minX, minY, maxX, maxY } = layout.bounds;
   const flip = (y: number) => maxY - y;
   const viewBox = `${minX - MARGIN} ${-MARGIN} ${maxX - minX + 2 * MARGIN} ${maxY - minY + 2 * MARGIN}`;
+  // Text grows with the drawing so marks stay readable when a large panel is drawn small.
+  const extent = Math.max(maxX - minX, maxY - minY);
+  const markSize = Math.max(60, extent / 32);
+  const dimensionSize = Math.max(70, extent / 24);
   return (
     <svg
       viewBox={viewBox}
@@ -45,7 +49,7 @@ export function PanelElevation({
             key={`m${k}`}
             x={cx}
             y={cy}
-            fontSize={60}
+            fontSize={markSize}
             textAnchor="middle"
             dominantBaseline="middle"
           >
@@ -69,7 +73,7 @@ export function PanelElevation({
             <text
               x={(x1 + x2) / 2}
               y={(y1 + y2) / 2 - 20}
-              fontSize={70}
+              fontSize={dimensionSize}
               textAnchor="middle"
               fill="#1d4ed8"
               stroke="none"

@@ -9,7 +9,8 @@ import { solve, type SolveInput } from '@/solver';
 import * as schema from '../schema';
 import { rackLocations, seededRandom } from './demo-yard';
 import { pastCustomers, pastJobKinds } from './history-jobs';
-import { boardPiecesOf, sourceOf, sumPlanTotals } from './history-plan';
+import { summarisePlan } from '@/lib/plans/summarise-plan';
+import { boardPiecesOf, sourceOf } from './history-plan';
 
 type SeedTx = Parameters<Parameters<PgliteDatabase<typeof schema>['transaction']>[0]>[0];
 type Offcut = typeof schema.offcuts.$inferInsert & { id: number; createdAt: Date };
@@ -108,7 +109,7 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
       const offcutsHere = rack.filter((o) => o.sectionId === sectionId && o.status === 'available' && o.createdAt < plannedAt).slice(0, 16);
       const input: SolveInput = {
         kerf: SETTINGS.kerfMm, trim: SETTINGS.trimMm, minOffcut: SETTINGS.minOffcutMm, timeLimitMs: SETTINGS.timeLimitMs,
-        stock: lengthsBySection.get(sectionId)!.map((l) => ({ id: stockSourceId(l.id), length: l.lengthMm, cost: l.pricePence, available: onHand.get(l.id) ?? null })),
+        stock: lengthsBySection.get(sectionId)!.map((l) => ({ id: stockSourceId(l.id), length: l.lengthMm, cost: l.pricePence / 100, available: onHand.get(l.id) ?? null })),
         offcuts: offcutsHere.map((o) => ({ id: offcutSourceId(o.id), length: o.lengthMm })),
         pieces: sectionItems.map((i) => ({ id: pieceIdFor(i.id), length: i.lengthMm, quantity: i.quantity })),
       };
@@ -138,7 +139,7 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
           at: doneAt, kind: source.kind === 'stock' ? 'stock_cut' : 'offcut_used', userId: userIds.saw, sectionId,
           stockLengthId: source.kind === 'stock' ? source.id : null, offcutId: source.kind === 'offcut' ? source.id : null,
           quantityDelta: source.kind === 'stock' ? -1 : 0, lengthMm: board.length,
-          valuePence: source.kind === 'stock' ? board.cost : valueOf(sectionId, board.length), planId, jobId,
+          valuePence: source.kind === 'stock' ? Math.round(board.cost * 100) : valueOf(sectionId, board.length), planId, jobId,
         });
         if (newOffcutId) {
           rows.movements.push({
@@ -154,7 +155,7 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
         });
       }
     }
-    const totals = sumPlanTotals(planSections);
+    const totals = summarisePlan(planSections);
     rows.plans.push({
       id: planId, jobId, status: 'done', settings: SETTINGS, sections: planSections, totals,
       pricePence: totals.stockCostPence + totals.cuts * 25, createdBy: userIds.hand, createdAt: plannedAt, releasedAt: plannedAt,

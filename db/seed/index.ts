@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import type { PgliteDatabase } from 'drizzle-orm/pglite';
 import { hashPassword } from '@/lib/auth/password';
 import * as schema from '../schema';
+import { seedDemoPlans } from './demo-plans';
 import {
   DEMO_PASSWORD,
   demoJobItems,
@@ -13,6 +14,7 @@ import {
   rackLocations,
   seededRandom,
 } from './demo-yard';
+import { seedDemoFrameSchedules } from './frames';
 import { seedHistory } from './history';
 
 type SeedDb = PgliteDatabase<typeof schema>;
@@ -24,7 +26,7 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const random = seededRandom(20261201);
 
-  await db.transaction(async (tx) => {
+  const handId = await db.transaction(async (tx) => {
     const users = await tx
       .insert(schema.users)
       .values(demoUsers.map((u) => ({ ...u, passwordHash })))
@@ -113,9 +115,11 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
         })),
       );
     }
-
+    await seedDemoFrameSchedules(tx, { sectionIds, userId: users.find((u) => u.role === 'yard_hand')!.id });
     const userId = (role: string) => users.find((u) => u.role === role)!.id;
     await seedHistory(tx, { now, userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') } });
+    return users.find((u) => u.role === 'yard_hand')!.id;
   });
+  await seedDemoPlans(db, handId);
   return true;
 }

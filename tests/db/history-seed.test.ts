@@ -1,4 +1,4 @@
-import { eq, sql } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import { afterAll, describe, expect, it } from 'vitest';
 import * as schema from '@/db/schema';
 import type { BoardPiece, PlanSection, PlanTotals } from '@/lib/plans/plan-shapes';
@@ -29,11 +29,12 @@ describe('seeded yard history', () => {
     await close();
   });
 
-  it('every kept remainder became a rack offcut with an offcut_made movement', async () => {
+  it('every kept remainder of a cut board became a rack offcut with an offcut_made movement', async () => {
     const { db, close } = await createTestDb();
-    const [{ kept }] = await db.select({ kept: sql<number>`count(*)::int` }).from(schema.planBoards).where(eq(schema.planBoards.keepRemainder, true));
+    const cut = and(eq(schema.planBoards.keepRemainder, true), eq(schema.planBoards.status, 'done'));
+    const [{ kept }] = await db.select({ kept: sql<number>`count(*)::int` }).from(schema.planBoards).where(cut);
     const [{ made }] = await db.select({ made: sql<number>`count(*)::int` }).from(schema.stockMovements).where(eq(schema.stockMovements.kind, 'offcut_made'));
-    const [{ linked }] = await db.select({ linked: sql<number>`count(new_offcut_id)::int` }).from(schema.planBoards);
+    const [{ linked }] = await db.select({ linked: sql<number>`count(new_offcut_id)::int` }).from(schema.planBoards).where(cut);
     expect(made).toBe(kept);
     expect(linked).toBe(kept);
     await close();

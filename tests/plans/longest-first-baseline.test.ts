@@ -58,4 +58,27 @@ describe('longestFirstBaseline (hand-worked)', () => {
       { numRuns: 40 },
     );
   });
+  // Two cases worked by hand by the planning side, kept here. Scrap follows PlanTotals (trim plus
+  // remainders shorter than the minimum offcut), the same definition as the solver's plans.
+  it('packs longest first into the first board that fits (no trim)', () => {
+    // Board 1: 2000 + 3 + 2000 + 3 = 4006, 794 left: 1500 does not fit. Board 2: 1500 + 3 + 1500 + 3 = 3006,
+    // then 1000 + 3 → 4009 ≤ 4803. Remainders 794 and 791 are both kept, so nothing is scrap.
+    const r = longestFirstBaseline({
+      kerf: 3, trim: 0, minOffcut: 300, timeLimitMs: 100, offcuts: [],
+      stock: [{ id: 'S1', length: 4800, cost: 12 }],
+      pieces: [{ id: 'a', length: 2000, quantity: 2 }, { id: 'b', length: 1500, quantity: 2 }, { id: 'c', length: 1000, quantity: 1 }],
+    });
+    expect(r).toEqual({ boards: 2, cost: 24, scrap: 0 });
+  });
+
+  it('takes trim and its kerf off new stock', () => {
+    // usable = 2400 − 10 − 3 = 2387: a 2390 piece does not fit a 2400 board, so it goes on the 3000.
+    const r = longestFirstBaseline({
+      kerf: 3, trim: 10, minOffcut: 300, timeLimitMs: 100, offcuts: [],
+      stock: [{ id: 'S3', length: 3000, cost: 9 }, { id: 'S2', length: 2400, cost: 7 }],
+      pieces: [{ id: 'a', length: 2390, quantity: 1 }],
+    });
+    expect(r.boards).toBe(1);
+    expect(r.cost).toBe(9);
+  });
 });

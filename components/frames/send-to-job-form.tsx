@@ -1,0 +1,84 @@
+'use client';
+
+import { useMutation } from '@tanstack/react-query';
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Field } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/queries/fetch-json';
+import { sendScheduleToJobRequest, type SendToJobRequest } from '@/lib/queries/frames';
+
+export type OpenJob = { id: number; reference: string; customerName: string; status: string };
+
+type Props = { scheduleId: number; customerName: string; openJobs: OpenJob[]; disabled: boolean; beforeSend: () => Promise<void> };
+
+/** Sends the saved cut list, summed by section, to a new job or a draft or planned one, then opens the job. */
+export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, beforeSend }: Props) {
+  const router = useRouter();
+  const [target, setTarget] = useState<'new' | 'existing'>('new');
+  const send = useMutation({
+    mutationFn: async (body: SendToJobRequest) => {
+      await beforeSend();
+      return sendScheduleToJobRequest(scheduleId, body);
+    },
+    onSuccess: ({ jobId }) => router.push(`/jobs/${jobId}`),
+  });
+  const issues = send.error instanceof ApiError ? ((send.error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+  const error = (path: string) => issues.find((i) => i.path === path)?.message;
+
+  function onSubmit(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    if (target === 'existing') send.mutate({ jobId: Number(form.get('jobId') ?? 0) });
+    else
+      send.mutate({
+        newJob: {
+          customerName: String(form.get('customerName') ?? ''),
+          reference: String(form.get('reference') ?? '') || undefined,
+          dueDate: String(form.get('dueDate') ?? '') || undefined,
+        },
+      });
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" data-testid="send-to-job-form" noValidate>
+      <fieldset className="flex flex-wrap gap-4">
+        <legend className="mb-2 text-sm font-semibold">Send the cut list to</legend>
+        {(['new', 'existing'] as const).map((value) => (
+          <label key={value} className="flex min-h-11 items-center gap-2">
+            <input type="radio" name="target" className="size-5" checked={target === value} onChange={() => setTarget(value)} />
+            {value === 'new' ? 'A new job' : 'A draft or planned job'}
+          </label>
+        ))}
+      </fieldset>
+      {target === 'new' ? (
+        <div className="grid gap-3 sm:grid-cols-3">
+          <Field label="Customer" error={error('newJob.customerName')}>
+            {(p) => <input {...p} name="customerName" defaultValue={customerName} autoComplete="off" />}
+          </Field>
+          <Field label="Job reference" hint="Blank: the next number" error={error('newJob.reference')}>
+            {(p) => <input {...p} name="reference" autoComplete="off" />}
+          </Field>
+          <Field label="Due date" error={error('newJob.dueDate')}>{(p) => <input {...p} name="dueDate" type="date" />}</Field>
+        </div>
+      ) : (
+        <Field label="Job" error={error('jobId')} hint="A planned job goes back to draft: its plan no longer covers all its pieces.">
+          {(p) => (
+            <select {...p} name="jobId" defaultValue="">
+              <option value="" disabled>Choose a job…</option>
+              {openJobs.map((j) => (
+                <option key={j.id} value={j.id}>{`${j.reference} · ${j.customerName} (${j.status})`}</option>
+              ))}
+            </select>
+          )}
+        </Field>
+      )}
+      {send.error && !issues.length && <Notice tone="error">{send.error.message}</Notice>}
+      {send.isSuccess && <Notice>Sent. Opening the job…</Notice>}
+      <Button type="submit" size="lg" disabled={disabled || send.isPending || send.isSuccess}>
+        {send.isPending ? 'Sending…' : 'Send cut list to job'}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,52 @@
+// Builds a whole plan from a job's planning data: solver input and result per section, totals,
+// price and the saw's board list. No database access, so the demo seed can use it too.
+import type { SolveInput, SolvePlan } from '@/solver';
+import { priceCuttingPlan } from '@/lib/pricing';
+import { buildSolverInput, type PlanningItem, type PlanningOffcut, type PlanningStock } from './build-solver-input';
+import type { PlanSection, PlanSettings } from './plan-shapes';
+import { planBoardRows, summarisePlan } from './summarise-plan';
+
+export type PlanningData = {
+  items: (PlanningItem & { sectionId: number; label: string })[];
+  sections: { id: number; name: string }[];
+  stock: (PlanningStock & { sectionId: number })[];
+  offcuts: (PlanningOffcut & { sectionId: number })[];
+};
+
+export async function composePlan({
+  data,
+  settings,
+  perCutChargePence,
+  solve,
+}: {
+  data: PlanningData;
+  settings: PlanSettings;
+  perCutChargePence: number;
+  solve: (input: SolveInput) => SolvePlan | Promise<SolvePlan>;
+}) {
+  const planSections: PlanSection[] = [];
+  for (const section of [...data.sections].sort((a, b) => a.name.localeCompare(b.name))) {
+    const input = buildSolverInput({
+      items: data.items.filter((i) => i.sectionId === section.id),
+      stock: data.stock.filter((s) => s.sectionId === section.id),
+      offcuts: data.offcuts.filter((o) => o.sectionId === section.id),
+      settings,
+    });
+    planSections.push({ sectionId: section.id, sectionName: section.name, input, output: await solve(input) });
+  }
+  const price = priceCuttingPlan({
+    perCutCharge: perCutChargePence / 100,
+    sections: planSections.map((s) => ({
+      sectionName: s.sectionName,
+      boards: s.output.boards.map((b) => ({ source: b.source, length: b.length, cost: b.cost, cuts: b.pieces.length })),
+    })),
+  });
+  const labels = new Map(data.items.map((i) => [i.id, i.label]));
+  return {
+    sections: planSections,
+    totals: summarisePlan(planSections),
+    price,
+    pricePence: Math.round(price.total * 100),
+    boards: planBoardRows(planSections, labels),
+  };
+}

@@ -1,0 +1,36 @@
+import 'server-only';
+import { getDb } from '@/db';
+import { AppError } from '@/lib/errors';
+import type { CreatePlanBody } from '@/lib/validations/plans';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
+import { composePlan } from './compose-plan';
+import { getPlanById } from './get-plan';
+import { loadPlanningData } from './load-planning-data';
+import { insertPlan } from './insert-plan';
+import type { PlanSettings } from './plan-shapes';
+import { runSolver } from './run-solver';
+
+const DEFAULT_TIME_LIMIT_MS = 2_000;
+
+/** Plans a job section by section with the solver and stores the plan with its saw board list. */
+export async function createPlan({ jobId, overrides, userId }: { jobId: number; overrides: CreatePlanBody; userId: number }) {
+  const db = await getDb();
+  const data = await loadPlanningData(db, jobId);
+  if (['released', 'cutting', 'done', 'cancelled'].includes(data.job.status)) {
+    throw new AppError('conflict', `Job ${data.job.reference} is ${data.job.status}; only draft or planned jobs can be planned.`);
+  }
+  if (data.items.length === 0) throw new AppError('invalid', 'The job has no line items to plan yet.');
+  const yard = await getYardSettings(db);
+  const settings: PlanSettings = {
+    kerfMm: overrides.kerfMm ?? yard.kerfMm,
+    trimMm: overrides.trimMm ?? yard.trimMm,
+    minOffcutMm: overrides.minOffcutMm ?? yard.minOffcutMm,
+    useOffcuts: overrides.useOffcuts ?? true,
+    stockLengthIds: overrides.stockLengthIds ?? null,
+    timeLimitMs: overrides.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS,
+  };
+
+  const plan = await composePlan({ data, settings, perCutChargePence: yard.perCutChargePence, solve: runSolver });
+  const planId = await insertPlan(db, { jobId, settings, plan, userId });
+  return getPlanById({ planId });
+}

@@ -1,0 +1,112 @@
+// Whole-plan figures and the saw's board list, from the solver's per-section results. Pure.
+import { longestFirstBaseline } from './longest-first-baseline';
+import {
+  parsePieceId,
+  parseSourceId,
+  type BoardPiece,
+  type PlanSection,
+  type PlanTotals,
+} from './plan-shapes';
+
+export type BoardRow = {
+  boardNo: number;
+  sectionId: number;
+  source: 'stock' | 'offcut';
+  stockLengthId: number | null;
+  offcutId: number | null;
+  lengthMm: number;
+  trimMm: number;
+  pieces: BoardPiece[];
+  remainderMm: number;
+  keepRemainder: boolean;
+};
+
+export function summarisePlan(sections: PlanSection[]): PlanTotals {
+  const t: PlanTotals = {
+    boards: 0,
+    stockBoards: 0,
+    offcutsUsed: 0,
+    materialMm: 0,
+    pieceMm: 0,
+    kerfMm: 0,
+    scrapMm: 0,
+    keptMm: 0,
+    keptOffcuts: 0,
+    yieldPercent: 0,
+    stockCostPence: 0,
+    cuts: 0,
+    lowerBoundBoards: 0,
+    gapBoards: 0,
+    unplacedPieces: 0,
+    baseline: { boards: 0, stockCostPence: 0, scrapMm: 0 },
+  };
+  for (const { input, output } of sections) {
+    const o = output.totals;
+    t.boards += o.boards;
+    t.offcutsUsed += o.offcutsUsed;
+    t.stockBoards += o.boards - o.offcutsUsed;
+    t.materialMm += o.materialLength;
+    t.pieceMm += o.pieceLength;
+    t.kerfMm += o.kerfLoss;
+    t.scrapMm += o.scrap;
+    t.keptMm += o.keptLength;
+    t.keptOffcuts += o.keptOffcuts;
+    t.stockCostPence += Math.round(
+      output.boards.filter((b) => b.source === 'stock').reduce((sum, b) => sum + b.cost, 0) * 100,
+    );
+    t.cuts += output.boards.reduce((sum, b) => sum + b.pieces.length, 0);
+    t.lowerBoundBoards += output.lowerBound.boards;
+    t.gapBoards += output.gap.boards;
+    t.unplacedPieces += output.unplaced.length;
+    const base = longestFirstBaseline(input);
+    t.baseline.boards += base.boards;
+    t.baseline.stockCostPence += Math.round(base.cost * 100);
+    t.baseline.scrapMm += base.scrap;
+  }
+  const consumed = t.materialMm - t.keptMm;
+  t.yieldPercent = consumed > 0 ? Math.round((1000 * t.pieceMm) / consumed) / 10 : 0;
+  return t;
+}
+
+/** The boards in saw order: section by section, offcuts first, then the longest boards. */
+export function planBoardRows(sections: PlanSection[], labels: Map<number, string>): BoardRow[] {
+  const rows: BoardRow[] = [];
+  for (const { sectionId, input, output } of sections) {
+    const boards = [...output.boards].sort(
+      (a, b) => Number(a.source === 'stock') - Number(b.source === 'stock') || b.length - a.length,
+    );
+    for (const board of boards) {
+      const source = parseSourceId(board.sourceId);
+      rows.push({
+        boardNo: rows.length + 1,
+        sectionId,
+        source: board.source,
+        stockLengthId: source.kind === 'stock' ? source.id : null,
+        offcutId: source.kind === 'offcut' ? source.id : null,
+        lengthMm: board.length,
+        trimMm: board.trim,
+        pieces: boardPieces(board.pieces, board.pieceLengths, board.marks, input.kerf, labels),
+        remainderMm: board.remainder,
+        keepRemainder: board.remainderKept,
+      });
+    }
+  }
+  return rows;
+}
+
+/** The last piece may end exactly at the board's end, where no cut (and so no mark) is needed. */
+function boardPieces(
+  pieceIds: string[],
+  lengths: number[],
+  marks: number[],
+  kerf: number,
+  labels: Map<number, string>,
+): BoardPiece[] {
+  let start = 0;
+  return pieceIds.map((pieceId, i) => {
+    const jobItemId = parsePieceId(pieceId);
+    const markMm = marks[i] ?? start + lengths[i];
+    start = markMm + kerf;
+    return { pieceId, jobItemId, label: labels.get(jobItemId) ?? '', lengthMm: lengths[i], markMm };
+  });
+}

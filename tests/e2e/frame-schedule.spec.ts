@@ -1,0 +1,94 @@
+import { expect, test, type Locator, type Page } from '@playwright/test';
+import { DEMO, signIn } from './support/sign-in';
+
+/** The frame schedule editor as a yard hand uses it. */
+class FrameEditor {
+  constructor(readonly page: Page) {}
+  panel(index: number): Locator {
+    return this.page.getByTestId(`panel-card-${index}`);
+  }
+  async add(kind: string) {
+    await this.page.getByTestId('add-panel').getByRole('button', { name: `+ ${kind}`, exact: true }).click();
+  }
+  async fill(index: number, values: Record<string, string>) {
+    for (const [label, value] of Object.entries(values)) {
+      const field = this.panel(index).getByLabel(label, { exact: true });
+      if ((await field.evaluate((el) => el.tagName)) === 'SELECT') await field.selectOption({ label: value });
+      else await field.fill(value);
+    }
+  }
+  async previewUpToDate() {
+    await expect(this.page.getByTestId('preview-state')).toHaveText('Up to date');
+  }
+  row(label: string): Locator {
+    return this.page.getByTestId('piece-schedule').getByRole('row').filter({ hasText: label });
+  }
+}
+
+test('a yard hand describes a lean-to, previews it, sends it to a new job and plans it', async ({ page }) => {
+  await signIn(page, DEMO.hand);
+  await page.goto('/frames');
+  const start = page.getByTestId('new-schedule-form');
+  await start.getByLabel('Schedule name').fill('Lean-to for the Quarry Lane garden');
+  await start.getByLabel('Customer').fill('Nell Ashdown');
+  await start.getByRole('button', { name: 'Start schedule' }).click();
+  await expect(page).toHaveURL(/\/frames\/\d+$/);
+  await expect(page.getByTestId('structure-notice')).toContainText('does not size structure');
+
+  const editor = new FrameEditor(page);
+  await editor.add('Wall');
+  await editor.fill(0, { 'Panel name': 'back wall', Section: '47×100 C24 treated', Length: '2400', Height: '2200', 'Stud centres': '400' });
+  await editor.add('Wall');
+  // Feet-inches are read too: 6'-2 13/16" is 1900 mm to the nearest millimetre.
+  await editor.fill(1, { 'Panel name': 'front wall', Length: '2.4 m', Height: `6'-2 13/16"`, 'Stud centres': '400' });
+  await editor.add('Sloped wall');
+  await editor.fill(2, { 'Panel name': 'side wall', Length: '1500', 'Low side height': '1900', 'High side height': '2200', 'Stud centres': '400' });
+  await editor.add('Door or window opening');
+  await editor.fill(3, { 'Panel name': 'side door', 'In wall': 'side wall', 'From wall start': '450', Width: '700', Height: '1650' });
+  await editor.add('Roof');
+  await editor.fill(4, { 'Panel name': 'roof', 'Rafter section': '47×150 C24 treated', 'Span (front to back)': '1500', Rise: '300', 'Length along the walls': '2400', 'Rafter centres': '400' });
+
+  await editor.previewUpToDate();
+  await expect(editor.row('front wall stud')).toContainText('1759'); // 1900 less a bottom plate and two top plates of 47
+  await expect(editor.row('side door head')).toBeVisible();
+  await expect(editor.row('roof rafter')).toContainText('11.3°');
+  await expect(editor.panel(0).getByRole('img', { name: 'back wall (elevation)' })).toBeVisible();
+  await expect(editor.panel(2).getByRole('img', { name: 'side wall (elevation)' })).toBeVisible();
+
+  // Bad geometry is named on its field, and the cut list cannot be sent until it is fixed.
+  await editor.fill(2, { 'High side height': '1800' });
+  await expect(page.getByTestId('preview-issues')).toContainText('lower than the low side');
+  await expect(editor.panel(2).getByText('lower than the low side')).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Send cut list to job' })).toBeDisabled();
+  await editor.fill(2, { 'High side height': '2200' });
+  await editor.previewUpToDate();
+
+  await page.getByRole('button', { name: 'Save schedule' }).click();
+  await expect(page.getByTestId('save-state')).toHaveText('All changes saved');
+
+  const send = page.getByTestId('send-to-job-form');
+  await expect(send.getByLabel('Customer')).toHaveValue('Nell Ashdown');
+  await send.getByRole('button', { name: 'Send cut list to job' }).click();
+  await expect(page).toHaveURL(/\/jobs\/\d+$/);
+  const jobId = Number(/\/jobs\/(\d+)$/.exec(page.url())![1]);
+
+  // The job page's plan button is not in this build yet, so the spec plans through the same API it calls.
+  const planned = await page.request.post(`/api/jobs/${jobId}/plans`, { data: {} });
+  expect(planned.status()).toBe(201);
+  const plan = await planned.json();
+  expect(plan.jobId).toBe(jobId);
+  expect(plan.boards.length).toBeGreaterThan(0);
+  const cut = plan.boards.flatMap((b: { pieces: { label: string }[] }) => b.pieces.map((p) => p.label));
+  expect(cut).toEqual(expect.arrayContaining(['roof rafter', 'side door head']));
+
+  // The schedule remembers the job made from it.
+  await page.goto('/frames');
+  await expect(page.getByTestId('schedule-list').getByRole('row').filter({ hasText: 'Quarry Lane' })).toContainText('J-');
+});
+
+test('a saw operator cannot open frame schedules or use their API', async ({ page }) => {
+  await signIn(page, DEMO.saw);
+  await page.goto('/frames');
+  await expect(page.getByTestId('access-denied')).toBeVisible();
+  expect((await page.request.post('/api/frames/preview', { data: { unit: 'mm', panels: [] } })).status()).toBe(403);
+});
