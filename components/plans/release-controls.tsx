@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/queries/fetch-json';
+import { StockShortfalls } from './stock-shortfalls';
 import { createPlanRequest, releasePlanRequest, unreleasePlanRequest, type PlanViewData } from '@/lib/queries/plans';
 
 type Taken = { id: number; tag: string; status: string };
@@ -48,6 +49,7 @@ export function ReleaseControls({ plan }: { plan: PlanViewData }) {
 
   return (
     <div className="space-y-3" data-testid="release-controls">
+      {plan.status === 'planned' && <StockShortfalls planId={plan.id} />}
       <div className="flex flex-wrap gap-2">
         {plan.status === 'planned' && (
           <Button size="lg" disabled={busy} onClick={() => act(() => releasePlanRequest(plan.id))}>

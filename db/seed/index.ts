@@ -15,6 +15,7 @@ import {
   seededRandom,
 } from './demo-yard';
 import { seedDemoFrameSchedules } from './frames';
+import { seedHistory } from './history';
 
 type SeedDb = PgliteDatabase<typeof schema>;
 const DAY_MS = 86_400_000;
@@ -115,6 +116,8 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       );
     }
     await seedDemoFrameSchedules(tx, { sectionIds, userId: users.find((u) => u.role === 'yard_hand')!.id });
+    const userId = (role: string) => users.find((u) => u.role === role)!.id;
+    await seedHistory(tx, { now, userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') } });
     return users.find((u) => u.role === 'yard_hand')!.id;
   });
   await seedDemoPlans(db, handId);

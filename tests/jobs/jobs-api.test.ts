@@ -25,7 +25,7 @@ describe('GET /api/sections', () => {
     const res = await call(listSections);
     expect(res.status).toBe(200);
     const cls = res.json.sections.find((s: { code: string }) => s.code === 'CLS3889');
-    expect(cls.stockLengths.map((l: { lengthMm: number }) => l.lengthMm)).toEqual([2400, 3000, 3600, 4800]);
+    expect(cls.lengths.map((l: { lengthMm: number }) => l.lengthMm)).toEqual([2400, 3000, 3600, 4800]);
     actAs(AS.nobody);
     expect((await call(listSections)).status).toBe(401);
   });

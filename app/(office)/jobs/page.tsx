@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { JobsBoard } from '@/components/jobs/jobs-board';
 import { AccessDenied } from '@/components/layout/access-denied';
 import { PageHeader } from '@/components/ui/page-header';
+import { SawProgressPanel } from '@/components/saw/saw-progress-panel';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { can } from '@/lib/auth/permissions';
 
@@ -18,6 +19,7 @@ export default async function JobsPage() {
         lead="Customer cut lists, soonest due first."
         actions={can(user.role, 'mail:outbox') ? <Link href="/outbox" className="font-semibold text-spruce underline">Outbox: sent cut sheets</Link> : undefined}
       />
+      <SawProgressPanel />
       <JobsBoard />
     </>
   );

@@ -1,8 +1,14 @@
-// GET /api/sections – the yard's active sections with their stock lengths
+// GET /api/sections – the sections catalogue with stock lengths (everyone signed in)
+// POST /api/sections – add a section (owner)
 import { NextResponse } from 'next/server';
-import { route } from '@/lib/api/route';
-import { listSectionsWithStock } from '@/lib/sections/list-sections';
+import { parseJsonBody, route } from '@/lib/api/route';
+import { listSections } from '@/lib/stock/list-sections';
+import { createSection } from '@/lib/stock/save-section';
+import { sectionBodySchema } from '@/lib/validations/stock';
 
-export const GET = route('sections:read', async () => {
-  return NextResponse.json({ sections: await listSectionsWithStock() });
+export const GET = route('sections:read', async () => NextResponse.json({ sections: await listSections() }));
+
+export const POST = route('sections:edit', async ({ req }) => {
+  const body = await parseJsonBody(req, sectionBodySchema);
+  return NextResponse.json({ section: await createSection({ body }) }, { status: 201 });
 });

@@ -1,0 +1,26 @@
+import type { Metadata } from 'next';
+import { AccessDenied } from '@/components/layout/access-denied';
+import { SettingsForm } from '@/components/yard/settings-form';
+import { Card } from '@/components/ui/field';
+import { PageHeader } from '@/components/ui/page-header';
+import { requirePageUser } from '@/lib/auth/page-user';
+import { can } from '@/lib/auth/permissions';
+import { getYardSettings } from '@/lib/yard/yard-settings';
+
+export const metadata: Metadata = { title: 'Yard settings' };
+
+export default async function SettingsPage() {
+  const user = await requirePageUser();
+  if (!can(user.role, 'settings:edit')) return <AccessDenied />;
+  const s = await getYardSettings();
+  return (
+    <>
+      <PageHeader title="Yard settings" lead="How the yard cuts and what it charges. The tool counts and cuts timber; it does not size structure." />
+      <Card>
+        <SettingsForm
+          initial={{ yardName: s.yardName, kerfMm: s.kerfMm, trimMm: s.trimMm, minOffcutMm: s.minOffcutMm, displayUnit: s.displayUnit, perCutChargePence: s.perCutChargePence, clearOffcutsAfterDays: s.clearOffcutsAfterDays }}
+        />
+      </Card>
+    </>
+  );
+}

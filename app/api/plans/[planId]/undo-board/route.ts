@@ -1,0 +1,8 @@
+// POST /api/plans/[planId]/undo-board – take back the plan's most recent board confirmation
+import { NextResponse } from 'next/server';
+import { parseId, route } from '@/lib/api/route';
+import { undoLastBoard } from '@/lib/saw/undo-last-board';
+
+export const POST = route<{ planId: string }>('saw:cut', async ({ params }) => {
+  return NextResponse.json(await undoLastBoard({ planId: parseId(params.planId, 'That plan') }));
+});

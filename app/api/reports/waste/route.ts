@@ -1,0 +1,10 @@
+// GET /api/reports/waste?from=YYYY-MM-DD&to=YYYY-MM-DD – the owner's waste report for a date range
+import { NextResponse } from 'next/server';
+import { route } from '@/lib/api/route';
+import { getWasteReport } from '@/lib/reports/get-reports';
+import { reportRangeSchema } from '@/lib/reports/report-range';
+
+export const GET = route('reports:read', async ({ req }) => {
+  const range = reportRangeSchema.parse(Object.fromEntries(req.nextUrl.searchParams));
+  return NextResponse.json({ range, report: await getWasteReport(range) });
+});

@@ -1,0 +1,13 @@
+// GET /api/settings – the yard's cutting and display settings (everyone signed in)
+// PATCH /api/settings – change them (owner)
+import { NextResponse } from 'next/server';
+import { parseJsonBody, route } from '@/lib/api/route';
+import { yardSettingsBodySchema } from '@/lib/validations/yard-settings';
+import { getYardSettings, updateYardSettings } from '@/lib/yard/yard-settings';
+
+export const GET = route('sections:read', async () => NextResponse.json({ settings: await getYardSettings() }));
+
+export const PATCH = route('settings:edit', async ({ req }) => {
+  const body = await parseJsonBody(req, yardSettingsBodySchema);
+  return NextResponse.json({ settings: await updateYardSettings({ body }) });
+});

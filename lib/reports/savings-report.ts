@@ -1,0 +1,44 @@
+// What Kerfwise saved: for each planned job, new stock in its plan against a plain longest-first plan.
+export type PlannedJobRow = {
+  planId: number;
+  jobReference: string;
+  customerName: string;
+  plannedAt: Date;
+  stockBoards: number;
+  stockCostPence: number;
+  baselineBoards: number;
+  baselineCostPence: number;
+};
+
+export type SavingsLine = PlannedJobRow & { savedBoards: number; savedPence: number; runningSavedPence: number };
+
+export type SavingsReport = {
+  jobs: SavingsLine[];
+  totals: { jobs: number; stockBoards: number; baselineBoards: number; savedBoards: number; stockCostPence: number; baselineCostPence: number; savedPence: number };
+};
+
+export function computeSavingsReport({ plans, start, end }: { plans: PlannedJobRow[]; start: Date; end: Date }): SavingsReport {
+  let running = 0;
+  const jobs = plans
+    .filter((p) => p.plannedAt >= start && p.plannedAt < end)
+    .sort((a, b) => a.plannedAt.getTime() - b.plannedAt.getTime() || a.planId - b.planId)
+    .map((p) => {
+      const savedPence = p.baselineCostPence - p.stockCostPence;
+      running += savedPence;
+      return { ...p, savedBoards: p.baselineBoards - p.stockBoards, savedPence, runningSavedPence: running };
+    });
+  const sum = (key: 'stockBoards' | 'baselineBoards' | 'savedBoards' | 'stockCostPence' | 'baselineCostPence' | 'savedPence') =>
+    jobs.reduce((n, j) => n + j[key], 0);
+  return {
+    jobs,
+    totals: {
+      jobs: jobs.length,
+      stockBoards: sum('stockBoards'),
+      baselineBoards: sum('baselineBoards'),
+      savedBoards: sum('savedBoards'),
+      stockCostPence: sum('stockCostPence'),
+      baselineCostPence: sum('baselineCostPence'),
+      savedPence: sum('savedPence'),
+    },
+  };
+}

@@ -1,0 +1,29 @@
+import 'server-only';
+import { asc } from 'drizzle-orm';
+import { getDb } from '@/db';
+import { sections, stockLengths } from '@/db/schema';
+
+export type SectionWithLengths = Awaited<ReturnType<typeof listSections>>[number];
+
+/** The sections catalogue with each section's stock lengths, shortest first. */
+export async function listSections() {
+  const db = await getDb();
+  const [sectionRows, lengthRows] = await Promise.all([
+    db.select().from(sections).orderBy(asc(sections.name)),
+    db.select().from(stockLengths).orderBy(asc(stockLengths.lengthMm)),
+  ]);
+  return sectionRows.map((s) => ({
+    id: s.id,
+    code: s.code,
+    name: s.name,
+    thicknessMm: s.thicknessMm,
+    widthMm: s.widthMm,
+    species: s.species,
+    grade: s.grade,
+    treatment: s.treatment,
+    active: s.active,
+    lengths: lengthRows
+      .filter((l) => l.sectionId === s.id)
+      .map((l) => ({ id: l.id, lengthMm: l.lengthMm, pricePence: l.pricePence, onHand: l.onHand, active: l.active })),
+  }));
+}

@@ -1,0 +1,26 @@
+import 'server-only';
+import { desc, eq, inArray } from 'drizzle-orm';
+import { getDb } from '@/db';
+import { sections, stockMovements, users } from '@/db/schema';
+
+/** The latest receipts and stocktakes: who, when and why. */
+export async function listStockMovements({ limit = 30 }: { limit?: number } = {}) {
+  const db = await getDb();
+  return db
+    .select({
+      id: stockMovements.id,
+      at: stockMovements.at,
+      kind: stockMovements.kind,
+      sectionName: sections.name,
+      lengthMm: stockMovements.lengthMm,
+      quantityDelta: stockMovements.quantityDelta,
+      reason: stockMovements.reason,
+      userName: users.name,
+    })
+    .from(stockMovements)
+    .innerJoin(sections, eq(sections.id, stockMovements.sectionId))
+    .leftJoin(users, eq(users.id, stockMovements.userId))
+    .where(inArray(stockMovements.kind, ['receipt', 'stocktake']))
+    .orderBy(desc(stockMovements.at), desc(stockMovements.id))
+    .limit(limit);
+}

@@ -1,0 +1,16 @@
+import { z } from 'zod';
+import { DISPLAY_UNITS } from '@/db/enums';
+
+const mm = (what: string, max: number, min = 0) =>
+  z.number({ message: `Enter the ${what} in whole millimetres.` }).int(`Enter the ${what} in whole millimetres.`).min(min, `The ${what} must be at least ${min} mm.`).max(max, `The ${what} may be at most ${max} mm.`);
+
+export const yardSettingsBodySchema = z.object({
+  yardName: z.string().trim().min(1, 'Enter the yard name.').max(80),
+  kerfMm: mm('kerf', 20),
+  trimMm: mm('end trim', 100),
+  minOffcutMm: mm('minimum kept offcut', 3000, 50),
+  displayUnit: z.enum(DISPLAY_UNITS, { message: 'Choose millimetres or feet and inches.' }),
+  perCutChargePence: z.number().int('Whole pence.').min(0, 'A charge cannot be negative.').max(10_000),
+  clearOffcutsAfterDays: z.number().int('Whole days.').min(7, 'At least a week.').max(3650),
+});
+export type YardSettingsBody = z.infer<typeof yardSettingsBodySchema>;

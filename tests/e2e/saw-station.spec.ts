@@ -1,0 +1,130 @@
+import { expect, test, type Browser } from '@playwright/test';
+import { DEMO, signIn } from './support/sign-in';
+import { SawStationPage } from './support/saw-station';
+
+const tablet = (width: number, height: number) => ({ viewport: { width, height }, hasTouch: true, isMobile: false });
+
+async function officePage(browser: Browser) {
+  const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const page = await context.newPage();
+  await signIn(page, DEMO.hand);
+  return page;
+}
+
+test.describe('the saw station in landscape (1024×768, touch)', () => {
+  test.use(tablet(1024, 768));
+
+  test('the operator cuts a whole released plan while the office watches the progress', async ({ page, browser }) => {
+    await signIn(page, DEMO.saw);
+    await expect(page).toHaveURL(/\/saw$/);
+    await page.getByTestId('queue-J-1002').tap();
+    const saw = new SawStationPage(page);
+    await expect(saw.progress()).toContainText('0 of');
+    const { total } = await saw.boardsCut();
+    expect(total).toBeGreaterThan(3);
+
+    // The cautions are one line that opens on a tap.
+    await expect(page.getByTestId('safety-line')).toContainText('riving knife');
+    await page.getByTestId('safety-line').locator('summary').tap();
+    await expect(page.getByTestId('safety-line')).toContainText('own safe-working rules');
+    await page.getByTestId('safety-line').locator('summary').tap();
+
+    // The next cut is highlighted, and each "cut made" moves the highlight on.
+    await expect(page.getByTestId('cut-1')).toHaveAttribute('data-state', 'next');
+    await page.getByRole('button', { name: 'Cut 1 made' }).tap();
+    await expect(page.getByTestId('cut-1')).toHaveAttribute('data-state', 'done');
+    await expect(page.getByTestId('board-drawing')).toBeVisible();
+
+    await saw.confirmCurrentBoard();
+    await saw.confirmCurrentBoard();
+    await expect(saw.progress()).toContainText(`2 of ${total}`);
+
+    // Undo takes back exactly the last board.
+    const undo = page.getByRole('button', { name: /Undo board 2/ });
+    await undo.tap();
+    await expect(page.getByTestId('station-message')).toContainText('Board 2 is back to be cut');
+    await expect(saw.progress()).toContainText(`1 of ${total}`);
+    await saw.confirmCurrentBoard();
+
+    // The office sees the saw's progress, and it updates without a reload.
+    const office = await officePage(browser);
+    await office.goto('/jobs');
+    await expect(office.getByTestId('saw-progress-J-1002')).toContainText(`2 of ${total} boards cut`);
+    await saw.confirmCurrentBoard();
+    await expect(office.getByTestId('saw-progress-J-1002')).toContainText(`3 of ${total} boards cut`);
+
+    await saw.cutEverything();
+    await expect(saw.progress()).toContainText(`${total} of ${total}`);
+    await office.reload();
+    await expect(office.getByTestId('jobs-table').getByRole('row', { name: /J-1002/ })).toContainText('done');
+    await office.context().close();
+
+    await page.getByRole('link', { name: 'Back to the queue' }).tap();
+    await expect(page.getByTestId('queue-J-1002')).toHaveCount(0);
+  });
+});
+
+test.describe('the saw station in portrait (768×1024, touch)', () => {
+  test.use(tablet(768, 1024));
+
+  test('a bad board is re-planned at once, labels print, and new offcuts are on the rack', async ({ page, browser }) => {
+    // The yard hand releases J-1003, which uses rack offcuts.
+    const office = await officePage(browser);
+    const plan = await office.request.get('/api/plans/2');
+    expect(await plan.json()).toMatchObject({ status: 'planned' });
+    expect((await office.request.post('/api/plans/2/release')).status()).toBe(200);
+
+    await signIn(page, DEMO.saw);
+    await page.getByTestId('queue-J-1003').tap();
+    const saw = new SawStationPage(page);
+    await expect(saw.progress()).toContainText('0 of');
+    const before = await saw.boardsCut();
+
+    // Board 1 turns out split; the sound part is kept and the pieces are re-planned.
+    await page.getByRole('button', { name: 'Board is bad…' }).tap();
+    await page.getByRole('radio', { name: 'split' }).tap();
+    await page.getByLabel('Sound length still usable (optional)').fill('1500');
+    await page.getByRole('button', { name: 'Report and re-plan' }).tap();
+    await expect(page.getByTestId('station-message')).toContainText('Board 1 recorded as bad');
+    await expect(page.getByTestId('station-message')).toContainText('re-planned on board');
+    await expect(page.getByTestId('board-1')).toHaveAttribute('data-status', 'defective');
+    const after = await saw.boardsCut();
+    expect(after.total).toBeGreaterThan(before.total);
+    expect(after.done).toBe(1);
+
+    // Follow the new sequence to the end, noting the kept offcuts.
+    const tags = await saw.cutEverything();
+    expect(tags.length).toBeGreaterThan(0);
+
+    // Print the label of the first kept offcut, racked somewhere of the operator's choosing.
+    await page.goto('/saw/find');
+    await page.getByPlaceholder('Tag, e.g. K-0001').fill(tags[0].toLowerCase());
+    await page.getByRole('button', { name: 'Find' }).tap();
+    await expect(page.getByTestId('offcut-card')).toContainText('Rack intake');
+    await page.getByRole('link', { name: 'Print its label' }).tap();
+    const label = page.getByTestId(`label-${tags[0]}`);
+    await expect(label).toContainText(tags[0]);
+    await expect(label.locator('svg')).toBeVisible();
+    await label.getByLabel('Rack location').fill('Rack C2');
+    await label.getByRole('button', { name: 'Set place' }).tap();
+    await expect(label).toContainText('Rack C2');
+    await page.getByRole('link', { name: /A4 sheet/ }).tap();
+    await expect(page.getByTestId('label-sheet')).toHaveClass(/labels-a4/);
+
+    // Every new offcut is on the rack, available, where the finder can see it.
+    for (const tag of tags) {
+      const found = await page.request.get(`/api/saw/offcuts?tag=${tag}`);
+      expect(found.status()).toBe(200);
+      expect((await found.json()).offcut).toMatchObject({ tag, status: 'available' });
+    }
+    await page.goto('/saw/find');
+    await page.getByPlaceholder('Tag, e.g. K-0001').fill(tags[0]);
+    await page.getByRole('button', { name: 'Find' }).tap();
+    await expect(page.getByTestId('offcut-card')).toContainText('Rack C2');
+
+    // The office sees the job done.
+    await office.goto('/jobs');
+    await expect(office.getByTestId('jobs-table').getByRole('row', { name: /J-1003/ })).toContainText('done');
+    await office.context().close();
+  });
+});
