@@ -56,16 +56,25 @@ describe('POST /api/jobs', () => {
 
 describe('GET /api/jobs', () => {
   it('filters by search text, status and due date', async () => {
-    const all = await list();
-    expect(all.json.jobs.map((j: { reference: string }) => j.reference).sort()).toEqual(['J-1001', 'J-1002', 'J-1003', 'J-1004']);
-    expect((await list('?q=fenwick')).json.jobs.map((j: { reference: string }) => j.reference)).toEqual(['J-1002']);
-    expect((await list('?q=J-1003')).json.jobs).toHaveLength(1);
-    expect((await list('?status=cancelled')).json.jobs.map((j: { reference: string }) => j.reference)).toEqual(['J-1004']);
+    type Row = { reference: string; customerName: string; status: string; dueDate: string | null };
+    const refs = (rows: Row[]) => rows.map((j) => j.reference);
+    const all = (await list()).json.jobs as Row[];
+    expect(refs(all)).toEqual(expect.arrayContaining(['J-1001', 'J-1002', 'J-1003', 'J-1004']));
+    const fenwick = (await list('?q=fenwick')).json.jobs as Row[];
+    expect(refs(fenwick)).toContain('J-1002');
+    expect(fenwick.every((j) => /fenwick/i.test(j.customerName))).toBe(true);
+    expect(refs((await list('?q=J-1003')).json.jobs)).toEqual(['J-1003']);
+    const cancelled = (await list('?status=cancelled')).json.jobs as Row[];
+    expect(refs(cancelled)).toContain('J-1004');
+    expect(cancelled.every((j) => j.status === 'cancelled')).toBe(true);
     // Demo "now" is 2026-11-20; J-1002 is due in 2 days, J-1001 in 4, J-1003 in 7.
-    const soon = await list('?dueFrom=2026-11-20&dueTo=2026-11-25');
-    expect(soon.json.jobs.map((j: { reference: string }) => j.reference)).toEqual(['J-1002', 'J-1001']);
+    const soon = (await list('?dueFrom=2026-11-20&dueTo=2026-11-25')).json.jobs as Row[];
+    expect(refs(soon)).toEqual(expect.arrayContaining(['J-1002', 'J-1001']));
+    expect(refs(soon)).not.toContain('J-1003');
+    expect(soon.every((j) => j.dueDate! >= '2026-11-20' && j.dueDate! <= '2026-11-25')).toBe(true);
+    expect(soon.map((j) => j.dueDate)).toEqual([...soon.map((j) => j.dueDate)].sort());
     expect((await list('?status=nonsense')).status).toBe(422);
-    const j1001 = all.json.jobs.find((j: { reference: string }) => j.reference === 'J-1001');
+    const j1001 = all.find((j) => j.reference === 'J-1001');
     expect(j1001).toMatchObject({ itemCount: 5, pieceCount: 14 + 4 + 4 + 12 + 30 });
   });
 });
