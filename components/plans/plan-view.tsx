@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import Link from 'next/link';
 import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { PlanProgress } from '@/components/saw/plan-progress';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import type { PlanContext } from '@/lib/plans/get-plan-context';
 import { planQuery } from '@/lib/queries/plans';
@@ -34,6 +35,11 @@ export function PlanView({ planId, context, previousPlanId, canAct }: { planId: 
           <p className="text-bark-soft">
             {p.status} · kerf {p.settings.kerfMm} mm, end trim {p.settings.trimMm} mm, offcuts kept from {p.settings.minOffcutMm} mm{p.settings.useOffcuts ? '' : ', rack not used'}
           </p>
+          {(p.status === 'released' || p.status === 'done') && (
+            <p className="mt-1">
+              <PlanProgress planId={p.id} />
+            </p>
+          )}
         </div>
         <div className="no-print flex flex-wrap items-center gap-3">
           <UnitToggle />

@@ -72,10 +72,11 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
   await expect(page).toHaveURL(/\/jobs\/\d+$/);
   const jobId = Number(/\/jobs\/(\d+)$/.exec(page.url())![1]);
 
-  // The job page's plan button is not in this build yet, so the spec plans through the same API it calls.
-  const planned = await page.request.post(`/api/jobs/${jobId}/plans`, { data: {} });
-  expect(planned.status()).toBe(201);
-  const plan = await planned.json();
+  await page.getByRole('button', { name: 'Plan this job' }).click();
+  await expect(page).toHaveURL(/\/plans\/\d+$/, { timeout: 60_000 });
+  await expect(page.getByTestId('board-diagram').first()).toBeVisible();
+  const planId = Number(/\/plans\/(\d+)$/.exec(page.url())![1]);
+  const plan = await (await page.request.get(`/api/plans/${planId}`)).json();
   expect(plan.jobId).toBe(jobId);
   expect(plan.boards.length).toBeGreaterThan(0);
   const cut = plan.boards.flatMap((b: { pieces: { label: string }[] }) => b.pieces.map((p) => p.label));
