@@ -2,7 +2,8 @@
 //   min Σ cost(p)·x_p  s.t.  Σ a_ip·x_p ≥ demand_i,  Σ_{p on board kind j} x_p ≤ limit_j,  x ≥ 0.
 // Rows start covered by artificial columns with a big cost, so the first basis is the identity.
 
-import { DenseBasis, type SparseColumn } from './dense-basis';
+import { ColumnStore } from './column-store';
+import { DenseBasis } from './dense-basis';
 import { MAX_PRICING_CELLS, priceBestPatterns, pricingCells } from './pattern-pricing';
 
 export interface LpItem {
@@ -34,14 +35,6 @@ export interface LpResult {
   pivots: number;
 }
 
-interface Column extends SparseColumn {
-  cost: number;
-  /** 1/‖a‖: entering by normalised reduced cost takes far fewer degenerate pivots than plain Dantzig. */
-  scale?: number;
-  pattern?: Pattern;
-  artificial?: boolean;
-}
-
 const EPS = 1e-9;
 
 export function patternKey(p: Pattern): string {
@@ -65,7 +58,7 @@ export function solvePatternLp(
   const seenStart = new Set<string>();
   const maxCost = bins.reduce((s, b) => Math.max(s, b.cost), 0);
   const bigM = 2 * Math.max(1, maxCost) + 1;
-  const columns: Column[] = [];
+  const columns = new ColumnStore<Pattern>();
   const rhs = new Float64Array(m);
   // Start from the classic diagonal basis: for each piece length, a board cut to as many of it as fit
   // (on the cheapest unlimited board per piece); an artificial column only where no such board exists.
@@ -86,20 +79,20 @@ export function solvePatternLp(
       const counts = items.map((_, k) => (k === i ? bestCopies : 0));
       const pattern: Pattern = { bin: bestBin, counts, load: bestCopies * it.weight };
       seenStart.add(patternKey(pattern));
-      columns.push({ rows: [rowOfItem[i]], vals: [bestCopies], cost: bins[bestBin].cost, pattern });
+      columns.add([rowOfItem[i]], [bestCopies], bins[bestBin].cost, pattern);
     } else {
-      columns.push({ rows: [rowOfItem[i]], vals: [1], cost: bigM, artificial: true });
+      columns.add([rowOfItem[i]], [1], bigM, undefined, true);
     }
   });
   bins.forEach((b, j) => {
     if (rowOfBin[j] >= 0) {
       rhs[rowOfBin[j]] = b.limit;
-      columns.push({ rows: [rowOfBin[j]], vals: [1], cost: 0 });
+      columns.add([rowOfBin[j]], [1], 0);
     }
   });
-  const basis = columns.map((_, k) => k);
+  const basis = Array.from({ length: columns.count }, (_, k) => k);
   items.forEach((_, i) => {
-    if (rowOfItem[i] >= 0) columns.push({ rows: [rowOfItem[i]], vals: [-1], cost: 0 });
+    if (rowOfItem[i] >= 0) columns.add([rowOfItem[i]], [-1], 0);
   });
   const seen = seenStart;
   const addPattern = (p: Pattern): number => {
@@ -120,23 +113,21 @@ export function solvePatternLp(
       rows.push(rowOfBin[p.bin]);
       vals.push(1);
     }
-    columns.push({ rows, vals, cost: bins[p.bin].cost, pattern: p });
-    return columns.length - 1;
+    return columns.add(rows, vals, bins[p.bin].cost, p);
   };
   for (const p of opts.pool ?? []) addPattern(p);
 
-  let basisPos = new Int32Array(columns.length + 1024).fill(-1);
-  const isBasic = (c: number) => c < basisPos.length && basisPos[c] >= 0;
+  let basisPos = new Int32Array(columns.count + 1024).fill(-1);
   basis.forEach((c, k) => (basisPos[c] = k));
   // A tiny fixed perturbation of the right-hand side keeps the simplex from stalling on these
   // highly degenerate LPs; the reported value is the dual objective on the true data, so it stays a bound.
   const trueRhs = Float64Array.from(rhs);
   for (let r = 0; r < m; r++) rhs[r] += 1e-6 * (1 + ((r * 7919) % 997) / 997);
   const lu = new DenseBasis(m);
-  basis.forEach((c, k) => (lu.inv[k * m + k] = 1 / columns[c].vals[0]));
-  const xB = Float64Array.from(rhs, (r, k) => r / columns[basis[k]].vals[0]);
+  basis.forEach((c, k) => (lu.inv[k * m + k] = 1 / columns.vals[columns.start[c]]));
+  const xB = Float64Array.from(rhs, (r, k) => r / columns.vals[columns.start[basis[k]]]);
   const costB = new Float64Array(m);
-  basis.forEach((c, k) => (costB[k] = columns[c].cost));
+  basis.forEach((c, k) => (costB[k] = columns.cost[c]));
   const y = new Float64Array(m);
   const d = new Float64Array(m);
   const weights = items.map((it) => it.weight);
@@ -152,14 +143,13 @@ export function solvePatternLp(
     if (pivots % 64 === 0 && opts.shouldStop?.()) break;
     let enter = -1;
     let best = -EPS;
-    for (let c = 0; c < columns.length; c++) {
-      if (isBasic(c) || columns[c].artificial) continue;
-      const col = columns[c];
-      let rc = col.cost;
-      for (let t = 0; t < col.rows.length; t++) rc -= y[col.rows[t]] * col.vals[t];
-      const scale = col.scale ?? (col.scale = 1 / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0)));
-      if (rc < -EPS && rc * scale < best) {
-        best = rc * scale;
+    const { cost, scale, artificial, start, rows, vals } = columns;
+    for (let c = 0, n = columns.count; c < n; c++) {
+      if (basisPos[c] >= 0 || artificial[c]) continue;
+      let rc = cost[c];
+      for (let t = start[c], end = start[c + 1]; t < end; t++) rc -= y[rows[t]] * vals[t];
+      if (rc < -EPS && rc * scale[c] < best) {
+        best = rc * scale[c];
         enter = c;
       }
     }
@@ -174,8 +164,7 @@ export function solvePatternLp(
         if (rc < -1e-7) {
           const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
           if (idx < 0) return;
-          const col = columns[idx];
-          const scaled = rc / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0));
+          const scaled = rc * columns.scale[idx];
           if (scaled < best) {
             best = scaled;
             enter = idx;
@@ -186,13 +175,13 @@ export function solvePatternLp(
         converged = true;
         break;
       }
-      if (columns.length > basisPos.length) {
-        const grown = new Int32Array(columns.length * 2).fill(-1);
+      if (columns.count > basisPos.length) {
+        const grown = new Int32Array(columns.count * 2).fill(-1);
         grown.set(basisPos);
         basisPos = grown;
       }
     }
-    lu.solve(columns[enter], d);
+    lu.solve(columns.column(enter), d);
     let leave = -1;
     let ratio = Infinity;
     for (let k = 0; k < m; k++) {
@@ -207,9 +196,7 @@ export function solvePatternLp(
     if (leave < 0) break; // unbounded cannot happen with non-negative costs; stop defensively
     for (let k = 0; k < m; k++) xB[k] -= ratio * d[k];
     xB[leave] = ratio;
-    const entering = columns[enter];
-    let rcEnter = entering.cost;
-    for (let t = 0; t < entering.rows.length; t++) rcEnter -= y[entering.rows[t]] * entering.vals[t];
+    const rcEnter = columns.reducedCost(enter, y);
     lu.pivot(leave, d);
     // New duals: y + rc_q · (new row `leave` of B⁻¹), an O(m) update instead of O(m²).
     const rowBase = leave * m;
@@ -217,10 +204,10 @@ export function solvePatternLp(
     basisPos[basis[leave]] = -1;
     basis[leave] = enter;
     basisPos[enter] = leave;
-    costB[leave] = columns[enter].cost;
+    costB[leave] = columns.cost[enter];
     pivots++;
     if (pivots % refactorEvery === 0) {
-      if (lu.refactor(basis.map((c) => columns[c]))) {
+      if (lu.refactor(basis.map((c) => columns.column(c)))) {
         xB.fill(0);
         for (let k = 0; k < m; k++) for (let r = 0; r < m; r++) xB[k] += lu.inv[k * m + r] * rhs[r];
       }
@@ -235,11 +222,11 @@ export function solvePatternLp(
   const solution: { pattern: Pattern; x: number }[] = [];
   basis.forEach((c, k) => {
     const x = Math.max(0, xB[k]);
-    const col = columns[c];
-    if (col.artificial && x > 1e-7) feasible = false;
-    value += col.cost * x;
-    if (col.pattern && x > 1e-9) solution.push({ pattern: col.pattern, x });
+    const pattern = columns.payload[c];
+    if (columns.artificial[c] && x > 1e-7) feasible = false;
+    value += columns.cost[c] * x;
+    if (pattern && x > 1e-9) solution.push({ pattern, x });
   });
-  const pool = columns.filter((c) => c.pattern).map((c) => c.pattern as Pattern);
+  const pool = columns.payload.filter((p): p is Pattern => p !== undefined);
   return { value: converged ? Math.min(value, dualValue) : value, converged, feasible, solution, pool, pivots };
 }
