@@ -4,6 +4,7 @@
 
 import { ColumnStore } from './column-store';
 import { DenseBasis } from './dense-basis';
+import { farleyBound } from './farley-bound';
 import { MAX_PRICING_CELLS, priceBestPatterns, pricingCells } from './pattern-pricing';
 
 export interface LpItem {
@@ -44,7 +45,13 @@ export function patternKey(p: Pattern): string {
 export function solvePatternLp(
   items: LpItem[],
   bins: LpBin[],
-  opts: { maxPivots: number; pool?: Pattern[]; shouldStop?: () => boolean },
+  opts: {
+    maxPivots: number;
+    pool?: Pattern[];
+    shouldStop?: () => boolean;
+    /** Cost of a known plan: stop once the bound proves it optimal. */
+    stopAtCost?: number;
+  },
 ): LpResult {
   const rowOfItem: number[] = [];
   let m = 0;
@@ -137,6 +144,21 @@ export function solvePatternLp(
 
   let pivots = 0;
   let converged = false;
+  let farley = -Infinity;
+  let settledByBound = false;
+  const costs = new Set(bins.filter((b) => b.limit > 0).map((b) => b.cost));
+  const uniformCost = costs.size === 1 ? [...costs][0] : 0;
+  // The master carries the right-hand-side perturbation: allow for it when comparing round-ups.
+  const masterSlack = 4e-6 * m * Math.max(1, maxCost) + 1e-6;
+  const boundSettles = (): boolean => {
+    let z = 0;
+    for (let k = 0; k < m; k++) {
+      if (columns.artificial[basis[k]] && xB[k] > 1e-7) return false;
+      z += costB[k] * xB[k];
+    }
+    if (opts.stopAtCost !== undefined && farley >= opts.stopAtCost - 1e-6 * Math.max(1, opts.stopAtCost)) return true;
+    return uniformCost > 0 && Math.ceil(farley / uniformCost - 1e-6) >= Math.ceil((z - masterSlack) / uniformCost - 1e-6);
+  };
   const refactorEvery = Math.max(500, 10 * m);
   lu.duals(costB, y);
   while (pivots < opts.maxPivots) {
@@ -157,6 +179,18 @@ export function solvePatternLp(
       if (!canPrice) break;
       const values = items.map((_, i) => (rowOfItem[i] >= 0 ? y[rowOfItem[i]] : 0));
       const priced = priceBestPatterns(weights, values, bounds, caps);
+      const lb = farleyBound({
+        itemDuals: values,
+        demands: bounds,
+        kinds: bins.map((b, j) => ({ cost: b.cost, bestValue: priced[j].value, limitDual: rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0, limit: b.limit })),
+      });
+      if (lb > farley) {
+        farley = lb;
+        if (boundSettles()) {
+          converged = settledByBound = true;
+          break;
+        }
+      }
       priced.forEach((pp, j) => {
         if (bins[j].limit <= 0 || pp.load === 0) return;
         const capDual = rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0;
@@ -228,5 +262,7 @@ export function solvePatternLp(
     if (pattern && x > 1e-9) solution.push({ pattern, x });
   });
   const pool = columns.payload.filter((p): p is Pattern => p !== undefined);
-  return { value: converged ? Math.min(value, dualValue) : value, converged, feasible, solution, pool, pivots };
+  // Stopped by the bound, the master's duals are not yet feasible and only Farley's bound is valid.
+  const lpValue = settledByBound ? farley : Math.max(farley, Math.min(value, dualValue));
+  return { value: converged ? lpValue : value, converged, feasible, solution, pool, pivots };
 }
