@@ -37,6 +37,8 @@ export interface LpResult {
 }
 
 const EPS = 1e-9;
+/** Weight of the best Farley point in the pricing duals. */
+const SMOOTHING = 0.8;
 
 export function patternKey(p: Pattern): string {
   return `${p.bin}:${p.counts.join(',')}`;
@@ -146,6 +148,7 @@ export function solvePatternLp(
   let converged = false;
   let farley = -Infinity;
   let settledByBound = false;
+  let center: Float64Array | null = null;
   const costs = new Set(bins.filter((b) => b.limit > 0).map((b) => b.cost));
   const uniformCost = costs.size === 1 ? [...costs][0] : 0;
   // The master carries the right-hand-side perturbation: allow for it when comparing round-ups.
@@ -177,34 +180,49 @@ export function solvePatternLp(
     }
     if (enter < 0) {
       if (!canPrice) break;
-      const values = items.map((_, i) => (rowOfItem[i] >= 0 ? y[rowOfItem[i]] : 0));
-      const priced = priceBestPatterns(weights, values, bounds, caps);
-      const lb = farleyBound({
-        itemDuals: values,
-        demands: bounds,
-        kinds: bins.map((b, j) => ({ cost: b.cost, bestValue: priced[j].value, limitDual: rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0, limit: b.limit })),
-      });
-      if (lb > farley) {
-        farley = lb;
-        if (boundSettles()) {
-          converged = settledByBound = true;
-          break;
+      // Price at duals smoothed towards the best Farley point first (Wentges 1997); only when
+      // that finds nothing for the true duals is the true point priced, and only then can it converge.
+      let settled = false;
+      for (let attempt = 0; attempt < 2 && enter < 0 && !settled; attempt++) {
+        const alpha = attempt === 0 && center ? SMOOTHING : 0;
+        if (attempt === 1 && alpha === 0 && !center) break;
+        const yp: Float64Array = center && alpha > 0 ? Float64Array.from(y, (v, r) => alpha * (center as Float64Array)[r] + (1 - alpha) * v) : y;
+        const values = items.map((_, i) => (rowOfItem[i] >= 0 ? yp[rowOfItem[i]] : 0));
+        const trueValues = items.map((_, i) => (rowOfItem[i] >= 0 ? y[rowOfItem[i]] : 0));
+        const priced = priceBestPatterns(weights, values, bounds, caps);
+        const lb = farleyBound({
+          itemDuals: values,
+          demands: bounds,
+          kinds: bins.map((b, j) => ({ cost: b.cost, bestValue: priced[j].value, limitDual: rowOfBin[j] >= 0 ? yp[rowOfBin[j]] : 0, limit: b.limit })),
+        });
+        if (lb > farley) {
+          farley = lb;
+          center = Float64Array.from(yp);
+          if (boundSettles()) settled = true;
         }
-      }
-      priced.forEach((pp, j) => {
-        if (bins[j].limit <= 0 || pp.load === 0) return;
-        const capDual = rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0;
-        const rc = bins[j].cost - pp.value - capDual;
-        if (rc < -1e-7) {
-          const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
-          if (idx < 0) return;
-          const scaled = rc * columns.scale[idx];
-          if (scaled < best) {
-            best = scaled;
-            enter = idx;
+        if (settled) break;
+        priced.forEach((pp, j) => {
+          if (bins[j].limit <= 0 || pp.load === 0) return;
+          const capDual = rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0;
+          let value = 0;
+          pp.counts.forEach((c, i) => (value += c * trueValues[i]));
+          const rc = bins[j].cost - value - capDual;
+          if (rc < -1e-7) {
+            const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
+            if (idx < 0) return;
+            const scaled = rc * columns.scale[idx];
+            if (scaled < best) {
+              best = scaled;
+              enter = idx;
+            }
           }
-        }
-      });
+        });
+        if (alpha === 0 && enter < 0) converged = true;
+      }
+      if (settled) {
+        converged = settledByBound = true;
+        break;
+      }
       if (enter < 0) {
         converged = true;
         break;
