@@ -149,18 +149,11 @@ export function solvePatternLp(
   let farley = -Infinity;
   let settledByBound = false;
   let center: Float64Array | null = null;
-  const costs = new Set(bins.filter((b) => b.limit > 0).map((b) => b.cost));
-  const uniformCost = costs.size === 1 ? [...costs][0] : 0;
-  // The master carries the right-hand-side perturbation: allow for it when comparing round-ups.
-  const masterSlack = 4e-6 * m * Math.max(1, maxCost) + 1e-6;
   const boundSettles = (): boolean => {
-    let z = 0;
-    for (let k = 0; k < m; k++) {
-      if (columns.artificial[basis[k]] && xB[k] > 1e-7) return false;
-      z += costB[k] * xB[k];
-    }
-    if (opts.stopAtCost !== undefined && farley >= opts.stopAtCost - 1e-6 * Math.max(1, opts.stopAtCost)) return true;
-    return uniformCost > 0 && Math.ceil(farley / uniformCost - 1e-6) >= Math.ceil((z - masterSlack) / uniformCost - 1e-6);
+    for (let k = 0; k < m; k++) if (columns.artificial[basis[k]] && xB[k] > 1e-7) return false;
+    // Stopping once the bound merely rounds up like the master was tried: it saved few pivots, and
+    // rounding a not-yet-optimal LP solution lost boards on Scholl instances.
+    return opts.stopAtCost !== undefined && farley >= opts.stopAtCost - 1e-6 * Math.max(1, opts.stopAtCost);
   };
   const refactorEvery = Math.max(500, 10 * m);
   lu.duals(costB, y);
