@@ -2,7 +2,9 @@
 //   min Σ cost(p)·x_p  s.t.  Σ a_ip·x_p ≥ demand_i,  Σ_{p on board kind j} x_p ≤ limit_j,  x ≥ 0.
 // Rows start covered by artificial columns with a big cost, so the first basis is the identity.
 
-import { DenseBasis, type SparseColumn } from './dense-basis';
+import { ColumnStore } from './column-store';
+import { DenseBasis } from './dense-basis';
+import { farleyBound } from './farley-bound';
 import { MAX_PRICING_CELLS, priceBestPatterns, pricingCells } from './pattern-pricing';
 
 export interface LpItem {
@@ -34,15 +36,9 @@ export interface LpResult {
   pivots: number;
 }
 
-interface Column extends SparseColumn {
-  cost: number;
-  /** 1/‖a‖: entering by normalised reduced cost takes far fewer degenerate pivots than plain Dantzig. */
-  scale?: number;
-  pattern?: Pattern;
-  artificial?: boolean;
-}
-
 const EPS = 1e-9;
+/** Weight of the best Farley point in the pricing duals. */
+const SMOOTHING = 0.8;
 
 export function patternKey(p: Pattern): string {
   return `${p.bin}:${p.counts.join(',')}`;
@@ -51,7 +47,13 @@ export function patternKey(p: Pattern): string {
 export function solvePatternLp(
   items: LpItem[],
   bins: LpBin[],
-  opts: { maxPivots: number; pool?: Pattern[]; shouldStop?: () => boolean },
+  opts: {
+    maxPivots: number;
+    pool?: Pattern[];
+    shouldStop?: () => boolean;
+    /** Cost of a known plan: stop once the bound proves it optimal. */
+    stopAtCost?: number;
+  },
 ): LpResult {
   const rowOfItem: number[] = [];
   let m = 0;
@@ -65,7 +67,7 @@ export function solvePatternLp(
   const seenStart = new Set<string>();
   const maxCost = bins.reduce((s, b) => Math.max(s, b.cost), 0);
   const bigM = 2 * Math.max(1, maxCost) + 1;
-  const columns: Column[] = [];
+  const columns = new ColumnStore<Pattern>();
   const rhs = new Float64Array(m);
   // Start from the classic diagonal basis: for each piece length, a board cut to as many of it as fit
   // (on the cheapest unlimited board per piece); an artificial column only where no such board exists.
@@ -86,20 +88,20 @@ export function solvePatternLp(
       const counts = items.map((_, k) => (k === i ? bestCopies : 0));
       const pattern: Pattern = { bin: bestBin, counts, load: bestCopies * it.weight };
       seenStart.add(patternKey(pattern));
-      columns.push({ rows: [rowOfItem[i]], vals: [bestCopies], cost: bins[bestBin].cost, pattern });
+      columns.add([rowOfItem[i]], [bestCopies], bins[bestBin].cost, pattern);
     } else {
-      columns.push({ rows: [rowOfItem[i]], vals: [1], cost: bigM, artificial: true });
+      columns.add([rowOfItem[i]], [1], bigM, undefined, true);
     }
   });
   bins.forEach((b, j) => {
     if (rowOfBin[j] >= 0) {
       rhs[rowOfBin[j]] = b.limit;
-      columns.push({ rows: [rowOfBin[j]], vals: [1], cost: 0 });
+      columns.add([rowOfBin[j]], [1], 0);
     }
   });
-  const basis = columns.map((_, k) => k);
+  const basis = Array.from({ length: columns.count }, (_, k) => k);
   items.forEach((_, i) => {
-    if (rowOfItem[i] >= 0) columns.push({ rows: [rowOfItem[i]], vals: [-1], cost: 0 });
+    if (rowOfItem[i] >= 0) columns.add([rowOfItem[i]], [-1], 0);
   });
   const seen = seenStart;
   const addPattern = (p: Pattern): number => {
@@ -120,23 +122,21 @@ export function solvePatternLp(
       rows.push(rowOfBin[p.bin]);
       vals.push(1);
     }
-    columns.push({ rows, vals, cost: bins[p.bin].cost, pattern: p });
-    return columns.length - 1;
+    return columns.add(rows, vals, bins[p.bin].cost, p);
   };
   for (const p of opts.pool ?? []) addPattern(p);
 
-  let basisPos = new Int32Array(columns.length + 1024).fill(-1);
-  const isBasic = (c: number) => c < basisPos.length && basisPos[c] >= 0;
+  let basisPos = new Int32Array(columns.count + 1024).fill(-1);
   basis.forEach((c, k) => (basisPos[c] = k));
   // A tiny fixed perturbation of the right-hand side keeps the simplex from stalling on these
   // highly degenerate LPs; the reported value is the dual objective on the true data, so it stays a bound.
   const trueRhs = Float64Array.from(rhs);
   for (let r = 0; r < m; r++) rhs[r] += 1e-6 * (1 + ((r * 7919) % 997) / 997);
   const lu = new DenseBasis(m);
-  basis.forEach((c, k) => (lu.inv[k * m + k] = 1 / columns[c].vals[0]));
-  const xB = Float64Array.from(rhs, (r, k) => r / columns[basis[k]].vals[0]);
+  basis.forEach((c, k) => (lu.inv[k * m + k] = 1 / columns.vals[columns.start[c]]));
+  const xB = Float64Array.from(rhs, (r, k) => r / columns.vals[columns.start[basis[k]]]);
   const costB = new Float64Array(m);
-  basis.forEach((c, k) => (costB[k] = columns[c].cost));
+  basis.forEach((c, k) => (costB[k] = columns.cost[c]));
   const y = new Float64Array(m);
   const d = new Float64Array(m);
   const weights = items.map((it) => it.weight);
@@ -146,53 +146,87 @@ export function solvePatternLp(
 
   let pivots = 0;
   let converged = false;
+  let farley = -Infinity;
+  let settledByBound = false;
+  let center: Float64Array | null = null;
+  const boundSettles = (): boolean => {
+    for (let k = 0; k < m; k++) if (columns.artificial[basis[k]] && xB[k] > 1e-7) return false;
+    // Stopping once the bound merely rounds up like the master was tried: it saved few pivots, and
+    // rounding a not-yet-optimal LP solution lost boards on Scholl instances.
+    return opts.stopAtCost !== undefined && farley >= opts.stopAtCost - 1e-6 * Math.max(1, opts.stopAtCost);
+  };
   const refactorEvery = Math.max(500, 10 * m);
   lu.duals(costB, y);
   while (pivots < opts.maxPivots) {
     if (pivots % 64 === 0 && opts.shouldStop?.()) break;
     let enter = -1;
     let best = -EPS;
-    for (let c = 0; c < columns.length; c++) {
-      if (isBasic(c) || columns[c].artificial) continue;
-      const col = columns[c];
-      let rc = col.cost;
-      for (let t = 0; t < col.rows.length; t++) rc -= y[col.rows[t]] * col.vals[t];
-      const scale = col.scale ?? (col.scale = 1 / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0)));
-      if (rc < -EPS && rc * scale < best) {
-        best = rc * scale;
+    const { cost, scale, artificial, start, rows, vals } = columns;
+    for (let c = 0, n = columns.count; c < n; c++) {
+      if (basisPos[c] >= 0 || artificial[c]) continue;
+      let rc = cost[c];
+      for (let t = start[c], end = start[c + 1]; t < end; t++) rc -= y[rows[t]] * vals[t];
+      if (rc < -EPS && rc * scale[c] < best) {
+        best = rc * scale[c];
         enter = c;
       }
     }
     if (enter < 0) {
       if (!canPrice) break;
-      const values = items.map((_, i) => (rowOfItem[i] >= 0 ? y[rowOfItem[i]] : 0));
-      const priced = priceBestPatterns(weights, values, bounds, caps);
-      priced.forEach((pp, j) => {
-        if (bins[j].limit <= 0 || pp.load === 0) return;
-        const capDual = rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0;
-        const rc = bins[j].cost - pp.value - capDual;
-        if (rc < -1e-7) {
-          const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
-          if (idx < 0) return;
-          const col = columns[idx];
-          const scaled = rc / Math.sqrt(col.vals.reduce((a, v) => a + v * v, 0));
-          if (scaled < best) {
-            best = scaled;
-            enter = idx;
-          }
+      // Price at duals smoothed towards the best Farley point first (Wentges 1997); only when
+      // that finds nothing for the true duals is the true point priced, and only then can it converge.
+      let settled = false;
+      for (let attempt = 0; attempt < 2 && enter < 0 && !settled; attempt++) {
+        const alpha = attempt === 0 && center ? SMOOTHING : 0;
+        if (attempt === 1 && alpha === 0 && !center) break;
+        const yp: Float64Array = center && alpha > 0 ? Float64Array.from(y, (v, r) => alpha * (center as Float64Array)[r] + (1 - alpha) * v) : y;
+        const values = items.map((_, i) => (rowOfItem[i] >= 0 ? yp[rowOfItem[i]] : 0));
+        const trueValues = items.map((_, i) => (rowOfItem[i] >= 0 ? y[rowOfItem[i]] : 0));
+        const priced = priceBestPatterns(weights, values, bounds, caps);
+        const lb = farleyBound({
+          itemDuals: values,
+          demands: bounds,
+          kinds: bins.map((b, j) => ({ cost: b.cost, bestValue: priced[j].value, limitDual: rowOfBin[j] >= 0 ? yp[rowOfBin[j]] : 0, limit: b.limit })),
+        });
+        if (lb > farley) {
+          farley = lb;
+          center = Float64Array.from(yp);
+          if (boundSettles()) settled = true;
         }
-      });
+        if (settled) break;
+        priced.forEach((pp, j) => {
+          if (bins[j].limit <= 0 || pp.load === 0) return;
+          const capDual = rowOfBin[j] >= 0 ? y[rowOfBin[j]] : 0;
+          let value = 0;
+          pp.counts.forEach((c, i) => (value += c * trueValues[i]));
+          const rc = bins[j].cost - value - capDual;
+          if (rc < -1e-7) {
+            const idx = addPattern({ bin: j, counts: pp.counts, load: pp.load });
+            if (idx < 0) return;
+            const scaled = rc * columns.scale[idx];
+            if (scaled < best) {
+              best = scaled;
+              enter = idx;
+            }
+          }
+        });
+        if (alpha === 0 && enter < 0) converged = true;
+      }
+      if (settled) {
+        converged = settledByBound = true;
+        break;
+      }
       if (enter < 0) {
         converged = true;
         break;
       }
-      if (columns.length > basisPos.length) {
-        const grown = new Int32Array(columns.length * 2).fill(-1);
+      if (columns.count > basisPos.length) {
+        const grown = new Int32Array(columns.count * 2).fill(-1);
         grown.set(basisPos);
         basisPos = grown;
       }
     }
-    lu.solve(columns[enter], d);
+    lu.solve(columns.column(enter), d);
     let leave = -1;
     let ratio = Infinity;
     for (let k = 0; k < m; k++) {
@@ -207,9 +241,7 @@ export function solvePatternLp(
     if (leave < 0) break; // unbounded cannot happen with non-negative costs; stop defensively
     for (let k = 0; k < m; k++) xB[k] -= ratio * d[k];
     xB[leave] = ratio;
-    const entering = columns[enter];
-    let rcEnter = entering.cost;
-    for (let t = 0; t < entering.rows.length; t++) rcEnter -= y[entering.rows[t]] * entering.vals[t];
+    const rcEnter = columns.reducedCost(enter, y);
     lu.pivot(leave, d);
     // New duals: y + rc_q · (new row `leave` of B⁻¹), an O(m) update instead of O(m²).
     const rowBase = leave * m;
@@ -217,10 +249,10 @@ export function solvePatternLp(
     basisPos[basis[leave]] = -1;
     basis[leave] = enter;
     basisPos[enter] = leave;
-    costB[leave] = columns[enter].cost;
+    costB[leave] = columns.cost[enter];
     pivots++;
     if (pivots % refactorEvery === 0) {
-      if (lu.refactor(basis.map((c) => columns[c]))) {
+      if (lu.refactor(basis.map((c) => columns.column(c)))) {
         xB.fill(0);
         for (let k = 0; k < m; k++) for (let r = 0; r < m; r++) xB[k] += lu.inv[k * m + r] * rhs[r];
       }
@@ -235,11 +267,13 @@ export function solvePatternLp(
   const solution: { pattern: Pattern; x: number }[] = [];
   basis.forEach((c, k) => {
     const x = Math.max(0, xB[k]);
-    const col = columns[c];
-    if (col.artificial && x > 1e-7) feasible = false;
-    value += col.cost * x;
-    if (col.pattern && x > 1e-9) solution.push({ pattern: col.pattern, x });
+    const pattern = columns.payload[c];
+    if (columns.artificial[c] && x > 1e-7) feasible = false;
+    value += columns.cost[c] * x;
+    if (pattern && x > 1e-9) solution.push({ pattern, x });
   });
-  const pool = columns.filter((c) => c.pattern).map((c) => c.pattern as Pattern);
-  return { value: converged ? Math.min(value, dualValue) : value, converged, feasible, solution, pool, pivots };
+  const pool = columns.payload.filter((p): p is Pattern => p !== undefined);
+  // Stopped by the bound, the master's duals are not yet feasible and only Farley's bound is valid.
+  const lpValue = settledByBound ? farley : Math.max(farley, Math.min(value, dualValue));
+  return { value: converged ? lpValue : value, converged, feasible, solution, pool, pivots };
 }

@@ -4,17 +4,19 @@
 
 /** A sparse column: parallel arrays of row indexes and values. */
 export interface SparseColumn {
-  rows: number[];
-  vals: number[];
+  rows: ArrayLike<number>;
+  vals: ArrayLike<number>;
 }
 
 export class DenseBasis {
   readonly m: number;
   inv: Float64Array;
+  private readonly nz: Int32Array;
 
   constructor(m: number) {
     this.m = m;
     this.inv = new Float64Array(m * m);
+    this.nz = new Int32Array(m);
     for (let i = 0; i < m; i++) this.inv[i * m + i] = 1;
   }
 
@@ -46,13 +48,23 @@ export class DenseBasis {
     const { m, inv } = this;
     const piv = d[p];
     const prow = p * m;
-    for (let r = 0; r < m; r++) inv[prow + r] /= piv;
+    // Rows of B⁻¹ stay sparse for pattern bases: update only where the pivot row is non-zero.
+    const nz = this.nz;
+    let count = 0;
+    for (let r = 0; r < m; r++) {
+      if (inv[prow + r] === 0) continue;
+      inv[prow + r] /= piv;
+      nz[count++] = r;
+    }
     for (let k = 0; k < m; k++) {
       if (k === p) continue;
       const f = d[k];
       if (f === 0) continue;
       const base = k * m;
-      for (let r = 0; r < m; r++) inv[base + r] -= f * inv[prow + r];
+      for (let t = 0; t < count; t++) {
+        const r = nz[t];
+        inv[base + r] -= f * inv[prow + r];
+      }
     }
   }
 

@@ -4,6 +4,7 @@
 
 import { solvePatternLp, type Pattern } from './column-generation';
 import type { Model } from './model';
+import type { PackedBoard, Packing } from './packing';
 import type { PlanBound } from './types';
 
 const SLACK = 1e-6;
@@ -41,11 +42,13 @@ export function lpBound(
   model: Model,
   demand: number[],
   binsLeft: number[],
-  opts: { maxPivots: number; shouldStop: () => boolean },
+  opts: { maxPivots: number; shouldStop: () => boolean; warmStart?: Packing; stopAtCost?: number },
 ): LpBoundResult | null {
   const items = model.items.map((it, i) => ({ weight: it.weight, demand: demand[i] }));
   const bins = model.bins.map((b, j) => ({ capacity: b.capacity, cost: b.cost, limit: binsLeft[j] }));
-  const lp = solvePatternLp(items, bins, opts);
+  // The boards of a known plan are good first columns: they roughly halve the simplex pivots.
+  const warmPool = opts.warmStart?.boards.map((b) => patternOfBoard(model, b));
+  const lp = solvePatternLp(items, bins, { maxPivots: opts.maxPivots, shouldStop: opts.shouldStop, stopAtCost: opts.stopAtCost, pool: warmPool });
   if (!lp.feasible) return null;
   // Stopped early: the LP solution still guides rounding, but its value proves nothing.
   if (!lp.converged) return { bound: null, solution: lp.solution, pool: lp.pool };
@@ -63,6 +66,12 @@ export function lpBound(
     boards = 0;
   }
   return { bound: { boards, cost: floor6(cost - SLACK * Math.max(1, cost)), method: 'lp' }, solution: lp.solution, pool };
+}
+
+function patternOfBoard(model: Model, board: PackedBoard): Pattern {
+  const counts = model.items.map(() => 0);
+  for (const t of board.items) counts[t]++;
+  return { bin: board.bin, counts, load: board.load };
 }
 
 function floor6(x: number): number {

@@ -33,7 +33,12 @@ export function solve(input: SolveInput): SolvePlan {
   }
   if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
     const lengthTarget = bound.boards;
-    const lp = lpBound(model, demand, limits, { maxPivots: SEARCH_CAPS.lpPivots, shouldStop: budget.shouldStop });
+    const lp = lpBound(model, demand, limits, {
+      maxPivots: SEARCH_CAPS.lpPivots,
+      shouldStop: budget.shouldStop,
+      warmStart: best,
+      stopAtCost: scorePacking(model, best).cost,
+    });
     bound = maxBound(bound, lp?.bound ?? null);
     if (!meetsBound(model, best, bound)) {
       consider(improvePacking(model, best, bound, lp, budget, lengthTarget));
