@@ -70,9 +70,12 @@ test.describe('the saw station in portrait (768×1024, touch)', () => {
   test('a bad board is re-planned at once, labels print, and new offcuts are on the rack', async ({ page, browser }) => {
     // The yard hand releases J-1003, which uses rack offcuts.
     const office = await officePage(browser);
-    const plan = await office.request.get('/api/plans/2');
-    expect(await plan.json()).toMatchObject({ status: 'planned' });
-    expect((await office.request.post('/api/plans/2/release')).status()).toBe(200);
+    const { jobs } = await (await office.request.get('/api/jobs?q=J-1003')).json();
+    const job = jobs.find((j: { reference: string }) => j.reference === 'J-1003');
+    const { plans } = await (await office.request.get(`/api/jobs/${job.id}/plans`)).json();
+    const planned = plans.find((p: { status: string }) => p.status === 'planned');
+    expect(planned).toBeTruthy();
+    expect((await office.request.post(`/api/plans/${planned.id}/release`)).status()).toBe(200);
 
     await signIn(page, DEMO.saw);
     await page.getByTestId('queue-J-1003').tap();
