@@ -6,7 +6,10 @@ export default defineConfig({
     alias: [
       { find: /^@\/(.*)$/, replacement: fileURLToPath(new URL('./$1', import.meta.url)) },
       // `server-only` throws outside a React server bundle; tests import data-access modules directly.
-      { find: 'server-only', replacement: fileURLToPath(new URL('./tests/support/empty.ts', import.meta.url)) },
+      {
+        find: 'server-only',
+        replacement: fileURLToPath(new URL('./tests/support/empty.ts', import.meta.url)),
+      },
     ],
   },
   test: {

@@ -31,4 +31,3 @@ export const MOVEMENT_KINDS = [
   'defect', // a board found bad at the saw
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
-

@@ -63,7 +63,9 @@ export const sections = pgTable('sections', {
   species: text('species').notNull().default(''),
   grade: text('grade').notNull().default(''),
   treatment: text('treatment').notNull().default(''),
-  finish: text('finish', { enum: ['sawn', 'planed'] }).notNull().default('sawn'),
+  finish: text('finish', { enum: ['sawn', 'planed'] })
+    .notNull()
+    .default('sawn'),
   active: boolean('active').notNull().default(true),
   createdAt: createdAt(),
 });
@@ -116,7 +118,9 @@ export const frameSchedules = pgTable('frame_schedules', {
   name: text('name').notNull(),
   customerName: text('customer_name').notNull().default(''),
   unit: text('unit', { enum: DISPLAY_UNITS }).notNull().default('mm'),
-  panels: jsonb('panels').notNull().default(sql`'[]'::jsonb`),
+  panels: jsonb('panels')
+    .notNull()
+    .default(sql`'[]'::jsonb`),
   createdBy: integer('created_by').references(() => users.id),
   createdAt: createdAt(),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),

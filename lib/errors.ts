@@ -1,11 +1,6 @@
 // One error type for the whole app; route handlers turn it into an HTTP answer in one place.
 export type ErrorCode =
-  | 'unauthenticated'
-  | 'forbidden'
-  | 'not_found'
-  | 'conflict'
-  | 'invalid'
-  | 'unavailable';
+  'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'invalid' | 'unavailable';
 
 const STATUS: Record<ErrorCode, number> = {
   unauthenticated: 401,

@@ -8,7 +8,9 @@ import { dataDirPath } from '../lib/env';
 const dir = dataDirPath();
 const holder = dataDirHolder(dir);
 if (holder !== null) {
-  console.error(`Kerfwise: ${dir} is open in process ${holder}. Stop the server first, then run db:reset again.`);
+  console.error(
+    `Kerfwise: ${dir} is open in process ${holder}. Stop the server first, then run db:reset again.`,
+  );
   process.exit(1);
 }
 rmSync(dir, { recursive: true, force: true });

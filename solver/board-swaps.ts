@@ -9,7 +9,14 @@ export function downsizeBoards(model: Model, packing: Packing): Packing {
   const left = model.bins.map((b) => b.limit);
   for (const b of packing.boards) left[b.bin]--;
   const boards = packing.boards.map((b) => ({ ...b }));
-  const order = boards.map((_, k) => k).sort((x, y) => model.bins[boards[y].bin].cost - model.bins[boards[x].bin].cost || boards[y].load - boards[x].load || x - y);
+  const order = boards
+    .map((_, k) => k)
+    .sort(
+      (x, y) =>
+        model.bins[boards[y].bin].cost - model.bins[boards[x].bin].cost ||
+        boards[y].load - boards[x].load ||
+        x - y,
+    );
   for (const k of order) {
     const board = boards[k];
     left[board.bin]++;
@@ -50,7 +57,13 @@ export function mergeBoards(model: Model, packing: Packing, maxCandidates: numbe
       left[b.bin]++;
       let pick = -1;
       model.bins.forEach((bin, k) => {
-        if (left[k] > 0 && bin.capacity >= load && bin.cost < before - 1e-9 && (pick < 0 || bin.cost < model.bins[pick].cost)) pick = k;
+        if (
+          left[k] > 0 &&
+          bin.capacity >= load &&
+          bin.cost < before - 1e-9 &&
+          (pick < 0 || bin.cost < model.bins[pick].cost)
+        )
+          pick = k;
       });
       if (pick < 0) {
         left[a.bin]--;

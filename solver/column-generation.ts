@@ -61,7 +61,14 @@ export function solvePatternLp(
   const itemRows = m;
   const rowOfBin: number[] = [];
   for (const b of bins) rowOfBin.push(Number.isFinite(b.limit) ? m++ : -1);
-  const empty: LpResult = { value: 0, converged: true, feasible: true, solution: [], pool: opts.pool ?? [], pivots: 0 };
+  const empty: LpResult = {
+    value: 0,
+    converged: true,
+    feasible: true,
+    solution: [],
+    pool: opts.pool ?? [],
+    pivots: 0,
+  };
   if (itemRows === 0) return empty;
 
   const seenStart = new Set<string>();
@@ -179,14 +186,22 @@ export function solvePatternLp(
       for (let attempt = 0; attempt < 2 && enter < 0 && !settled; attempt++) {
         const alpha = attempt === 0 && center ? SMOOTHING : 0;
         if (attempt === 1 && alpha === 0 && !center) break;
-        const yp: Float64Array = center && alpha > 0 ? Float64Array.from(y, (v, r) => alpha * (center as Float64Array)[r] + (1 - alpha) * v) : y;
+        const yp: Float64Array =
+          center && alpha > 0
+            ? Float64Array.from(y, (v, r) => alpha * (center as Float64Array)[r] + (1 - alpha) * v)
+            : y;
         const values = items.map((_, i) => (rowOfItem[i] >= 0 ? yp[rowOfItem[i]] : 0));
         const trueValues = items.map((_, i) => (rowOfItem[i] >= 0 ? y[rowOfItem[i]] : 0));
         const priced = priceBestPatterns(weights, values, bounds, caps);
         const lb = farleyBound({
           itemDuals: values,
           demands: bounds,
-          kinds: bins.map((b, j) => ({ cost: b.cost, bestValue: priced[j].value, limitDual: rowOfBin[j] >= 0 ? yp[rowOfBin[j]] : 0, limit: b.limit })),
+          kinds: bins.map((b, j) => ({
+            cost: b.cost,
+            bestValue: priced[j].value,
+            limitDual: rowOfBin[j] >= 0 ? yp[rowOfBin[j]] : 0,
+            limit: b.limit,
+          })),
         });
         if (lb > farley) {
           farley = lb;

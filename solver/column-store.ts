@@ -37,7 +37,10 @@ export class ColumnStore<P> {
   }
 
   column(c: number): SparseColumn {
-    return { rows: this.rows.subarray(this.start[c], this.start[c + 1]), vals: this.vals.subarray(this.start[c], this.start[c + 1]) };
+    return {
+      rows: this.rows.subarray(this.start[c], this.start[c + 1]),
+      vals: this.vals.subarray(this.start[c], this.start[c + 1]),
+    };
   }
 
   /** c − yᵀa for column c. */

@@ -41,7 +41,8 @@ export function sequentialFill(model: Model, demand: number[], binsLeft: number[
       const scrap = boardScrap(model, { bin: j, items: [], load });
       if (
         score < pickScore - 1e-12 ||
-        (Math.abs(score - pickScore) <= 1e-12 && (scrap < pickScrap || (scrap === pickScrap && load > pickLoad)))
+        (Math.abs(score - pickScore) <= 1e-12 &&
+          (scrap < pickScrap || (scrap === pickScrap && load > pickLoad)))
       ) {
         pick = j;
         pickScore = score;
@@ -64,7 +65,9 @@ export function sequentialFill(model: Model, demand: number[], binsLeft: number[
 /** First-fit decreasing on the cheapest board per millimetre: the simple baseline. */
 export function firstFitDecreasing(model: Model, demand: number[], binsLeft: number[]): Packing {
   const left = [...binsLeft];
-  const order = model.bins.map((_, j) => j).sort((a, b) => ratio(model, a) - ratio(model, b) || model.bins[b].capacity - model.bins[a].capacity);
+  const order = model.bins
+    .map((_, j) => j)
+    .sort((a, b) => ratio(model, a) - ratio(model, b) || model.bins[b].capacity - model.bins[a].capacity);
   const open: { bin: number; items: number[]; load: number }[] = [];
   const packing: Packing = { boards: [], unplaced: new Array<number>(demand.length).fill(0) };
   demand.forEach((count, i) => {

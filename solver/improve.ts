@@ -15,10 +15,28 @@ import type { PlanBound } from './types';
 export const IMPROVE_CAPS = {
   roundingSteps: 400,
   roundingPivots: 5_000,
-  completion: { maxNodes: 3_000, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
+  completion: {
+    maxNodes: 3_000,
+    branching: 8,
+    listSteps: 20_000,
+    failFirstBudgetShare: 0.34,
+    maxDiscrepancies: Infinity,
+  } satisfies CompletionCaps,
   repack: { maxRounds: 400, starts: 6 } satisfies RepackCaps,
-  quickTightCompletion: { maxNodes: 800, branching: 8, listSteps: 20_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
-  quickCompletion: { maxNodes: 300, branching: 6, listSteps: 4_000, failFirstBudgetShare: 0.34, maxDiscrepancies: Infinity } satisfies CompletionCaps,
+  quickTightCompletion: {
+    maxNodes: 800,
+    branching: 8,
+    listSteps: 20_000,
+    failFirstBudgetShare: 0.34,
+    maxDiscrepancies: Infinity,
+  } satisfies CompletionCaps,
+  quickCompletion: {
+    maxNodes: 300,
+    branching: 6,
+    listSteps: 4_000,
+    failFirstBudgetShare: 0.34,
+    maxDiscrepancies: Infinity,
+  } satisfies CompletionCaps,
 };
 
 export function improvePacking(
@@ -37,13 +55,20 @@ export function improvePacking(
   };
   const oneKind = model.bins.length === 1 && bound.boards <= model.bins[0].limit;
   // LP-guided bin completion: among equally full completions, boards the LP uses come first.
-  const guided = () => oneKind && !budget.expired() && better(completeTowardsBound(model, bound.boards, budget, IMPROVE_CAPS.completion, lp));
+  const guided = () =>
+    oneKind &&
+    !budget.expired() &&
+    better(completeTowardsBound(model, bound.boards, budget, IMPROVE_CAPS.completion, lp));
   const tight = oneKind && isTight(model, bound.boards);
   if (tight && (bound.boards > lengthTarget || lp) && guided()) return best;
   if (lp && !budget.expired()) {
-    const rounded = roundLpSolution(model, lp, budget, { maxSteps: IMPROVE_CAPS.roundingSteps, maxPivots: IMPROVE_CAPS.roundingPivots });
+    const rounded = roundLpSolution(model, lp, budget, {
+      maxSteps: IMPROVE_CAPS.roundingSteps,
+      maxPivots: IMPROVE_CAPS.roundingPivots,
+    });
     if (better(rounded)) return best;
-    if (oneKind && !budget.expired() && better(repackTowardsBound(model, rounded, bound.boards, budget))) return best;
+    if (oneKind && !budget.expired() && better(repackTowardsBound(model, rounded, bound.boards, budget)))
+      return best;
   }
   if (oneKind && !tight && guided()) return best;
   if (oneKind && !budget.expired()) better(repackTowardsBound(model, best, bound.boards, budget));
@@ -74,11 +99,19 @@ function completeTowardsBound(
     budget.shouldStop,
     guide,
   );
-  return found ? { boards: found.map((items) => makeBoard(model, 0, items)), unplaced: model.items.map(() => 0) } : null;
+  return found
+    ? { boards: found.map((items) => makeBoard(model, 0, items)), unplaced: model.items.map(() => 0) }
+    : null;
 }
 
 /** Repacks one board fewer at a time, down to the target; returns the smallest plan reached. */
-function repackTowardsBound(model: Model, from: Packing, target: number, budget: SearchBudget, caps: RepackCaps = IMPROVE_CAPS.repack): Packing | null {
+function repackTowardsBound(
+  model: Model,
+  from: Packing,
+  target: number,
+  budget: SearchBudget,
+  caps: RepackCaps = IMPROVE_CAPS.repack,
+): Packing | null {
   let best: Packing | null = null;
   let current = from;
   while (current.boards.length > target && !budget.expired()) {
@@ -90,7 +123,12 @@ function repackTowardsBound(model: Model, from: Packing, target: number, budget:
 }
 
 /** Before any LP: a short bin completion towards the length bound (one board kind). */
-export function quickTargetSearch(model: Model, incumbent: Packing, target: number, budget: SearchBudget): Packing {
+export function quickTargetSearch(
+  model: Model,
+  incumbent: Packing,
+  target: number,
+  budget: SearchBudget,
+): Packing {
   if (model.bins.length !== 1 || target > model.bins[0].limit) return incumbent;
   // Repacking the greedy plan here rarely paid off in the benchmarks; the LP-rounded plan is a better
   // start. Bin completion is strong when little waste is allowed (exact fills), weak otherwise.
@@ -98,7 +136,13 @@ export function quickTargetSearch(model: Model, incumbent: Packing, target: numb
   return completeTowardsBound(model, target, budget, caps) ?? incumbent;
 }
 
-function repackOnce(model: Model, from: Packing, target: number, budget: SearchBudget, caps: RepackCaps): Packing | null {
+function repackOnce(
+  model: Model,
+  from: Packing,
+  target: number,
+  budget: SearchBudget,
+  caps: RepackCaps,
+): Packing | null {
   if (from.unplaced.some((n) => n > 0) || from.boards.length <= target) return null;
   const pieceType: number[] = [];
   const initial = from.boards.map((b) =>
@@ -110,5 +154,16 @@ function repackOnce(model: Model, from: Packing, target: number, budget: SearchB
   const weights = pieceType.map((t) => model.items[t].weight);
   const found = repackToTarget(weights, model.bins[0].capacity, target, initial, caps, budget.shouldStop);
   if (!found) return null;
-  return { boards: found.filter((b) => b.length > 0).map((b) => makeBoard(model, 0, b.map((p) => pieceType[p]))), unplaced: model.items.map(() => 0) };
+  return {
+    boards: found
+      .filter((b) => b.length > 0)
+      .map((b) =>
+        makeBoard(
+          model,
+          0,
+          b.map((p) => pieceType[p]),
+        ),
+      ),
+    unplaced: model.items.map(() => 0),
+  };
 }

@@ -22,7 +22,9 @@ export function lengthBound(model: Model, demand: number[], binsLeft: number[]):
     need -= take * b.capacity;
   }
   let cost = 0;
-  for (const b of [...kinds].sort((a, c) => a.cost / a.capacity - c.cost / c.capacity || c.capacity - a.capacity)) {
+  for (const b of [...kinds].sort(
+    (a, c) => a.cost / a.capacity - c.cost / c.capacity || c.capacity - a.capacity,
+  )) {
     if (total <= 0) break;
     const amount = Math.min(total, b.left * b.capacity);
     cost += (amount / b.capacity) * b.cost;
@@ -48,7 +50,12 @@ export function lpBound(
   const bins = model.bins.map((b, j) => ({ capacity: b.capacity, cost: b.cost, limit: binsLeft[j] }));
   // The boards of a known plan are good first columns: they roughly halve the simplex pivots.
   const warmPool = opts.warmStart?.boards.map((b) => patternOfBoard(model, b));
-  const lp = solvePatternLp(items, bins, { maxPivots: opts.maxPivots, shouldStop: opts.shouldStop, stopAtCost: opts.stopAtCost, pool: warmPool });
+  const lp = solvePatternLp(items, bins, {
+    maxPivots: opts.maxPivots,
+    shouldStop: opts.shouldStop,
+    stopAtCost: opts.stopAtCost,
+    pool: warmPool,
+  });
   if (!lp.feasible) return null;
   // Stopped early: the LP solution still guides rounding, but its value proves nothing.
   if (!lp.converged) return { bound: null, solution: lp.solution, pool: lp.pool };
@@ -65,7 +72,11 @@ export function lpBound(
     // would double the time, and the cost is what the plan is judged on.
     boards = 0;
   }
-  return { bound: { boards, cost: floor6(cost - SLACK * Math.max(1, cost)), method: 'lp' }, solution: lp.solution, pool };
+  return {
+    bound: { boards, cost: floor6(cost - SLACK * Math.max(1, cost)), method: 'lp' },
+    solution: lp.solution,
+    pool,
+  };
 }
 
 function patternOfBoard(model: Model, board: PackedBoard): Pattern {

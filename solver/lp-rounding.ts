@@ -54,7 +54,13 @@ export function roundLpSolution(
 }
 
 /** Cuts one board to the pattern, leaving out pieces already covered; false if nothing is left to cut. */
-function fixPattern(model: Model, pattern: Pattern, demand: number[], left: number[], boards: PackedBoard[]): boolean {
+function fixPattern(
+  model: Model,
+  pattern: Pattern,
+  demand: number[],
+  left: number[],
+  boards: PackedBoard[],
+): boolean {
   if (left[pattern.bin] <= 0) return false;
   const items: number[] = [];
   pattern.counts.forEach((c, i) => {

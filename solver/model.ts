@@ -43,11 +43,25 @@ export function buildModel(input: SolveInput): Model {
     const limit = s.available ?? Infinity;
     const capacity = stockCapacity(s.length, trim, kerf);
     if (limit > 0 && capacity > kerf) {
-      bins.push({ source: 'stock', id: s.id, length: s.length, capacity, cost: stockCost(s.length, s.cost), limit });
+      bins.push({
+        source: 'stock',
+        id: s.id,
+        length: s.length,
+        capacity,
+        cost: stockCost(s.length, s.cost),
+        limit,
+      });
     }
   }
   for (const o of input.offcuts) {
-    bins.push({ source: 'offcut', id: o.id, length: o.length, capacity: offcutCapacity(o.length, kerf), cost: 0, limit: 1 });
+    bins.push({
+      source: 'offcut',
+      id: o.id,
+      length: o.length,
+      capacity: offcutCapacity(o.length, kerf),
+      cost: 0,
+      limit: 1,
+    });
   }
   const maxCapacity = bins.reduce((m, b) => Math.max(m, b.capacity), 0);
   const byLength = new Map<number, ItemType>();
@@ -55,7 +69,8 @@ export function buildModel(input: SolveInput): Model {
   for (const p of input.pieces) {
     const weight = pieceWeight(p.length, kerf);
     if (weight > maxCapacity) {
-      for (let k = 0; k < p.quantity; k++) tooLong.push({ id: p.id, length: p.length, reason: 'longer-than-every-source' });
+      for (let k = 0; k < p.quantity; k++)
+        tooLong.push({ id: p.id, length: p.length, reason: 'longer-than-every-source' });
       continue;
     }
     let item = byLength.get(p.length);

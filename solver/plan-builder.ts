@@ -15,7 +15,11 @@ export function buildPlan(
   const unplaced: UnplacedPiece[] = [...model.tooLong];
   packing.unplaced.forEach((n, i) => {
     for (let k = 0; k < n; k++) {
-      unplaced.push({ id: queues[i].pop() as string, length: model.items[i].length, reason: 'not-enough-stock' });
+      unplaced.push({
+        id: queues[i].pop() as string,
+        length: model.items[i].length,
+        reason: 'not-enough-stock',
+      });
     }
   });
   const ordered = [...packing.boards].sort((a, b) => {

@@ -45,7 +45,10 @@ export function solve(input: SolveInput): SolvePlan {
     }
   }
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
-  return buildPlan(model, best, bound, { timeMs: Math.round(performance.now() - started), stoppedByTime: budget.timedOut });
+  return buildPlan(model, best, bound, {
+    timeMs: Math.round(performance.now() - started),
+    stoppedByTime: budget.timedOut,
+  });
 }
 
 function placedDemand(model: Model, p: Packing): number[] {

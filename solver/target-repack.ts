@@ -89,7 +89,8 @@ export function repackToTarget(
     const afterSq = loads.reduce((s, l) => s + l * l, 0);
     const afterItemsSq = chosen.reduce((s, c) => s + sq(c), 0);
     const better =
-      after > before || (after === before && (afterSq > beforeSq || (afterSq === beforeSq && afterItemsSq > beforeItemsSq)));
+      after > before ||
+      (after === before && (afterSq > beforeSq || (afterSq === beforeSq && afterItemsSq > beforeItemsSq)));
     if (!better) return false;
     which.forEach((b, k) => {
       state.bins[b] = chosen[k];

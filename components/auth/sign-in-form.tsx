@@ -25,7 +25,9 @@ export function SignInForm() {
     });
     setPending(false);
     if (!result || result.error) {
-      setError(result?.error && result.error !== 'CredentialsSignin' ? result.error : 'Sign-in failed. Try again.');
+      setError(
+        result?.error && result.error !== 'CredentialsSignin' ? result.error : 'Sign-in failed. Try again.',
+      );
       return;
     }
     router.replace(sameSitePath(next));
@@ -34,7 +36,11 @@ export function SignInForm() {
 
   return (
     <form onSubmit={onSubmit} className="mt-6 space-y-4" noValidate>
-      {error && <Notice tone="error" data-testid="sign-in-error">{error}</Notice>}
+      {error && (
+        <Notice tone="error" data-testid="sign-in-error">
+          {error}
+        </Notice>
+      )}
       <Field label="E-mail">
         {(p) => <input {...p} name="email" type="email" autoComplete="username" required />}
       </Field>

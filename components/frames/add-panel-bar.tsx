@@ -3,7 +3,16 @@
 import { Button } from '@/components/ui/button';
 import { KIND_HINTS, KIND_NAMES, type PanelKind } from './panel-fields';
 
-const KINDS: PanelKind[] = ['wall', 'sloped_wall', 'opening', 'roof', 'base', 'door_leaf', 'cladding', 'free'];
+const KINDS: PanelKind[] = [
+  'wall',
+  'sloped_wall',
+  'opening',
+  'roof',
+  'base',
+  'door_leaf',
+  'cladding',
+  'free',
+];
 
 /** One button per kind of panel; an opening, door leaf or cladding attaches to the last wall or opening. */
 export function AddPanelBar({ onAdd }: { onAdd: (kind: PanelKind) => void }) {

@@ -8,7 +8,12 @@ import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { layoutPanel, type SectionDimensions } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
-import { copyFrameScheduleRequest, deleteFrameScheduleRequest, saveFrameScheduleRequest, type FrameScheduleDto } from '@/lib/queries/frames';
+import {
+  copyFrameScheduleRequest,
+  deleteFrameScheduleRequest,
+  saveFrameScheduleRequest,
+  type FrameScheduleDto,
+} from '@/lib/queries/frames';
 import { AddPanelBar } from './add-panel-bar';
 import { PanelCard } from './panel-card';
 import { draftToPanel, newPanelDraft, panelToDraft, reformatLengths, type PanelDraft } from './panel-draft';
@@ -23,14 +28,22 @@ type Props = { schedule: FrameScheduleDto; sections: FrameSectionOption[]; openJ
 /** The frame schedule editor: panels with live drawings, the piece schedule, save, copy and send to a job. */
 export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
   const router = useRouter();
-  const [details, setDetails] = useState<ScheduleDetails>({ name: schedule.name, customerName: schedule.customerName, unit: schedule.unit });
-  const [drafts, setDrafts] = useState<PanelDraft[]>(() => schedule.panels.map((p, k) => panelToDraft(p, schedule.unit, p.id ?? `p${k + 1}`)));
+  const [details, setDetails] = useState<ScheduleDetails>({
+    name: schedule.name,
+    customerName: schedule.customerName,
+    unit: schedule.unit,
+  });
+  const [drafts, setDrafts] = useState<PanelDraft[]>(() =>
+    schedule.panels.map((p, k) => panelToDraft(p, schedule.unit, p.id ?? `p${k + 1}`)),
+  );
   const converted = drafts.map(draftToPanel);
   const body = { ...details, panels: converted.map((c) => c.panel) };
   const bodyKey = JSON.stringify(body);
   const [savedKey, setSavedKey] = useState(bodyKey);
   const clientErrors = converted.some((c) => Object.keys(c.errors).length > 0);
-  const preview = useFramePreview(drafts.length && !clientErrors ? { unit: details.unit, panels: body.panels } : null);
+  const preview = useFramePreview(
+    drafts.length && !clientErrors ? { unit: details.unit, panels: body.panels } : null,
+  );
   const previewIssues = panelIssues(preview.error);
 
   const save = useMutation({
@@ -41,19 +54,32 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
     },
   });
   const saveIssues = panelIssues(save.error);
-  const copy = useMutation({ mutationFn: () => copyFrameScheduleRequest(schedule.id), onSuccess: (s) => router.push(`/frames/${s.id}`) });
-  const remove = useMutation({ mutationFn: () => deleteFrameScheduleRequest(schedule.id), onSuccess: () => router.push('/frames') });
+  const copy = useMutation({
+    mutationFn: () => copyFrameScheduleRequest(schedule.id),
+    onSuccess: (s) => router.push(`/frames/${s.id}`),
+  });
+  const remove = useMutation({
+    mutationFn: () => deleteFrameScheduleRequest(schedule.id),
+    onSuccess: () => router.push('/frames'),
+  });
   const dirty = bodyKey !== savedKey;
 
   // A new first panel starts on a framing size rather than whatever sorts first.
   const framingSectionId = (sections.find((s) => s.thickness >= 38 && s.width >= 75) ?? sections[0])?.id;
-  const dimensions = useMemo(() => new Map<number, SectionDimensions>(sections.map((s) => [s.id, { thickness: s.thickness, width: s.width }])), [sections]);
+  const dimensions = useMemo(
+    () =>
+      new Map<number, SectionDimensions>(
+        sections.map((s) => [s.id, { thickness: s.thickness, width: s.width }]),
+      ),
+    [sections],
+  );
   const layouts = useMemo(() => {
     const panels = preview.data?.panels ?? [];
     return panels.map((panel) => layoutPanel(panel, { sections: dimensions, panels }));
   }, [preview.data, dimensions]);
 
-  const update = (index: number, draft: PanelDraft) => setDrafts((ds) => ds.map((d, k) => (k === index ? draft : d)));
+  const update = (index: number, draft: PanelDraft) =>
+    setDrafts((ds) => ds.map((d, k) => (k === index ? draft : d)));
   const move = (index: number, by: -1 | 1) =>
     setDrafts((ds) => {
       const next = [...ds];
@@ -64,7 +90,11 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
     if (next.unit !== details.unit) setDrafts((ds) => ds.map((d) => reformatLengths(d, next.unit)));
     setDetails(next);
   };
-  const errorsFor = (index: number) => ({ ...previewIssues.byPanel[index], ...saveIssues.byPanel[index], ...converted[index].errors });
+  const errorsFor = (index: number) => ({
+    ...previewIssues.byPanel[index],
+    ...saveIssues.byPanel[index],
+    ...converted[index].errors,
+  });
 
   return (
     <div className="space-y-6">
@@ -72,19 +102,39 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
       <Card className="space-y-4">
         <ScheduleDetailsFields value={details} errors={saveIssues.top} onChange={setUnit} />
         <div className="flex flex-wrap items-center gap-2">
-          <Button onClick={() => save.mutate()} disabled={save.isPending || !dirty}>{save.isPending ? 'Saving…' : 'Save schedule'}</Button>
-          <Button variant="secondary" onClick={() => copy.mutate()} disabled={copy.isPending}>Copy</Button>
-          <Button variant="quiet" className="text-brick" onClick={() => confirm('Delete this frame schedule?') && remove.mutate()}>Delete</Button>
-          <span className="text-sm text-bark-soft" data-testid="save-state">{dirty ? 'Unsaved changes' : 'All changes saved'}</span>
+          <Button onClick={() => save.mutate()} disabled={save.isPending || !dirty}>
+            {save.isPending ? 'Saving…' : 'Save schedule'}
+          </Button>
+          <Button variant="secondary" onClick={() => copy.mutate()} disabled={copy.isPending}>
+            Copy
+          </Button>
+          <Button
+            variant="quiet"
+            className="text-brick"
+            onClick={() => confirm('Delete this frame schedule?') && remove.mutate()}
+          >
+            Delete
+          </Button>
+          <span className="text-sm text-bark-soft" data-testid="save-state">
+            {dirty ? 'Unsaved changes' : 'All changes saved'}
+          </span>
         </div>
-        {save.error && <Notice tone="error">{saveIssues.count ? 'Not saved: the marked fields need attention.' : save.error.message}</Notice>}
+        {save.error && (
+          <Notice tone="error">
+            {saveIssues.count ? 'Not saved: the marked fields need attention.' : save.error.message}
+          </Notice>
+        )}
         {copy.error && <Notice tone="error">{copy.error.message}</Notice>}
         {remove.error && <Notice tone="error">{remove.error.message}</Notice>}
       </Card>
 
       <section className="space-y-4" aria-label="Panels">
         <h2 className="text-xl font-bold">Panels</h2>
-        {drafts.length === 0 && <p className="text-bark-soft">No panels yet. Start with a wall, then add its openings, the roof and any doors.</p>}
+        {drafts.length === 0 && (
+          <p className="text-bark-soft">
+            No panels yet. Start with a wall, then add its openings, the roof and any doors.
+          </p>
+        )}
         {drafts.map((draft, index) => (
           <PanelCard
             key={draft.key}
@@ -101,23 +151,39 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
             onRemove={() => setDrafts((ds) => ds.filter((_, k) => k !== index))}
           />
         ))}
-        <AddPanelBar onAdd={(kind) => setDrafts((ds) => [...ds, newPanelDraft(kind, ds, framingSectionId, details.unit)])} />
+        <AddPanelBar
+          onAdd={(kind) =>
+            setDrafts((ds) => [...ds, newPanelDraft(kind, ds, framingSectionId, details.unit)])
+          }
+        />
       </section>
 
       <Card className="space-y-3" data-testid="cut-list">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
           <h2 className="text-xl font-bold">Piece schedule</h2>
           <span className="text-sm text-bark-soft" data-testid="preview-state">
-            {clientErrors ? 'Fix the marked lengths to update' : preview.waiting ? 'Updating…' : preview.error ? 'Fix the marked fields to update' : 'Up to date'}
+            {clientErrors
+              ? 'Fix the marked lengths to update'
+              : preview.waiting
+                ? 'Updating…'
+                : preview.error
+                  ? 'Fix the marked fields to update'
+                  : 'Up to date'}
           </span>
         </div>
         {preview.error && (
           <Notice tone="error">
             {previewIssues.count ? (
               <ul className="list-inside list-disc" data-testid="preview-issues">
-                {Object.values(previewIssues.top).map((m) => <li key={m}>{m}</li>)}
+                {Object.values(previewIssues.top).map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
                 {Object.entries(previewIssues.byPanel).flatMap(([k, fields]) =>
-                  Object.values(fields).map((m) => <li key={`${k}${m}`}>{`Panel ${Number(k) + 1} (${drafts[Number(k)]?.name ?? ''}): ${m}`}</li>),
+                  Object.values(fields).map((m) => (
+                    <li
+                      key={`${k}${m}`}
+                    >{`Panel ${Number(k) + 1} (${drafts[Number(k)]?.name ?? ''}): ${m}`}</li>
+                  )),
                 )}
               </ul>
             ) : (
@@ -125,7 +191,11 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
             )}
           </Notice>
         )}
-        {preview.data?.warnings.map((w) => <Notice key={w} tone="warning">{w}</Notice>)}
+        {preview.data?.warnings.map((w) => (
+          <Notice key={w} tone="warning">
+            {w}
+          </Notice>
+        ))}
         {preview.data && drafts.length > 0 ? (
           <PieceScheduleTable items={preview.data.items} sections={sections} unit={details.unit} />
         ) : (
@@ -138,7 +208,11 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
         {schedule.jobs.length > 0 && (
           <p className="text-sm">
             Jobs from this schedule:{' '}
-            {schedule.jobs.map((j) => <a key={j.id} className="mr-2 font-semibold text-spruce underline" href={`/jobs/${j.id}`}>{j.reference}</a>)}
+            {schedule.jobs.map((j) => (
+              <a key={j.id} className="mr-2 font-semibold text-spruce underline" href={`/jobs/${j.id}`}>
+                {j.reference}
+              </a>
+            ))}
           </p>
         )}
         {dirty && <p className="text-sm text-bark-soft">Unsaved changes are saved first.</p>}

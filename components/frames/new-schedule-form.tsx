@@ -11,22 +11,39 @@ import { createFrameScheduleRequest, type FrameUnit } from '@/lib/queries/frames
 /** Starts an empty schedule and opens it in the editor. */
 export function NewScheduleForm() {
   const router = useRouter();
-  const create = useMutation({ mutationFn: createFrameScheduleRequest, onSuccess: (s) => router.push(`/frames/${s.id}`) });
-  const issues = create.error instanceof ApiError ? ((create.error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+  const create = useMutation({
+    mutationFn: createFrameScheduleRequest,
+    onSuccess: (s) => router.push(`/frames/${s.id}`),
+  });
+  const issues =
+    create.error instanceof ApiError
+      ? ((create.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
+      : [];
   const error = (path: string) => issues.find((i) => i.path === path)?.message;
 
   function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    create.mutate({ name: String(form.get('name')), customerName: String(form.get('customerName')), unit: String(form.get('unit')) as FrameUnit });
+    create.mutate({
+      name: String(form.get('name')),
+      customerName: String(form.get('customerName')),
+      unit: String(form.get('unit')) as FrameUnit,
+    });
   }
 
   return (
-    <form onSubmit={onSubmit} className="grid items-start gap-3 sm:grid-cols-[2fr_2fr_1fr_auto]" data-testid="new-schedule-form" noValidate>
+    <form
+      onSubmit={onSubmit}
+      className="grid items-start gap-3 sm:grid-cols-[2fr_2fr_1fr_auto]"
+      data-testid="new-schedule-form"
+      noValidate
+    >
       <Field label="Schedule name" error={error('name')} hint='e.g. "Lean-to for the Marsh garden"'>
         {(p) => <input {...p} name="name" autoComplete="off" />}
       </Field>
-      <Field label="Customer" error={error('customerName')}>{(p) => <input {...p} name="customerName" autoComplete="off" />}</Field>
+      <Field label="Customer" error={error('customerName')}>
+        {(p) => <input {...p} name="customerName" autoComplete="off" />}
+      </Field>
       <Field label="Lengths in">
         {(p) => (
           <select {...p} name="unit" defaultValue="mm">
@@ -35,8 +52,14 @@ export function NewScheduleForm() {
           </select>
         )}
       </Field>
-      <Button type="submit" className="sm:mt-6" disabled={create.isPending}>Start schedule</Button>
-      {create.error && !issues.length && <Notice tone="error" className="sm:col-span-4">{create.error.message}</Notice>}
+      <Button type="submit" className="sm:mt-6" disabled={create.isPending}>
+        Start schedule
+      </Button>
+      {create.error && !issues.length && (
+        <Notice tone="error" className="sm:col-span-4">
+          {create.error.message}
+        </Notice>
+      )}
     </form>
   );
 }

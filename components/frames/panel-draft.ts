@@ -20,15 +20,27 @@ const toText = (value: unknown, type: string, unit: FrameUnit): string => {
   return String(value);
 };
 
-export function panelToDraft(panel: FrameSchedulePanel | (Record<string, unknown> & { kind: PanelKind }), unit: FrameUnit, key: string): PanelDraft {
+export function panelToDraft(
+  panel: FrameSchedulePanel | (Record<string, unknown> & { kind: PanelKind }),
+  unit: FrameUnit,
+  key: string,
+): PanelDraft {
   const record = panel as Record<string, unknown>;
   const values: Record<string, string> = {};
   const exact: Record<string, number> = {};
   for (const field of PANEL_FIELDS[panel.kind]) {
     values[field.key] = toText(record[field.key], field.type, unit);
-    if (field.type === 'length' && typeof record[field.key] === 'number') exact[field.key] = record[field.key] as number;
+    if (field.type === 'length' && typeof record[field.key] === 'number')
+      exact[field.key] = record[field.key] as number;
   }
-  return { key, kind: panel.kind, id: String(record.id ?? key), name: String(record.name ?? ''), values, exact };
+  return {
+    key,
+    kind: panel.kind,
+    id: String(record.id ?? key),
+    name: String(record.name ?? ''),
+    values,
+    exact,
+  };
 }
 
 const NEW_NAMES: Record<PanelKind, string> = {
@@ -43,15 +55,26 @@ const NEW_NAMES: Record<PanelKind, string> = {
 };
 
 /** A new panel with working values: the last panel's section, and the last wall or opening to sit in. */
-export function newPanelDraft(kind: PanelKind, drafts: PanelDraft[], fallbackSectionId: number | undefined, unit: FrameUnit): PanelDraft {
+export function newPanelDraft(
+  kind: PanelKind,
+  drafts: PanelDraft[],
+  fallbackSectionId: number | undefined,
+  unit: FrameUnit,
+): PanelDraft {
   let n = drafts.length + 1;
   const ids = new Set(drafts.map((d) => d.id));
   while (ids.has(`p${n}`)) n++;
   const id = `p${n}`;
   const lastWith = (kinds: PanelKind[]) => [...drafts].reverse().find((d) => kinds.includes(d.kind));
-  const sectionId = [...drafts].reverse().find((d) => d.values.sectionId)?.values.sectionId ?? (fallbackSectionId ? String(fallbackSectionId) : '');
+  const sectionId =
+    [...drafts].reverse().find((d) => d.values.sectionId)?.values.sectionId ??
+    (fallbackSectionId ? String(fallbackSectionId) : '');
   const sameKind = drafts.filter((d) => d.kind === kind).length;
-  const values: Record<string, unknown> = { ...NEW_PANEL_VALUES[kind], id, name: sameKind ? `${NEW_NAMES[kind]} ${sameKind + 1}` : NEW_NAMES[kind] };
+  const values: Record<string, unknown> = {
+    ...NEW_PANEL_VALUES[kind],
+    id,
+    name: sameKind ? `${NEW_NAMES[kind]} ${sameKind + 1}` : NEW_NAMES[kind],
+  };
   if (kind !== 'opening') values.sectionId = sectionId ? Number(sectionId) : undefined;
   if (kind === 'door_leaf') values.boardSectionId = values.sectionId;
   if (kind === 'opening' || kind === 'cladding') values.wallId = lastWith(['wall', 'sloped_wall'])?.id;
@@ -60,7 +83,10 @@ export function newPanelDraft(kind: PanelKind, drafts: PanelDraft[], fallbackSec
 }
 
 /** The panel the API takes, plus messages for fields that could not be read. Blank optional fields are left out. */
-export function draftToPanel(draft: PanelDraft): { panel: FrameSchedulePanelInput; errors: Record<string, string> } {
+export function draftToPanel(draft: PanelDraft): {
+  panel: FrameSchedulePanelInput;
+  errors: Record<string, string>;
+} {
   const out: Record<string, unknown> = { kind: draft.kind, id: draft.id, name: draft.name };
   const errors: Record<string, string> = {};
   for (const field of PANEL_FIELDS[draft.kind]) {

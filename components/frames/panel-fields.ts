@@ -41,12 +41,25 @@ const section: FieldSpec = { key: 'sectionId', label: 'Section', type: 'section'
 const studFraming: FieldSpec[] = [
   { key: 'centres', label: 'Stud centres', type: 'length', hint: 'e.g. 400, 600 or 16"' },
   { key: 'bottomPlate', label: 'Bottom plate', type: 'yesno' },
-  { key: 'topPlate', label: 'Top plate', type: 'choice', options: [['double', 'Double'], ['single', 'Single']] },
+  {
+    key: 'topPlate',
+    label: 'Top plate',
+    type: 'choice',
+    options: [
+      ['double', 'Double'],
+      ['single', 'Single'],
+    ],
+  },
   { key: 'nogginRows', label: 'Noggin rows', type: 'number' },
 ];
 
 export const PANEL_FIELDS: Record<PanelKind, FieldSpec[]> = {
-  wall: [section, { key: 'length', label: 'Length', type: 'length' }, { key: 'height', label: 'Height', type: 'length' }, ...studFraming],
+  wall: [
+    section,
+    { key: 'length', label: 'Length', type: 'length' },
+    { key: 'height', label: 'Height', type: 'length' },
+    ...studFraming,
+  ],
   sloped_wall: [
     section,
     { key: 'length', label: 'Length', type: 'length' },
@@ -59,9 +72,27 @@ export const PANEL_FIELDS: Record<PanelKind, FieldSpec[]> = {
     { key: 'position', label: 'From wall start', type: 'length', hint: 'To the opening’s left edge' },
     { key: 'width', label: 'Width', type: 'length' },
     { key: 'height', label: 'Height', type: 'length' },
-    { key: 'sillHeight', label: 'Sill height', type: 'length', optional: true, hint: '0 or blank for a door' },
-    { key: 'sectionId', label: 'Trimmer section', type: 'section', optional: true, hint: 'Blank: the wall’s section' },
-    { key: 'headSectionId', label: 'Head section', type: 'section', optional: true, hint: 'Blank: the trimmer section' },
+    {
+      key: 'sillHeight',
+      label: 'Sill height',
+      type: 'length',
+      optional: true,
+      hint: '0 or blank for a door',
+    },
+    {
+      key: 'sectionId',
+      label: 'Trimmer section',
+      type: 'section',
+      optional: true,
+      hint: 'Blank: the wall’s section',
+    },
+    {
+      key: 'headSectionId',
+      label: 'Head section',
+      type: 'section',
+      optional: true,
+      hint: 'Blank: the trimmer section',
+    },
   ],
   roof: [
     { ...section, label: 'Rafter section' },
@@ -77,31 +108,67 @@ export const PANEL_FIELDS: Record<PanelKind, FieldSpec[]> = {
   ],
   base: [
     { ...section, label: 'Joist section' },
-    { key: 'bearerSectionId', label: 'Bearer section', type: 'section', optional: true, hint: 'Blank: the joist section' },
+    {
+      key: 'bearerSectionId',
+      label: 'Bearer section',
+      type: 'section',
+      optional: true,
+      hint: 'Blank: the joist section',
+    },
     { key: 'length', label: 'Length', type: 'length' },
     { key: 'width', label: 'Width', type: 'length' },
     { key: 'joistCentres', label: 'Joist centres', type: 'length' },
     { key: 'bearerCentres', label: 'Bearer centres', type: 'length' },
   ],
   door_leaf: [
-    { key: 'openingId', label: 'For opening', type: 'panel', of: ['opening'], optional: true, hint: 'Or give the opening size below' },
+    {
+      key: 'openingId',
+      label: 'For opening',
+      type: 'panel',
+      of: ['opening'],
+      optional: true,
+      hint: 'Or give the opening size below',
+    },
     { key: 'openingWidth', label: 'Opening width', type: 'length', optional: true },
     { key: 'openingHeight', label: 'Opening height', type: 'length', optional: true },
     { ...section, label: 'Ledge and brace section' },
     { key: 'boardSectionId', label: 'Board section', type: 'section' },
     { key: 'boardCover', label: 'Board cover width', type: 'length', hint: 'Width each board covers' },
     { key: 'ledges', label: 'Ledges', type: 'number', optional: true },
-    { key: 'hingeSide', label: 'Hinge side', type: 'choice', options: [['left', 'Left'], ['right', 'Right']] },
+    {
+      key: 'hingeSide',
+      label: 'Hinge side',
+      type: 'choice',
+      options: [
+        ['left', 'Left'],
+        ['right', 'Right'],
+      ],
+    },
     { key: 'clearanceWidth', label: 'Width clearance', type: 'length', optional: true, hint: 'Blank: 15' },
     { key: 'clearanceHeight', label: 'Height clearance', type: 'length', optional: true, hint: 'Blank: 10' },
   ],
   cladding: [
-    { key: 'wallId', label: 'On wall', type: 'panel', of: ['wall', 'sloped_wall'], optional: true, hint: 'Or give width and height' },
+    {
+      key: 'wallId',
+      label: 'On wall',
+      type: 'panel',
+      of: ['wall', 'sloped_wall'],
+      optional: true,
+      hint: 'Or give width and height',
+    },
     { key: 'width', label: 'Width to clad', type: 'length', optional: true },
     { key: 'height', label: 'Height to clad', type: 'length', optional: true },
     { ...section, label: 'Board section' },
     { key: 'cover', label: 'Board cover width', type: 'length' },
-    { key: 'direction', label: 'Boards run', type: 'choice', options: [['horizontal', 'Horizontal'], ['vertical', 'Vertical']] },
+    {
+      key: 'direction',
+      label: 'Boards run',
+      type: 'choice',
+      options: [
+        ['horizontal', 'Horizontal'],
+        ['vertical', 'Vertical'],
+      ],
+    },
     { key: 'maxStockLength', label: 'Longest board', type: 'length', optional: true, hint: 'Blank: 4800' },
     { key: 'wastePercent', label: 'Waste allowance %', type: 'number', optional: true, hint: 'Blank: 10' },
   ],
@@ -117,7 +184,15 @@ export const PANEL_FIELDS: Record<PanelKind, FieldSpec[]> = {
 /** Starting values in millimetres for a new panel, so it previews at once. */
 export const NEW_PANEL_VALUES: Record<PanelKind, Record<string, number | string | boolean>> = {
   wall: { length: 2400, height: 2100, centres: 400, bottomPlate: true, topPlate: 'double', nogginRows: 1 },
-  sloped_wall: { length: 1800, lowHeight: 1900, highHeight: 2200, centres: 400, bottomPlate: true, topPlate: 'double', nogginRows: 1 },
+  sloped_wall: {
+    length: 1800,
+    lowHeight: 1900,
+    highHeight: 2200,
+    centres: 400,
+    bottomPlate: true,
+    topPlate: 'double',
+    nogginRows: 1,
+  },
   opening: { position: 300, width: 760, height: 1800 },
   roof: { span: 1800, rise: 300, length: 2400, centres: 400, eavesOverhang: 150 },
   base: { length: 2400, width: 1800, joistCentres: 400, bearerCentres: 600 },

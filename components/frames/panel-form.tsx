@@ -25,14 +25,22 @@ export function PanelForm({ draft, drafts, sections, unit, errors, onChange }: P
   const control = (field: FieldSpec, props: { id: string; className: string }) => {
     const value = draft.values[field.key] ?? '';
     const onSelect = (e: React.ChangeEvent<HTMLSelectElement>) => set(field.key, e.target.value);
-    const blank = field.optional ? <option value="">—</option> : <option value="" disabled>Choose…</option>;
+    const blank = field.optional ? (
+      <option value="">—</option>
+    ) : (
+      <option value="" disabled>
+        Choose…
+      </option>
+    );
     switch (field.type) {
       case 'section':
         return (
           <select {...props} value={value} onChange={onSelect}>
             {blank}
             {sections.map((s) => (
-              <option key={s.id} value={s.id}>{s.name}</option>
+              <option key={s.id} value={s.id}>
+                {s.name}
+              </option>
             ))}
           </select>
         );
@@ -40,17 +48,28 @@ export function PanelForm({ draft, drafts, sections, unit, errors, onChange }: P
         return (
           <select {...props} value={value} onChange={onSelect}>
             {blank}
-            {drafts.filter((d) => field.of?.includes(d.kind)).map((d) => (
-              <option key={d.key} value={d.id}>{d.name || d.id}</option>
-            ))}
+            {drafts
+              .filter((d) => field.of?.includes(d.kind))
+              .map((d) => (
+                <option key={d.key} value={d.id}>
+                  {d.name || d.id}
+                </option>
+              ))}
           </select>
         );
       case 'choice':
       case 'yesno':
         return (
           <select {...props} value={value} onChange={onSelect}>
-            {(field.options ?? [['yes', 'Yes'], ['no', 'No']]).map(([v, label]) => (
-              <option key={v} value={v}>{label}</option>
+            {(
+              field.options ?? [
+                ['yes', 'Yes'],
+                ['no', 'No'],
+              ]
+            ).map(([v, label]) => (
+              <option key={v} value={v}>
+                {label}
+              </option>
             ))}
           </select>
         );
@@ -60,7 +79,9 @@ export function PanelForm({ draft, drafts, sections, unit, errors, onChange }: P
             {...props}
             value={value}
             inputMode={field.type === 'number' ? 'decimal' : 'text'}
-            placeholder={field.type === 'length' ? (unit === 'imperial' ? `e.g. 7'-10 1/2"` : 'e.g. 2400') : undefined}
+            placeholder={
+              field.type === 'length' ? (unit === 'imperial' ? `e.g. 7'-10 1/2"` : 'e.g. 2400') : undefined
+            }
             onChange={(e) => set(field.key, e.target.value)}
             autoComplete="off"
           />
@@ -71,7 +92,14 @@ export function PanelForm({ draft, drafts, sections, unit, errors, onChange }: P
     <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
       <div className="col-span-2 sm:col-span-3">
         <Field label="Panel name" error={errors.name} hint="Names its pieces: “back wall stud 4”">
-          {(p) => <input {...p} value={draft.name} onChange={(e) => onChange({ ...draft, name: e.target.value })} autoComplete="off" />}
+          {(p) => (
+            <input
+              {...p}
+              value={draft.name}
+              onChange={(e) => onChange({ ...draft, name: e.target.value })}
+              autoComplete="off"
+            />
+          )}
         </Field>
       </div>
       {PANEL_FIELDS[draft.kind].map((field) => (

@@ -4,7 +4,15 @@ import type { FrameUnit } from '@/lib/queries/frames';
 import { formatLength } from '@/lib/units';
 
 /** Every piece: its mark on the drawings, where it goes, section, length, count and any angled cut. */
-export function PieceScheduleTable({ items, sections, unit }: { items: FrameItem[]; sections: FrameSectionOption[]; unit: FrameUnit }) {
+export function PieceScheduleTable({
+  items,
+  sections,
+  unit,
+}: {
+  items: FrameItem[];
+  sections: FrameSectionOption[];
+  unit: FrameUnit;
+}) {
   const sectionName = (id: number) => sections.find((s) => s.id === id)?.name ?? `Section ${id}`;
   const totals = new Map<number, { pieces: number; mm: number }>();
   for (const item of items) {
@@ -43,8 +51,12 @@ export function PieceScheduleTable({ items, sections, unit }: { items: FrameItem
           {[...totals].map(([id, t]) => (
             <tr key={id} data-testid="section-total">
               <td />
-              <td className="p-2 font-semibold" colSpan={2}>Total {sectionName(id)}</td>
-              <td className="p-2 text-right font-mono">{unit === 'mm' ? `${(t.mm / 1000).toFixed(1)} m` : formatLength(t.mm, unit)}</td>
+              <td className="p-2 font-semibold" colSpan={2}>
+                Total {sectionName(id)}
+              </td>
+              <td className="p-2 text-right font-mono">
+                {unit === 'mm' ? `${(t.mm / 1000).toFixed(1)} m` : formatLength(t.mm, unit)}
+              </td>
               <td className="p-2 text-right font-mono">{t.pieces}</td>
               <td />
             </tr>

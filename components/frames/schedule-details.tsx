@@ -6,18 +6,44 @@ import type { FrameUnit } from '@/lib/queries/frames';
 export type ScheduleDetails = { name: string; customerName: string; unit: FrameUnit };
 
 /** Name, customer and the unit lengths are shown in. */
-export function ScheduleDetailsFields({ value, errors, onChange }: { value: ScheduleDetails; errors: Record<string, string>; onChange: (v: ScheduleDetails) => void }) {
+export function ScheduleDetailsFields({
+  value,
+  errors,
+  onChange,
+}: {
+  value: ScheduleDetails;
+  errors: Record<string, string>;
+  onChange: (v: ScheduleDetails) => void;
+}) {
   return (
     <div className="grid gap-3 sm:grid-cols-3">
       <Field label="Schedule name" error={errors.name}>
-        {(p) => <input {...p} value={value.name} onChange={(e) => onChange({ ...value, name: e.target.value })} autoComplete="off" />}
+        {(p) => (
+          <input
+            {...p}
+            value={value.name}
+            onChange={(e) => onChange({ ...value, name: e.target.value })}
+            autoComplete="off"
+          />
+        )}
       </Field>
       <Field label="Customer" error={errors.customerName}>
-        {(p) => <input {...p} value={value.customerName} onChange={(e) => onChange({ ...value, customerName: e.target.value })} autoComplete="off" />}
+        {(p) => (
+          <input
+            {...p}
+            value={value.customerName}
+            onChange={(e) => onChange({ ...value, customerName: e.target.value })}
+            autoComplete="off"
+          />
+        )}
       </Field>
       <Field label="Show lengths in" hint={'Type lengths either way: 2400, 2.4 m or 7\'-10 1/2"'}>
         {(p) => (
-          <select {...p} value={value.unit} onChange={(e) => onChange({ ...value, unit: e.target.value as FrameUnit })}>
+          <select
+            {...p}
+            value={value.unit}
+            onChange={(e) => onChange({ ...value, unit: e.target.value as FrameUnit })}
+          >
             <option value="mm">Millimetres</option>
             <option value="imperial">Feet and inches</option>
           </select>

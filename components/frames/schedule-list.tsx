@@ -1,6 +1,13 @@
 import Link from 'next/link';
 
-type Row = { id: number; name: string; customerName: string; panelCount: number; updatedAt: string; jobReferences: string[] };
+type Row = {
+  id: number;
+  name: string;
+  customerName: string;
+  panelCount: number;
+  updatedAt: string;
+  jobReferences: string[];
+};
 
 /** Saved frame schedules, latest first, with the jobs made from each. */
 export function ScheduleList({ schedules }: { schedules: Row[] }) {
@@ -21,7 +28,9 @@ export function ScheduleList({ schedules }: { schedules: Row[] }) {
           {schedules.map((s) => (
             <tr key={s.id} className="border-t border-shaving">
               <td className="p-3">
-                <Link href={`/frames/${s.id}`} className="font-semibold text-spruce underline">{s.name}</Link>
+                <Link href={`/frames/${s.id}`} className="font-semibold text-spruce underline">
+                  {s.name}
+                </Link>
               </td>
               <td className="p-3">{s.customerName}</td>
               <td className="p-3 text-right">{s.panelCount}</td>

@@ -11,7 +11,13 @@ import { sendScheduleToJobRequest, type SendToJobRequest } from '@/lib/queries/f
 
 export type OpenJob = { id: number; reference: string; customerName: string; status: string };
 
-type Props = { scheduleId: number; customerName: string; openJobs: OpenJob[]; disabled: boolean; beforeSend: () => Promise<void> };
+type Props = {
+  scheduleId: number;
+  customerName: string;
+  openJobs: OpenJob[];
+  disabled: boolean;
+  beforeSend: () => Promise<void>;
+};
 
 /** Sends the saved cut list, summed by section, to a new job or a draft or planned one, then opens the job. */
 export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, beforeSend }: Props) {
@@ -24,7 +30,10 @@ export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, be
     },
     onSuccess: ({ jobId }) => router.push(`/jobs/${jobId}`),
   });
-  const issues = send.error instanceof ApiError ? ((send.error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+  const issues =
+    send.error instanceof ApiError
+      ? ((send.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
+      : [];
   const error = (path: string) => issues.find((i) => i.path === path)?.message;
 
   function onSubmit(event: React.FormEvent<HTMLFormElement>) {
@@ -47,7 +56,13 @@ export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, be
         <legend className="mb-2 text-sm font-semibold">Send the cut list to</legend>
         {(['new', 'existing'] as const).map((value) => (
           <label key={value} className="flex min-h-11 items-center gap-2">
-            <input type="radio" name="target" className="size-5" checked={target === value} onChange={() => setTarget(value)} />
+            <input
+              type="radio"
+              name="target"
+              className="size-5"
+              checked={target === value}
+              onChange={() => setTarget(value)}
+            />
             {value === 'new' ? 'A new job' : 'A draft or planned job'}
           </label>
         ))}
@@ -60,13 +75,21 @@ export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, be
           <Field label="Job reference" hint="Blank: the next number" error={error('newJob.reference')}>
             {(p) => <input {...p} name="reference" autoComplete="off" />}
           </Field>
-          <Field label="Due date" error={error('newJob.dueDate')}>{(p) => <input {...p} name="dueDate" type="date" />}</Field>
+          <Field label="Due date" error={error('newJob.dueDate')}>
+            {(p) => <input {...p} name="dueDate" type="date" />}
+          </Field>
         </div>
       ) : (
-        <Field label="Job" error={error('jobId')} hint="A planned job goes back to draft: its plan no longer covers all its pieces.">
+        <Field
+          label="Job"
+          error={error('jobId')}
+          hint="A planned job goes back to draft: its plan no longer covers all its pieces."
+        >
           {(p) => (
             <select {...p} name="jobId" defaultValue="">
-              <option value="" disabled>Choose a job…</option>
+              <option value="" disabled>
+                Choose a job…
+              </option>
               {openJobs.map((j) => (
                 <option key={j.id} value={j.id}>{`${j.reference} · ${j.customerName} (${j.status})`}</option>
               ))}

@@ -10,7 +10,10 @@ type Body = { unit: FrameUnit; panels: FrameSchedulePanelInput[] };
 
 /** Field messages by panel index and field name, from a 422's `panels.2.centres` paths. */
 export function panelIssues(error: unknown) {
-  const issues = error instanceof ApiError ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+  const issues =
+    error instanceof ApiError
+      ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
+      : [];
   const byPanel: Record<number, Record<string, string>> = {};
   const top: Record<string, string> = {};
   for (const issue of issues) {

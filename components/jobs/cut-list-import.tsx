@@ -14,7 +14,8 @@ import { sectionsQuery } from '@/lib/queries/sections';
 import { MAX_IMPORT_BYTES } from '@/lib/validations/jobs';
 import { ImportErrors, type RowError } from './import-errors';
 
-type Outcome = { kind: 'done'; text: string } | { kind: 'errors'; summary: string; errors: RowError[] } | null;
+type Outcome =
+  { kind: 'done'; text: string } | { kind: 'errors'; summary: string; errors: RowError[] } | null;
 
 /**
  * Import a cut list from a CSV file (drop or pick) or text pasted from a spreadsheet. The file is
@@ -33,11 +34,18 @@ export function CutListImport({ jobId }: { jobId: number }) {
     setOutcome(null);
     try {
       const { imported } = await importItemsRequest(jobId, text, replace);
-      setOutcome({ kind: 'done', text: `Imported ${imported} row${imported === 1 ? '' : 's'} from ${source}.` });
+      setOutcome({
+        kind: 'done',
+        text: `Imported ${imported} row${imported === 1 ? '' : 's'} from ${source}.`,
+      });
       setPasted('');
       await queryClient.invalidateQueries({ queryKey: ['job', jobId] });
     } catch (error) {
-      const errors = error instanceof ApiError ? ((error.body as { errors?: RowError[]; details?: { errors?: RowError[] } })?.errors ?? (error.body as { details?: { errors?: RowError[] } })?.details?.errors) : undefined;
+      const errors =
+        error instanceof ApiError
+          ? ((error.body as { errors?: RowError[]; details?: { errors?: RowError[] } })?.errors ??
+            (error.body as { details?: { errors?: RowError[] } })?.details?.errors)
+          : undefined;
       setOutcome({ kind: 'errors', summary: (error as Error).message, errors: errors ?? [] });
     } finally {
       setBusy(false);
@@ -51,7 +59,15 @@ export function CutListImport({ jobId }: { jobId: number }) {
     disabled: busy,
     onDropAccepted: async ([file]) => send(await file.text(), file.name),
     onDropRejected: ([rejection]) =>
-      setOutcome({ kind: 'errors', summary: `${rejection.file.name} was not read.`, errors: rejection.errors.map((e) => ({ line: 1, column: null, message: e.code === 'file-too-large' ? 'The file is larger than 5 MB; split it.' : e.message })) }),
+      setOutcome({
+        kind: 'errors',
+        summary: `${rejection.file.name} was not read.`,
+        errors: rejection.errors.map((e) => ({
+          line: 1,
+          column: null,
+          message: e.code === 'file-too-large' ? 'The file is larger than 5 MB; split it.' : e.message,
+        })),
+      }),
   });
 
   const template = sections.data ? buildYardCutListTemplate(sections.data) : null;
@@ -59,30 +75,58 @@ export function CutListImport({ jobId }: { jobId: number }) {
     <div className="space-y-4">
       <div
         {...dropzone.getRootProps({
-          className: cn('cursor-pointer rounded-xl border-2 border-dashed p-6 text-center', dropzone.isDragActive ? 'border-spruce bg-spruce-light' : 'border-grain bg-sawdust'),
+          className: cn(
+            'cursor-pointer rounded-xl border-2 border-dashed p-6 text-center',
+            dropzone.isDragActive ? 'border-spruce bg-spruce-light' : 'border-grain bg-sawdust',
+          ),
         })}
         data-testid="cut-list-dropzone"
       >
         <input {...dropzone.getInputProps()} aria-label="Cut list file" />
-        <p className="font-semibold">{busy ? 'Checking every row…' : 'Drop a cut list CSV here, or click to choose one'}</p>
-        <p className="mt-1 text-sm text-bark-soft">Columns section, length, quantity, label, note. Lengths in mm (2400), metres (2.4m) or feet-inches (7&apos; 8 5/8&quot;). Up to 5 MB.</p>
+        <p className="font-semibold">
+          {busy ? 'Checking every row…' : 'Drop a cut list CSV here, or click to choose one'}
+        </p>
+        <p className="mt-1 text-sm text-bark-soft">
+          Columns section, length, quantity, label, note. Lengths in mm (2400), metres (2.4m) or feet-inches
+          (7&apos; 8 5/8&quot;). Up to 5 MB.
+        </p>
       </div>
       <div className="flex flex-wrap items-center gap-4">
         {template && (
-          <a className="font-semibold text-spruce underline" download="kerfwise-cut-list-template.csv" href={`data:text/csv;charset=utf-8,${encodeURIComponent(template)}`}>
+          <a
+            className="font-semibold text-spruce underline"
+            download="kerfwise-cut-list-template.csv"
+            href={`data:text/csv;charset=utf-8,${encodeURIComponent(template)}`}
+          >
             Download the template
           </a>
         )}
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" checked={replace} onChange={(e) => setReplace(e.target.checked)} className="h-5 w-5" />
+          <input
+            type="checkbox"
+            checked={replace}
+            onChange={(e) => setReplace(e.target.checked)}
+            className="h-5 w-5"
+          />
           Replace the current list instead of adding to it
         </label>
       </div>
       <details>
         <summary className="cursor-pointer font-semibold text-spruce">Paste rows from a spreadsheet</summary>
         <div className="mt-2 space-y-2">
-          <textarea className={cn(inputClass, 'font-mono text-sm')} rows={6} value={pasted} onChange={(e) => setPasted(e.target.value)} aria-label="Pasted cut list" placeholder={'section\tlength\tquantity\tlabel\nT47100\t2400\t9\tstud'} />
-          <Button variant="secondary" disabled={busy || pasted.trim() === ''} onClick={() => send(pasted, 'the pasted rows')}>
+          <textarea
+            className={cn(inputClass, 'font-mono text-sm')}
+            rows={6}
+            value={pasted}
+            onChange={(e) => setPasted(e.target.value)}
+            aria-label="Pasted cut list"
+            placeholder={'section\tlength\tquantity\tlabel\nT47100\t2400\t9\tstud'}
+          />
+          <Button
+            variant="secondary"
+            disabled={busy || pasted.trim() === ''}
+            onClick={() => send(pasted, 'the pasted rows')}
+          >
             Import pasted rows
           </Button>
         </div>

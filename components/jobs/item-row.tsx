@@ -28,15 +28,29 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
     return (
       <tr className="border-t border-shaving" data-testid="item-row">
         <td className="p-2">{item.sectionName}</td>
-        <td className="p-2 text-right tabular-nums">{format(item.lengthMm)}{suffix}</td>
+        <td className="p-2 text-right tabular-nums">
+          {format(item.lengthMm)}
+          {suffix}
+        </td>
         <td className="p-2 text-right tabular-nums">{item.quantity}</td>
         <td className="p-2">{item.label}</td>
         <td className="p-2 text-sm text-bark-soft">{item.note}</td>
         <td className="no-print p-2 text-right whitespace-nowrap">
           {editable && (
             <>
-              <Button variant="quiet" onClick={() => setEditing(true)} aria-label={`Edit ${name}`}>Edit</Button>
-              <Button variant="quiet" className="text-brick" disabled={busy} aria-label={`Delete ${name}`} onClick={async () => { setBusy(true); await onDelete?.().finally(() => setBusy(false)); }}>
+              <Button variant="quiet" onClick={() => setEditing(true)} aria-label={`Edit ${name}`}>
+                Edit
+              </Button>
+              <Button
+                variant="quiet"
+                className="text-brick"
+                disabled={busy}
+                aria-label={`Delete ${name}`}
+                onClick={async () => {
+                  setBusy(true);
+                  await onDelete?.().finally(() => setBusy(false));
+                }}
+              >
                 Delete
               </Button>
             </>
@@ -70,22 +84,77 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
 
   const formId = `item-form-${item?.id ?? 'new'}`;
   return (
-    <tr className="border-t border-shaving bg-sawdust" data-testid={item ? 'item-row-editing' : 'new-item-row'}>
+    <tr
+      className="border-t border-shaving bg-sawdust"
+      data-testid={item ? 'item-row-editing' : 'new-item-row'}
+    >
       <td className="p-2">
         <form id={formId} onSubmit={save} />
-        <select form={formId} name="sectionId" aria-label={`Section, ${name}`} className={inputClass} defaultValue={item?.sectionId ?? defaultSectionId ?? sections[0]?.id}>
+        <select
+          form={formId}
+          name="sectionId"
+          aria-label={`Section, ${name}`}
+          className={inputClass}
+          defaultValue={item?.sectionId ?? defaultSectionId ?? sections[0]?.id}
+        >
           {sections.map((s) => (
-            <option key={s.id} value={s.id}>{s.name}</option>
+            <option key={s.id} value={s.id}>
+              {s.name}
+            </option>
           ))}
         </select>
       </td>
-      <td className="p-2"><input form={formId} name="length" aria-label={`Length, ${name}`} required className={`${inputClass} text-right`} defaultValue={item ? format(item.lengthMm) : ''} placeholder="2400 or 7'-8 5/8&quot;" /></td>
-      <td className="p-2"><input form={formId} name="quantity" aria-label={`Quantity, ${name}`} required type="number" min={1} max={10000} className={`${inputClass} w-24 text-right`} defaultValue={item?.quantity ?? 1} /></td>
-      <td className="p-2"><input form={formId} name="label" aria-label={`Label, ${name}`} className={inputClass} defaultValue={item?.label ?? ''} /></td>
-      <td className="p-2"><input form={formId} name="note" aria-label={`Note, ${name}`} className={inputClass} defaultValue={item?.note ?? ''} /></td>
+      <td className="p-2">
+        <input
+          form={formId}
+          name="length"
+          aria-label={`Length, ${name}`}
+          required
+          className={`${inputClass} text-right`}
+          defaultValue={item ? format(item.lengthMm) : ''}
+          placeholder="2400 or 7'-8 5/8&quot;"
+        />
+      </td>
+      <td className="p-2">
+        <input
+          form={formId}
+          name="quantity"
+          aria-label={`Quantity, ${name}`}
+          required
+          type="number"
+          min={1}
+          max={10000}
+          className={`${inputClass} w-24 text-right`}
+          defaultValue={item?.quantity ?? 1}
+        />
+      </td>
+      <td className="p-2">
+        <input
+          form={formId}
+          name="label"
+          aria-label={`Label, ${name}`}
+          className={inputClass}
+          defaultValue={item?.label ?? ''}
+        />
+      </td>
+      <td className="p-2">
+        <input
+          form={formId}
+          name="note"
+          aria-label={`Note, ${name}`}
+          className={inputClass}
+          defaultValue={item?.note ?? ''}
+        />
+      </td>
       <td className="p-2 text-right whitespace-nowrap">
-        <Button form={formId} type="submit" disabled={busy}>{item ? 'Save' : 'Add row'}</Button>
-        {item && <Button variant="quiet" onClick={() => setEditing(false)}>Cancel</Button>}
+        <Button form={formId} type="submit" disabled={busy}>
+          {item ? 'Save' : 'Add row'}
+        </Button>
+        {item && (
+          <Button variant="quiet" onClick={() => setEditing(false)}>
+            Cancel
+          </Button>
+        )}
       </td>
     </tr>
   );

@@ -5,7 +5,13 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useDisplayUnit } from '@/components/units/display-unit';
-import { addItemRequest, deleteItemRequest, updateItemRequest, type ItemBody, type JobItemRow } from '@/lib/queries/jobs';
+import {
+  addItemRequest,
+  deleteItemRequest,
+  updateItemRequest,
+  type ItemBody,
+  type JobItemRow,
+} from '@/lib/queries/jobs';
 import { sectionsQuery } from '@/lib/queries/sections';
 import { ItemRow } from './item-row';
 import { sumItemsPerSection } from './section-totals';
@@ -13,7 +19,15 @@ import { sumItemsPerSection } from './section-totals';
 const PAGE = 200;
 
 /** The job's cut list as an editable table, with pieces and running length per section. */
-export function ItemsTable({ jobId, items, editable }: { jobId: number; items: JobItemRow[]; editable: boolean }) {
+export function ItemsTable({
+  jobId,
+  items,
+  editable,
+}: {
+  jobId: number;
+  items: JobItemRow[];
+  editable: boolean;
+}) {
   const queryClient = useQueryClient();
   const sections = useQuery(sectionsQuery());
   const { format, suffix } = useDisplayUnit();
@@ -41,7 +55,9 @@ export function ItemsTable({ jobId, items, editable }: { jobId: number; items: J
               <th className="p-2 text-right">Qty</th>
               <th className="p-2">Label</th>
               <th className="p-2">Note</th>
-              <th className="p-2"><span className="sr-only">Actions</span></th>
+              <th className="p-2">
+                <span className="sr-only">Actions</span>
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -56,7 +72,12 @@ export function ItemsTable({ jobId, items, editable }: { jobId: number; items: J
               />
             ))}
             {editable && sections.data && (
-              <ItemRow sections={sections.data} editable defaultSectionId={items.at(-1)?.sectionId} onSave={(body) => run(() => addItemRequest(jobId, body))} />
+              <ItemRow
+                sections={sections.data}
+                editable
+                defaultSectionId={items.at(-1)?.sectionId}
+                onSave={(body) => run(() => addItemRequest(jobId, body))}
+              />
             )}
           </tbody>
         </table>
@@ -83,7 +104,10 @@ export function ItemsTable({ jobId, items, editable }: { jobId: number; items: J
                 <td className="py-1">{t.sectionName}</td>
                 <td className="py-1 text-right tabular-nums">{t.rows}</td>
                 <td className="py-1 text-right tabular-nums">{t.pieces}</td>
-                <td className="py-1 text-right tabular-nums">{format(t.lengthMm)}{suffix}</td>
+                <td className="py-1 text-right tabular-nums">
+                  {format(t.lengthMm)}
+                  {suffix}
+                </td>
               </tr>
             ))}
           </tbody>

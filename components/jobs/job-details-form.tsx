@@ -32,10 +32,22 @@ export function JobDetailsForm({
     setBusy(true);
     setErrors({});
     try {
-      await onSubmit({ customer: v.customer, reference: v.reference || undefined, dueDate: v.dueDate || null, customerEmail: v.customerEmail, notes: v.notes });
+      await onSubmit({
+        customer: v.customer,
+        reference: v.reference || undefined,
+        dueDate: v.dueDate || null,
+        customerEmail: v.customerEmail,
+        notes: v.notes,
+      });
     } catch (error) {
-      const issues = error instanceof ApiError ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
-      setErrors({ form: (error as Error).message, ...Object.fromEntries(issues.map((i) => [i.path, i.message])) });
+      const issues =
+        error instanceof ApiError
+          ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
+          : [];
+      setErrors({
+        form: (error as Error).message,
+        ...Object.fromEntries(issues.map((i) => [i.path, i.message])),
+      });
     } finally {
       setBusy(false);
     }
@@ -57,7 +69,11 @@ export function JobDetailsForm({
           {(p) => <textarea {...p} name="notes" rows={2} defaultValue={initial?.notes ?? ''} />}
         </Field>
       </div>
-      {errors.form && <Notice tone="error" className="sm:col-span-2">{errors.form}</Notice>}
+      {errors.form && (
+        <Notice tone="error" className="sm:col-span-2">
+          {errors.form}
+        </Notice>
+      )}
       <div className="sm:col-span-2">
         <Button type="submit" disabled={busy}>
           {busy ? 'Saving…' : submitLabel}

@@ -6,12 +6,23 @@ import type { JobFilters as Filters } from '@/lib/queries/jobs';
 
 /** Search and filter controls for the job list; every change filters at once. */
 export function JobFilters({ value, onChange }: { value: Filters; onChange: (next: Filters) => void }) {
-  const set = (key: keyof Filters) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement>) => onChange({ ...value, [key]: e.target.value });
+  const set = (key: keyof Filters) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement>) =>
+    onChange({ ...value, [key]: e.target.value });
   return (
-    <form role="search" className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
+    <form
+      role="search"
+      className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4"
+      onSubmit={(e) => e.preventDefault()}
+    >
       <label className="text-sm font-semibold">
         Reference or customer
-        <input type="search" className={inputClass} value={value.q ?? ''} onChange={set('q')} placeholder="J-1001 or a name" />
+        <input
+          type="search"
+          className={inputClass}
+          value={value.q ?? ''}
+          onChange={set('q')}
+          placeholder="J-1001 or a name"
+        />
       </label>
       <label className="text-sm font-semibold">
         Status

@@ -10,7 +10,15 @@ import type { JobPlanRow } from '@/lib/queries/jobs';
 import { createPlanRequest } from '@/lib/queries/plans';
 
 /** Plan the job with the yard's settings, list its plans, and pick two to compare. */
-export function JobPlans({ jobId, plans, canPlan }: { jobId: number; plans: JobPlanRow[]; canPlan: boolean }) {
+export function JobPlans({
+  jobId,
+  plans,
+  canPlan,
+}: {
+  jobId: number;
+  plans: JobPlanRow[];
+  canPlan: boolean;
+}) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -27,7 +35,8 @@ export function JobPlans({ jobId, plans, canPlan }: { jobId: number; plans: JobP
       setBusy(false);
     }
   }
-  const toggle = (id: number) => setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : [...p.slice(-1), id]));
+  const toggle = (id: number) =>
+    setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : [...p.slice(-1), id]));
 
   return (
     <div className="space-y-4">
@@ -53,13 +62,22 @@ export function JobPlans({ jobId, plans, canPlan }: { jobId: number; plans: JobP
             {plans.map((p) => (
               <tr key={p.id} className="border-t border-shaving">
                 <td className="p-2">
-                  <input type="checkbox" className="h-5 w-5" aria-label={`Compare plan ${p.id}`} checked={picked.includes(p.id)} onChange={() => toggle(p.id)} />
+                  <input
+                    type="checkbox"
+                    className="h-5 w-5"
+                    aria-label={`Compare plan ${p.id}`}
+                    checked={picked.includes(p.id)}
+                    onChange={() => toggle(p.id)}
+                  />
                 </td>
                 <td className="p-2">
                   <Link className="font-semibold text-spruce underline" href={`/plans/${p.id}`}>
                     Plan {p.id}
                   </Link>{' '}
-                  <span className="text-sm text-bark-soft">kerf {p.settings.kerfMm}, trim {p.settings.trimMm}{p.settings.useOffcuts ? '' : ', no offcuts'}</span>
+                  <span className="text-sm text-bark-soft">
+                    kerf {p.settings.kerfMm}, trim {p.settings.trimMm}
+                    {p.settings.useOffcuts ? '' : ', no offcuts'}
+                  </span>
                 </td>
                 <td className="p-2">{p.status}</td>
                 <td className="p-2 text-right tabular-nums">{p.totals.boards}</td>
@@ -71,7 +89,10 @@ export function JobPlans({ jobId, plans, canPlan }: { jobId: number; plans: JobP
         </table>
       )}
       {picked.length === 2 && (
-        <Link className="inline-block font-semibold text-spruce underline" href={`/plans/compare?a=${picked[0]}&b=${picked[1]}`}>
+        <Link
+          className="inline-block font-semibold text-spruce underline"
+          href={`/plans/compare?a=${picked[0]}&b=${picked[1]}`}
+        >
           Compare plans {picked[0]} and {picked[1]} side by side
         </Link>
       )}

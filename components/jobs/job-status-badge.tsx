@@ -11,5 +11,9 @@ const tones: Record<JobStatus, string> = {
 };
 
 export function JobStatusBadge({ status }: { status: JobStatus }) {
-  return <span className={cn('inline-block rounded-full px-3 py-0.5 text-sm font-semibold', tones[status])}>{status}</span>;
+  return (
+    <span className={cn('inline-block rounded-full px-3 py-0.5 text-sm font-semibold', tones[status])}>
+      {status}
+    </span>
+  );
 }

@@ -37,7 +37,8 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
             {j.reference} <span className="font-normal text-bark-soft">· {j.customerName}</span>
           </h1>
           <p className="mt-1 flex items-center gap-3 text-bark-soft">
-            <JobStatusBadge status={j.status} /> Due {j.dueDate ?? 'not set'} {j.customerEmail && <>· {j.customerEmail}</>}
+            <JobStatusBadge status={j.status} /> Due {j.dueDate ?? 'not set'}{' '}
+            {j.customerEmail && <>· {j.customerEmail}</>}
           </p>
         </div>
         <div className="flex flex-wrap gap-2">
@@ -45,15 +46,29 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
           <Button variant="secondary" onClick={() => setEditing((e) => !e)} aria-expanded={editing}>
             {editing ? 'Close details' : 'Edit details'}
           </Button>
-          {(j.status === 'draft' || j.status === 'planned') && <Button variant="danger" onClick={() => setStatus('cancelled')}>Cancel job</Button>}
-          {j.status === 'cancelled' && <Button variant="secondary" onClick={() => setStatus('draft')}>Reopen job</Button>}
+          {(j.status === 'draft' || j.status === 'planned') && (
+            <Button variant="danger" onClick={() => setStatus('cancelled')}>
+              Cancel job
+            </Button>
+          )}
+          {j.status === 'cancelled' && (
+            <Button variant="secondary" onClick={() => setStatus('draft')}>
+              Reopen job
+            </Button>
+          )}
         </div>
       </header>
       {error && <Notice tone="error">{error}</Notice>}
       {editing && (
         <Card>
           <JobDetailsForm
-            initial={{ customer: j.customerName, reference: j.reference, dueDate: j.dueDate ?? '', customerEmail: j.customerEmail, notes: j.notes }}
+            initial={{
+              customer: j.customerName,
+              reference: j.reference,
+              dueDate: j.dueDate ?? '',
+              customerEmail: j.customerEmail,
+              notes: j.notes,
+            }}
             submitLabel="Save details"
             onSubmit={async (body) => {
               await updateJobRequest(jobId, body);
@@ -66,7 +81,11 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
       {j.notes && !editing && <p className="text-bark-soft">{j.notes}</p>}
       <Card>
         <h2 className="mb-3 text-xl font-bold">Cut list</h2>
-        {!listEditable && <Notice tone="info" className="mb-3">The cut list is locked while the job is {j.status}.</Notice>}
+        {!listEditable && (
+          <Notice tone="info" className="mb-3">
+            The cut list is locked while the job is {j.status}.
+          </Notice>
+        )}
         <ItemsTable jobId={jobId} items={items} editable={listEditable} />
       </Card>
       {listEditable && (

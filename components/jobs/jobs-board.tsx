@@ -23,7 +23,11 @@ export function JobsBoard() {
   return (
     <div className="space-y-6">
       <div className="flex justify-end">
-        <Button onClick={() => setCreating((c) => !c)} variant={creating ? 'secondary' : 'primary'} aria-expanded={creating}>
+        <Button
+          onClick={() => setCreating((c) => !c)}
+          variant={creating ? 'secondary' : 'primary'}
+          aria-expanded={creating}
+        >
           {creating ? 'Close' : 'New job'}
         </Button>
       </div>
@@ -44,7 +48,9 @@ export function JobsBoard() {
         <JobFilters value={filters} onChange={setFilters} />
         {jobs.error && <Notice tone="error">{jobs.error.message}</Notice>}
         {jobs.isPending && <p>Loading jobs…</p>}
-        {jobs.data && jobs.data.length === 0 && <p className="py-4 text-bark-soft">No jobs match these filters.</p>}
+        {jobs.data && jobs.data.length === 0 && (
+          <p className="py-4 text-bark-soft">No jobs match these filters.</p>
+        )}
         {jobs.data && jobs.data.length > 0 && (
           <div className="overflow-x-auto">
             <table className="w-full text-left" data-testid="jobs-table">

@@ -7,7 +7,15 @@ import { SignOutButton } from './sign-out-button';
 
 const roleNames = { owner: 'Owner', yard_hand: 'Yard hand', saw_operator: 'Saw operator' } as const;
 
-export function AppShell({ user, nav, children }: { user: CurrentUser; nav: NavItem[]; children: React.ReactNode }) {
+export function AppShell({
+  user,
+  nav,
+  children,
+}: {
+  user: CurrentUser;
+  nav: NavItem[];
+  children: React.ReactNode;
+}) {
   const items = nav.filter((item) => item.roles.includes(user.role));
   return (
     <div className="min-h-screen">

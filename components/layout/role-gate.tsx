@@ -3,6 +3,14 @@ import { can, type Action } from '@/lib/auth/permissions';
 import { AccessDenied } from './access-denied';
 
 /** Renders the page only for roles allowed the action; the data layer checks again. */
-export function RoleGate({ user, action, children }: { user: CurrentUser; action: Action; children: React.ReactNode }) {
+export function RoleGate({
+  user,
+  action,
+  children,
+}: {
+  user: CurrentUser;
+  action: Action;
+  children: React.ReactNode;
+}) {
   return can(user.role, action) ? <>{children}</> : <AccessDenied />;
 }

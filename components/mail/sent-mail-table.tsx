@@ -20,11 +20,23 @@ export function SentMailTable({ rows }: { rows: Row[] }) {
         {rows.map((r) => (
           <tr key={r.id} className="border-t border-shaving align-top">
             <td className="p-3 text-sm whitespace-nowrap">{r.createdAt.toLocaleString('en-GB')}</td>
-            <td className="p-3">{r.jobId ? <Link className="text-spruce underline" href={`/jobs/${r.jobId}`}>{r.jobReference}</Link> : '—'}</td>
+            <td className="p-3">
+              {r.jobId ? (
+                <Link className="text-spruce underline" href={`/jobs/${r.jobId}`}>
+                  {r.jobReference}
+                </Link>
+              ) : (
+                '—'
+              )}
+            </td>
             <td className="p-3">{r.to}</td>
             <td className="p-3">{r.subject}</td>
             <td className="p-3">
-              {r.status === 'sent' ? <span className="font-semibold text-spruce">sent</span> : <span className="font-semibold text-brick">failed: {r.error}</span>}
+              {r.status === 'sent' ? (
+                <span className="font-semibold text-spruce">sent</span>
+              ) : (
+                <span className="font-semibold text-brick">failed: {r.error}</span>
+              )}
             </td>
           </tr>
         ))}

@@ -30,7 +30,11 @@ export function layOutBoard(board: BoardInput): BoardPart[] {
     at += kerf;
   });
   if (board.remainderMm > 0) {
-    parts.push({ kind: board.keepRemainder ? 'kept' : 'scrap', startMm: remainderStart, lengthMm: board.remainderMm });
+    parts.push({
+      kind: board.keepRemainder ? 'kept' : 'scrap',
+      startMm: remainderStart,
+      lengthMm: board.remainderMm,
+    });
   }
   return parts;
 }

@@ -3,7 +3,13 @@
 export function BoardPatterns({ prefix }: { prefix: string }) {
   return (
     <defs>
-      <pattern id={`${prefix}-scrap`} width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+      <pattern
+        id={`${prefix}-scrap`}
+        width="8"
+        height="8"
+        patternUnits="userSpaceOnUse"
+        patternTransform="rotate(45)"
+      >
         <rect width="8" height="8" fill="#f8dcd8" />
         <line x1="0" y1="0" x2="0" y2="8" stroke="#a3271f" strokeWidth="3" />
       </pattern>

@@ -13,7 +13,11 @@ const swatch = (fill: string, label: string) => (
 /** What the diagram fills mean. */
 export function DiagramLegend() {
   return (
-    <ul className="flex flex-wrap gap-x-6 gap-y-2 text-sm" aria-label="Diagram legend" data-testid="diagram-legend">
+    <ul
+      className="flex flex-wrap gap-x-6 gap-y-2 text-sm"
+      aria-label="Diagram legend"
+      data-testid="diagram-legend"
+    >
       {swatch(PIECE_FILLS[0], 'Piece (length and label)')}
       {swatch(INK, 'Saw kerf')}
       {swatch('url(#legend-kept)', 'Kept remainder: back on the rack (dots)')}

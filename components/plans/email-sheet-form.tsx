@@ -17,7 +17,10 @@ export function EmailSheetForm({ planId, defaultTo }: { planId: number; defaultT
     setBusy(true);
     setResult(null);
     try {
-      const sent = await emailPlanRequest(planId, { to: String(data.get('to')), message: String(data.get('message') ?? '') });
+      const sent = await emailPlanRequest(planId, {
+        to: String(data.get('to')),
+        message: String(data.get('message') ?? ''),
+      });
       setResult({ tone: 'info', text: `Cut sheet and quote sent to ${sent.to}.` });
     } catch (error) {
       setResult({ tone: 'error', text: (error as Error).message });
@@ -28,10 +31,18 @@ export function EmailSheetForm({ planId, defaultTo }: { planId: number; defaultT
 
   return (
     <form onSubmit={submit} className="space-y-3" data-testid="email-sheet-form">
-      <Field label="Send to">{(p) => <input {...p} name="to" type="email" required defaultValue={defaultTo} />}</Field>
+      <Field label="Send to">
+        {(p) => <input {...p} name="to" type="email" required defaultValue={defaultTo} />}
+      </Field>
       <Field label="Message (optional)">{(p) => <textarea {...p} name="message" rows={2} />}</Field>
-      <Button type="submit" disabled={busy}>{busy ? 'Sending…' : 'E-mail cut sheet and quote'}</Button>
-      {result && <Notice tone={result.tone} data-testid="email-result">{result.text}</Notice>}
+      <Button type="submit" disabled={busy}>
+        {busy ? 'Sending…' : 'E-mail cut sheet and quote'}
+      </Button>
+      {result && (
+        <Notice tone={result.tone} data-testid="email-result">
+          {result.text}
+        </Notice>
+      )}
     </form>
   );
 }

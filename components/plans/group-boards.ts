@@ -27,9 +27,15 @@ export function countBoardsByLength(boards: PlanBoardView[]) {
   const counts = new Map<string, { source: 'stock' | 'offcut'; lengthMm: number; count: number }>();
   for (const b of boards) {
     const key = b.source === 'offcut' ? 'offcut' : `s${b.lengthMm}`;
-    const entry = counts.get(key) ?? { source: b.source, lengthMm: b.source === 'offcut' ? 0 : b.lengthMm, count: 0 };
+    const entry = counts.get(key) ?? {
+      source: b.source,
+      lengthMm: b.source === 'offcut' ? 0 : b.lengthMm,
+      count: 0,
+    };
     entry.count += 1;
     counts.set(key, entry);
   }
-  return [...counts.values()].sort((a, b) => Number(a.source === 'offcut') - Number(b.source === 'offcut') || b.lengthMm - a.lengthMm);
+  return [...counts.values()].sort(
+    (a, b) => Number(a.source === 'offcut') - Number(b.source === 'offcut') || b.lengthMm - a.lengthMm,
+  );
 }

@@ -10,7 +10,12 @@ import { describeGap } from './gap-words';
 import { countBoardsByLength } from './group-boards';
 import { formatPence } from './money';
 
-type Row = { label: string; value: (p: PlanViewData) => number; show: (p: PlanViewData) => string; better: 'low' | 'high' };
+type Row = {
+  label: string;
+  value: (p: PlanViewData) => number;
+  show: (p: PlanViewData) => string;
+  better: 'low' | 'high';
+};
 
 /** Two plans of a job side by side: settings, figures, price; the better figure of each row is marked. */
 export function PlanCompare({ ids }: { ids: [number, number] }) {
@@ -22,10 +27,25 @@ export function PlanCompare({ ids }: { ids: [number, number] }) {
   const rows: Row[] = [
     { label: 'Price', value: (p) => p.pricePence, show: (p) => formatPence(p.pricePence), better: 'low' },
     { label: 'Boards', value: (p) => p.totals.boards, show: (p) => String(p.totals.boards), better: 'low' },
-    { label: 'Offcuts used', value: (p) => p.totals.offcutsUsed, show: (p) => String(p.totals.offcutsUsed), better: 'high' },
-    { label: 'Yield', value: (p) => p.totals.yieldPercent, show: (p) => `${p.totals.yieldPercent}%`, better: 'high' },
+    {
+      label: 'Offcuts used',
+      value: (p) => p.totals.offcutsUsed,
+      show: (p) => String(p.totals.offcutsUsed),
+      better: 'high',
+    },
+    {
+      label: 'Yield',
+      value: (p) => p.totals.yieldPercent,
+      show: (p) => `${p.totals.yieldPercent}%`,
+      better: 'high',
+    },
     { label: 'Scrap', value: (p) => p.totals.scrapMm, show: (p) => fmt(p.totals.scrapMm), better: 'low' },
-    { label: 'Kept offcuts', value: (p) => p.totals.keptMm, show: (p) => `${p.totals.keptOffcuts} · ${fmt(p.totals.keptMm)}`, better: 'high' },
+    {
+      label: 'Kept offcuts',
+      value: (p) => p.totals.keptMm,
+      show: (p) => `${p.totals.keptOffcuts} · ${fmt(p.totals.keptMm)}`,
+      better: 'high',
+    },
     { label: 'Saw cuts', value: (p) => p.totals.cuts, show: (p) => String(p.totals.cuts), better: 'low' },
   ];
   const best = (row: Row, p: PlanViewData) => {
@@ -42,9 +62,13 @@ export function PlanCompare({ ids }: { ids: [number, number] }) {
             <th className="p-2" />
             {plans.map((p) => (
               <th key={p.id} className="p-2">
-                <Link className="text-spruce underline" href={`/plans/${p.id}`}>Plan {p.id}</Link>
+                <Link className="text-spruce underline" href={`/plans/${p.id}`}>
+                  Plan {p.id}
+                </Link>
                 <span className="block text-sm font-normal text-bark-soft">
-                  {p.status} · kerf {p.settings.kerfMm}, trim {p.settings.trimMm}, keep from {p.settings.minOffcutMm}{p.settings.useOffcuts ? '' : ', no rack'}
+                  {p.status} · kerf {p.settings.kerfMm}, trim {p.settings.trimMm}, keep from{' '}
+                  {p.settings.minOffcutMm}
+                  {p.settings.useOffcuts ? '' : ', no rack'}
                 </span>
               </th>
             ))}
@@ -67,7 +91,14 @@ export function PlanCompare({ ids }: { ids: [number, number] }) {
               <td key={p.id} className="p-2 text-sm">
                 {p.sections.map((s) => (
                   <p key={s.sectionId}>
-                    {s.sectionName}: {countBoardsByLength(p.boards.filter((x) => x.sectionId === s.sectionId)).map((c) => (c.source === 'offcut' ? `${c.count} offcut${c.count === 1 ? '' : 's'}` : `${c.count} × ${fmt(c.lengthMm)}`)).join(', ')}
+                    {s.sectionName}:{' '}
+                    {countBoardsByLength(p.boards.filter((x) => x.sectionId === s.sectionId))
+                      .map((c) =>
+                        c.source === 'offcut'
+                          ? `${c.count} offcut${c.count === 1 ? '' : 's'}`
+                          : `${c.count} × ${fmt(c.lengthMm)}`,
+                      )
+                      .join(', ')}
                   </p>
                 ))}
               </td>
@@ -76,7 +107,9 @@ export function PlanCompare({ ids }: { ids: [number, number] }) {
           <tr className="align-top">
             <th className="p-2 font-semibold">Lower bound</th>
             {plans.map((p) => (
-              <td key={p.id} className="p-2 text-sm">{describeGap(p.totals)}</td>
+              <td key={p.id} className="p-2 text-sm">
+                {describeGap(p.totals)}
+              </td>
             ))}
           </tr>
         </tbody>

@@ -10,34 +10,54 @@ import { formatPence, formatPounds } from './money';
 export function PlanFigures({ plan }: { plan: PlanViewData }) {
   const fmt = useFormatLength();
   const t = plan.totals;
-  const waste = t.materialMm > 0 ? Math.round((1000 * (t.scrapMm + t.kerfMm)) / (t.materialMm - t.keptMm || 1)) / 10 : 0;
+  const waste =
+    t.materialMm > 0 ? Math.round((1000 * (t.scrapMm + t.kerfMm)) / (t.materialMm - t.keptMm || 1)) / 10 : 0;
   return (
     <div className="grid gap-6 lg:grid-cols-2">
       <div data-testid="plan-totals">
         <h2 className="mb-2 text-xl font-bold">Totals</h2>
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1">
           <dt>Boards</dt>
-          <dd className="text-right font-semibold tabular-nums">{t.boards} ({t.stockBoards} new, {t.offcutsUsed} offcut{t.offcutsUsed === 1 ? '' : 's'})</dd>
+          <dd className="text-right font-semibold tabular-nums">
+            {t.boards} ({t.stockBoards} new, {t.offcutsUsed} offcut{t.offcutsUsed === 1 ? '' : 's'})
+          </dd>
           <dt>Yield</dt>
           <dd className="text-right font-semibold tabular-nums">{t.yieldPercent}%</dd>
           <dt>Waste (scrap and kerf)</dt>
-          <dd className="text-right tabular-nums">{waste}% · {fmt(t.scrapMm + t.kerfMm)}</dd>
+          <dd className="text-right tabular-nums">
+            {waste}% · {fmt(t.scrapMm + t.kerfMm)}
+          </dd>
           <dt>Kept offcuts</dt>
-          <dd className="text-right tabular-nums">{t.keptOffcuts} · {fmt(t.keptMm)}</dd>
+          <dd className="text-right tabular-nums">
+            {t.keptOffcuts} · {fmt(t.keptMm)}
+          </dd>
           <dt>Saw cuts</dt>
           <dd className="text-right tabular-nums">{t.cuts}</dd>
           <dt>Longest-first would use</dt>
-          <dd className="text-right tabular-nums">{t.baseline.boards} boards · {formatPence(t.baseline.stockCostPence)}</dd>
+          <dd className="text-right tabular-nums">
+            {t.baseline.boards} boards · {formatPence(t.baseline.stockCostPence)}
+          </dd>
         </dl>
-        <p className="mt-3 rounded-lg bg-spruce-light p-3 text-spruce-dark" data-testid="plan-gap">{describeGap(t)}</p>
-        {t.unplacedPieces > 0 && <p className="mt-2 font-semibold text-brick">{t.unplacedPieces} piece length{t.unplacedPieces === 1 ? '' : 's'} could not be placed from the stock allowed.</p>}
+        <p className="mt-3 rounded-lg bg-spruce-light p-3 text-spruce-dark" data-testid="plan-gap">
+          {describeGap(t)}
+        </p>
+        {t.unplacedPieces > 0 && (
+          <p className="mt-2 font-semibold text-brick">
+            {t.unplacedPieces} piece length{t.unplacedPieces === 1 ? '' : 's'} could not be placed from the
+            stock allowed.
+          </p>
+        )}
         <h3 className="mt-4 font-semibold">Boards per length</h3>
         <ul className="text-sm">
           {plan.sections.map((s) => (
             <li key={s.sectionId}>
               <span className="font-semibold">{s.sectionName}:</span>{' '}
               {countBoardsByLength(plan.boards.filter((b) => b.sectionId === s.sectionId))
-                .map((c) => (c.source === 'offcut' ? `${c.count} offcut${c.count === 1 ? '' : 's'}` : `${c.count} × ${fmt(c.lengthMm)}`))
+                .map((c) =>
+                  c.source === 'offcut'
+                    ? `${c.count} offcut${c.count === 1 ? '' : 's'}`
+                    : `${c.count} × ${fmt(c.lengthMm)}`,
+                )
                 .join(', ')}
             </li>
           ))}
@@ -51,15 +71,31 @@ export function PlanFigures({ plan }: { plan: PlanViewData }) {
               {plan.price.lines.map((line, i) => (
                 <tr key={i} className="border-b border-shaving">
                   <td className="py-1">{line.description}</td>
-                  <td className="py-1 text-right tabular-nums">{line.quantity} × {formatPounds(line.unitPrice)}</td>
+                  <td className="py-1 text-right tabular-nums">
+                    {line.quantity} × {formatPounds(line.unitPrice)}
+                  </td>
                   <td className="py-1 text-right tabular-nums">{formatPounds(line.amount)}</td>
                 </tr>
               ))}
             </tbody>
             <tfoot>
-              <tr><td className="pt-2">Timber</td><td /><td className="pt-2 text-right tabular-nums">{formatPounds(plan.price.materials)}</td></tr>
-              <tr><td>Cutting</td><td /><td className="text-right tabular-nums">{formatPounds(plan.price.cutting)}</td></tr>
-              <tr className="text-lg font-bold"><td>Total</td><td /><td className="text-right tabular-nums" data-testid="plan-total-price">{formatPounds(plan.price.total)}</td></tr>
+              <tr>
+                <td className="pt-2">Timber</td>
+                <td />
+                <td className="pt-2 text-right tabular-nums">{formatPounds(plan.price.materials)}</td>
+              </tr>
+              <tr>
+                <td>Cutting</td>
+                <td />
+                <td className="text-right tabular-nums">{formatPounds(plan.price.cutting)}</td>
+              </tr>
+              <tr className="text-lg font-bold">
+                <td>Total</td>
+                <td />
+                <td className="text-right tabular-nums" data-testid="plan-total-price">
+                  {formatPounds(plan.price.total)}
+                </td>
+              </tr>
             </tfoot>
           </table>
         ) : (

@@ -6,28 +6,55 @@ import { BoardDiagram } from './board-diagram';
 import { groupIdenticalBoards } from './group-boards';
 
 /** One section's boards in saw order, identical boards drawn once with their count. */
-export function PlanSectionBoards({ name, boards, kerfMm, offcutTags }: { name: string; boards: PlanBoardView[]; kerfMm: number; offcutTags: Record<number, string> }) {
+export function PlanSectionBoards({
+  name,
+  boards,
+  kerfMm,
+  offcutTags,
+}: {
+  name: string;
+  boards: PlanBoardView[];
+  kerfMm: number;
+  offcutTags: Record<number, string>;
+}) {
   const fmt = useFormatLength();
   const { format } = useDisplayUnit();
   const groups = groupIdenticalBoards(boards);
   return (
     <section className="break-inside-avoid-page space-y-3" data-testid="plan-section">
       <h3 className="text-lg font-bold">
-        {name} <span className="font-normal text-bark-soft">· {boards.length} board{boards.length === 1 ? '' : 's'}</span>
+        {name}{' '}
+        <span className="font-normal text-bark-soft">
+          · {boards.length} board{boards.length === 1 ? '' : 's'}
+        </span>
       </h3>
       <ol className="space-y-4">
         {groups.map(({ key, boards: same, first }) => {
-          const source = first.source === 'offcut' ? `Offcut ${first.offcutId ? (offcutTags[first.offcutId] ?? `#${first.offcutId}`) : ''}` : 'New stock';
+          const source =
+            first.source === 'offcut'
+              ? `Offcut ${first.offcutId ? (offcutTags[first.offcutId] ?? `#${first.offcutId}`) : ''}`
+              : 'New stock';
           const boardNos = same.map((b) => b.boardNo).join(', ');
           const heading = `${same.length} × ${source} ${fmt(first.lengthMm)}`;
           return (
             <li key={key} className="break-inside-avoid">
               <p className="mb-1 flex flex-wrap justify-between gap-2 text-sm">
-                <span className="font-semibold" data-testid="board-group-heading">{heading}</span>
-                <span className="text-bark-soft">board{same.length > 1 ? 's' : ''} {boardNos}</span>
+                <span className="font-semibold" data-testid="board-group-heading">
+                  {heading}
+                </span>
+                <span className="text-bark-soft">
+                  board{same.length > 1 ? 's' : ''} {boardNos}
+                </span>
               </p>
               <BoardDiagram
-                board={{ lengthMm: first.lengthMm, trimMm: first.trimMm, kerfMm, pieces: first.pieces, remainderMm: first.remainderMm, keepRemainder: first.keepRemainder }}
+                board={{
+                  lengthMm: first.lengthMm,
+                  trimMm: first.trimMm,
+                  kerfMm,
+                  pieces: first.pieces,
+                  remainderMm: first.remainderMm,
+                  keepRemainder: first.keepRemainder,
+                }}
                 format={format}
                 title={`${heading}: ${first.pieces.map((p) => `${p.label || 'piece'} ${fmt(p.lengthMm)}`).join(', ')}; ${first.keepRemainder ? 'kept' : 'scrap'} ${fmt(first.remainderMm)}`}
               />

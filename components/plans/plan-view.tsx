@@ -16,7 +16,17 @@ import { ReleaseControls } from './release-controls';
 import { ReplanForm } from './replan-form';
 
 /** The plan page: actions, figures and price, then every section's boards drawn to scale. */
-export function PlanView({ planId, context, previousPlanId, canAct }: { planId: number; context: PlanContext; previousPlanId?: number; canAct: boolean }) {
+export function PlanView({
+  planId,
+  context,
+  previousPlanId,
+  canAct,
+}: {
+  planId: number;
+  context: PlanContext;
+  previousPlanId?: number;
+  canAct: boolean;
+}) {
   const plan = useQuery(planQuery(planId));
   if (plan.isPending) return <p>Loading the plan…</p>;
   if (plan.error) return <Notice tone="error">{plan.error.message}</Notice>;
@@ -33,7 +43,8 @@ export function PlanView({ planId, context, previousPlanId, canAct }: { planId: 
           </p>
           <h1 className="text-3xl font-bold tracking-tight">Plan {p.id}</h1>
           <p className="text-bark-soft">
-            {p.status} · kerf {p.settings.kerfMm} mm, end trim {p.settings.trimMm} mm, offcuts kept from {p.settings.minOffcutMm} mm{p.settings.useOffcuts ? '' : ', rack not used'}
+            {p.status} · kerf {p.settings.kerfMm} mm, end trim {p.settings.trimMm} mm, offcuts kept from{' '}
+            {p.settings.minOffcutMm} mm{p.settings.useOffcuts ? '' : ', rack not used'}
           </p>
           {(p.status === 'released' || p.status === 'done') && (
             <p className="mt-1">
@@ -43,10 +54,19 @@ export function PlanView({ planId, context, previousPlanId, canAct }: { planId: 
         </div>
         <div className="no-print flex flex-wrap items-center gap-3">
           <UnitToggle />
-          <Link className="font-semibold text-spruce underline" href={`/plans/${p.id}/sheet`}>Printable cut sheet</Link>
-          <a className="font-semibold text-spruce underline" href={`/api/plans/${p.id}/cut-sheet`}>Download PDF</a>
+          <Link className="font-semibold text-spruce underline" href={`/plans/${p.id}/sheet`}>
+            Printable cut sheet
+          </Link>
+          <a className="font-semibold text-spruce underline" href={`/api/plans/${p.id}/cut-sheet`}>
+            Download PDF
+          </a>
           {previousPlanId && (
-            <Link className="font-semibold text-spruce underline" href={`/plans/compare?a=${previousPlanId}&b=${p.id}`}>Compare with plan {previousPlanId}</Link>
+            <Link
+              className="font-semibold text-spruce underline"
+              href={`/plans/compare?a=${previousPlanId}&b=${p.id}`}
+            >
+              Compare with plan {previousPlanId}
+            </Link>
           )}
         </div>
       </header>
@@ -60,7 +80,13 @@ export function PlanView({ planId, context, previousPlanId, canAct }: { planId: 
           <DiagramLegend />
         </div>
         {p.sections.map((s) => (
-          <PlanSectionBoards key={s.sectionId} name={s.sectionName} kerfMm={p.settings.kerfMm} offcutTags={context.offcutTags} boards={p.boards.filter((b) => b.sectionId === s.sectionId)} />
+          <PlanSectionBoards
+            key={s.sectionId}
+            name={s.sectionName}
+            kerfMm={p.settings.kerfMm}
+            offcutTags={context.offcutTags}
+            boards={p.boards.filter((b) => b.sectionId === s.sectionId)}
+          />
         ))}
       </Card>
       {canAct && (

@@ -7,7 +7,12 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { StockShortfalls } from './stock-shortfalls';
-import { createPlanRequest, releasePlanRequest, unreleasePlanRequest, type PlanViewData } from '@/lib/queries/plans';
+import {
+  createPlanRequest,
+  releasePlanRequest,
+  unreleasePlanRequest,
+  type PlanViewData,
+} from '@/lib/queries/plans';
 
 type Taken = { id: number; tag: string; status: string };
 
@@ -25,11 +30,15 @@ export function ReleaseControls({ plan }: { plan: PlanViewData }) {
     setTaken([]);
     try {
       await request();
-      await Promise.all([queryClient.invalidateQueries({ queryKey: ['plan', plan.id] }), queryClient.invalidateQueries({ queryKey: ['job', plan.jobId] })]);
+      await Promise.all([
+        queryClient.invalidateQueries({ queryKey: ['plan', plan.id] }),
+        queryClient.invalidateQueries({ queryKey: ['job', plan.jobId] }),
+      ]);
       router.refresh();
     } catch (e) {
       setError((e as Error).message);
-      if (e instanceof ApiError && e.status === 409) setTaken(((e.body as { details?: { offcuts?: Taken[] } })?.details?.offcuts) ?? []);
+      if (e instanceof ApiError && e.status === 409)
+        setTaken((e.body as { details?: { offcuts?: Taken[] } })?.details?.offcuts ?? []);
     } finally {
       setBusy(false);
     }
@@ -39,7 +48,14 @@ export function ReleaseControls({ plan }: { plan: PlanViewData }) {
     setBusy(true);
     try {
       const { stockLengthIds, kerfMm, trimMm, minOffcutMm, useOffcuts, timeLimitMs } = plan.settings;
-      const next = await createPlanRequest(plan.jobId, { stockLengthIds, kerfMm, trimMm, minOffcutMm, useOffcuts, timeLimitMs });
+      const next = await createPlanRequest(plan.jobId, {
+        stockLengthIds,
+        kerfMm,
+        trimMm,
+        minOffcutMm,
+        useOffcuts,
+        timeLimitMs,
+      });
       router.push(`/plans/${next.id}`);
     } catch (e) {
       setError((e as Error).message);
@@ -57,19 +73,37 @@ export function ReleaseControls({ plan }: { plan: PlanViewData }) {
           </Button>
         )}
         {plan.status === 'released' && (
-          <Button variant="secondary" disabled={busy} onClick={() => act(() => unreleasePlanRequest(plan.id))}>
+          <Button
+            variant="secondary"
+            disabled={busy}
+            onClick={() => act(() => unreleasePlanRequest(plan.id))}
+          >
             Take back from the saw
           </Button>
         )}
       </div>
-      {plan.status === 'released' && <Notice>Released to the saw{plan.releasedAt ? ` on ${new Date(plan.releasedAt).toLocaleString('en-GB')}` : ''}. Its offcuts are reserved.</Notice>}
-      {plan.status === 'superseded' && <Notice tone="warning">This plan was replaced by another plan of the job, or its cut list changed. Plan the job again to release it.</Notice>}
+      {plan.status === 'released' && (
+        <Notice>
+          Released to the saw
+          {plan.releasedAt ? ` on ${new Date(plan.releasedAt).toLocaleString('en-GB')}` : ''}. Its offcuts are
+          reserved.
+        </Notice>
+      )}
+      {plan.status === 'superseded' && (
+        <Notice tone="warning">
+          This plan was replaced by another plan of the job, or its cut list changed. Plan the job again to
+          release it.
+        </Notice>
+      )}
       {error && (
         <Notice tone="error" data-testid="release-error">
           <p>{error}</p>
           {taken.length > 0 && (
             <>
-              <p className="mt-1">Taken from the rack since this plan was made: {taken.map((o) => `${o.tag} (${o.status})`).join(', ')}.</p>
+              <p className="mt-1">
+                Taken from the rack since this plan was made:{' '}
+                {taken.map((o) => `${o.tag} (${o.status})`).join(', ')}.
+              </p>
               <Button className="mt-2" variant="secondary" disabled={busy} onClick={replan}>
                 Plan again with what is on the rack now
               </Button>

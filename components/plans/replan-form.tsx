@@ -39,8 +39,14 @@ export function ReplanForm({ plan }: { plan: PlanViewData }) {
       });
       router.push(`/plans/${next.id}?previous=${plan.id}`);
     } catch (error) {
-      const issues = error instanceof ApiError ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
-      setErrors({ form: (error as Error).message, ...Object.fromEntries(issues.map((i) => [i.path, i.message])) });
+      const issues =
+        error instanceof ApiError
+          ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
+          : [];
+      setErrors({
+        form: (error as Error).message,
+        ...Object.fromEntries(issues.map((i) => [i.path, i.message])),
+      });
       setBusy(false);
     }
   }
@@ -59,7 +65,13 @@ export function ReplanForm({ plan }: { plan: PlanViewData }) {
         {number('seconds', 'Search time (s)', plan.settings.timeLimitMs / 1000, 0.5)}
       </div>
       <label className="flex items-center gap-2">
-        <input type="checkbox" name="useOffcuts" defaultChecked={plan.settings.useOffcuts} className="h-5 w-5" /> Use offcuts from the rack
+        <input
+          type="checkbox"
+          name="useOffcuts"
+          defaultChecked={plan.settings.useOffcuts}
+          className="h-5 w-5"
+        />{' '}
+        Use offcuts from the rack
       </label>
       {planSections.map((s) => (
         <fieldset key={s.id}>
@@ -67,7 +79,13 @@ export function ReplanForm({ plan }: { plan: PlanViewData }) {
           <div className="mt-1 flex flex-wrap gap-3">
             {s.stockLengths.map((l) => (
               <label key={l.id} className="flex items-center gap-1 text-sm">
-                <input type="checkbox" name="stockLengthId" value={l.id} defaultChecked={!allowed || allowed.includes(l.id)} className="h-5 w-5" />
+                <input
+                  type="checkbox"
+                  name="stockLengthId"
+                  value={l.id}
+                  defaultChecked={!allowed || allowed.includes(l.id)}
+                  className="h-5 w-5"
+                />
                 {fmt(l.lengthMm)}
               </label>
             ))}

@@ -5,7 +5,13 @@ import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
 import { fetchJson } from '@/lib/queries/fetch-json';
 
-type Shortfall = { stockLengthId: number; sectionName: string; lengthMm: number; needed: number; onHand: number };
+type Shortfall = {
+  stockLengthId: number;
+  sectionName: string;
+  lengthMm: number;
+  needed: number;
+  onHand: number;
+};
 
 /** Before release: stock lengths the plan needs more of than the yard holds. Silent when nothing is short. */
 export function StockShortfalls({ planId }: { planId: number }) {

@@ -25,10 +25,19 @@ export function ChartPanel<T>({ id, title, lead, rows, columns, empty, emptyText
           <h3 className="text-lg font-bold">{title}</h3>
           {lead && <p className="text-sm text-bark-soft">{lead}</p>}
         </div>
-        {!empty && <Button variant="secondary" onClick={() => downloadCsv(`${id}.csv`, rowsToCsv(rows, columns))}>Download CSV</Button>}
+        {!empty && (
+          <Button variant="secondary" onClick={() => downloadCsv(`${id}.csv`, rowsToCsv(rows, columns))}>
+            Download CSV
+          </Button>
+        )}
       </div>
       {empty ? (
-        <p className="rounded-lg bg-shaving p-6 text-center text-bark-soft" data-testid={`report-${id}-empty`}>{emptyText}</p>
+        <p
+          className="rounded-lg bg-shaving p-6 text-center text-bark-soft"
+          data-testid={`report-${id}-empty`}
+        >
+          {emptyText}
+        </p>
       ) : (
         <>
           <div className="h-64 w-full">{children}</div>
@@ -36,11 +45,23 @@ export function ChartPanel<T>({ id, title, lead, rows, columns, empty, emptyText
             <summary className="cursor-pointer text-sm font-semibold text-spruce">Show the figures</summary>
             <div className="mt-2 max-h-80 overflow-auto">
               <table className="w-full text-left text-sm">
-                <thead className="sticky top-0 bg-shaving"><tr>{columns.map((c) => <th key={c.key} className="p-1.5">{c.label}</th>)}</tr></thead>
+                <thead className="sticky top-0 bg-shaving">
+                  <tr>
+                    {columns.map((c) => (
+                      <th key={c.key} className="p-1.5">
+                        {c.label}
+                      </th>
+                    ))}
+                  </tr>
+                </thead>
                 <tbody>
                   {rows.map((r, i) => (
                     <tr key={i} className="border-t border-shaving">
-                      {columns.map((c) => <td key={c.key} className="p-1.5">{c.format ? c.format(r[c.key], r) : String(r[c.key])}</td>)}
+                      {columns.map((c) => (
+                        <td key={c.key} className="p-1.5">
+                          {c.format ? c.format(r[c.key], r) : String(r[c.key])}
+                        </td>
+                      ))}
                     </tr>
                   ))}
                 </tbody>

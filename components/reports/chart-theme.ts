@@ -8,6 +8,11 @@ export const CHART = {
   grain: '#d9c6a5',
 };
 
-export const shortWeek = (week: string) => new Date(`${week}T00:00:00Z`).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', timeZone: 'UTC' });
+export const shortWeek = (week: string) =>
+  new Date(`${week}T00:00:00Z`).toLocaleDateString('en-GB', {
+    day: 'numeric',
+    month: 'short',
+    timeZone: 'UTC',
+  });
 export const metres = (mm: number) => Math.round(mm / 100) / 10;
 export const pounds = (pence: number) => Math.round(pence) / 100;

@@ -4,12 +4,36 @@ import type { OffcutReport } from '@/lib/reports/offcut-report';
 import type { SavingsReport } from '@/lib/reports/savings-report';
 import type { WasteReport } from '@/lib/reports/waste-report';
 
-export function HeadlineFigures({ waste, offcuts, savings }: { waste: WasteReport; offcuts: OffcutReport; savings: SavingsReport }) {
+export function HeadlineFigures({
+  waste,
+  offcuts,
+  savings,
+}: {
+  waste: WasteReport;
+  offcuts: OffcutReport;
+  savings: SavingsReport;
+}) {
   const figures = [
-    { label: 'Yield', value: waste.totals.boards ? `${waste.totals.yieldPercent}%` : '—', note: `${waste.totals.boards} boards cut` },
-    { label: 'Waste', value: formatMetres(waste.totals.wasteMm), note: `worth ${formatPence(waste.totals.wastePence)}` },
-    { label: 'Saved by planning', value: formatPence(savings.totals.savedPence), note: `new stock over ${savings.totals.jobs} jobs against a longest-first plan` },
-    { label: 'On the rack', value: formatPence(offcuts.totals.rackValuePence), note: `${offcuts.totals.rackCount} offcuts, ${formatMetres(offcuts.totals.rackMm)}` },
+    {
+      label: 'Yield',
+      value: waste.totals.boards ? `${waste.totals.yieldPercent}%` : '—',
+      note: `${waste.totals.boards} boards cut`,
+    },
+    {
+      label: 'Waste',
+      value: formatMetres(waste.totals.wasteMm),
+      note: `worth ${formatPence(waste.totals.wastePence)}`,
+    },
+    {
+      label: 'Saved by planning',
+      value: formatPence(savings.totals.savedPence),
+      note: `new stock over ${savings.totals.jobs} jobs against a longest-first plan`,
+    },
+    {
+      label: 'On the rack',
+      value: formatPence(offcuts.totals.rackValuePence),
+      note: `${offcuts.totals.rackCount} offcuts, ${formatMetres(offcuts.totals.rackMm)}`,
+    },
   ];
   return (
     <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4" data-testid="report-headlines">

@@ -15,9 +15,22 @@ export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport;
   const rackEmpty = report.totals.rackCount === 0;
   return (
     <div className="grid gap-4 xl:grid-cols-2">
-      <ChartPanel id="offcuts-weekly" title="Offcuts made and used each week" lead={`${report.totals.made} made, ${report.totals.used} used, ${report.totals.scrapped} scrapped in this range.`}
-        rows={report.weekly} empty={report.totals.made + report.totals.used + report.totals.scrapped === 0} emptyText="No offcuts were made, used or scrapped in this range."
-        columns={[{ key: 'week', label: 'Week from' }, { key: 'madeCount', label: 'Made' }, { key: 'madeMm', label: 'Made mm', format: mm }, { key: 'usedCount', label: 'Used' }, { key: 'usedMm', label: 'Used mm', format: mm }, { key: 'scrappedCount', label: 'Scrapped' }]}>
+      <ChartPanel
+        id="offcuts-weekly"
+        title="Offcuts made and used each week"
+        lead={`${report.totals.made} made, ${report.totals.used} used, ${report.totals.scrapped} scrapped in this range.`}
+        rows={report.weekly}
+        empty={report.totals.made + report.totals.used + report.totals.scrapped === 0}
+        emptyText="No offcuts were made, used or scrapped in this range."
+        columns={[
+          { key: 'week', label: 'Week from' },
+          { key: 'madeCount', label: 'Made' },
+          { key: 'madeMm', label: 'Made mm', format: mm },
+          { key: 'usedCount', label: 'Used' },
+          { key: 'usedMm', label: 'Used mm', format: mm },
+          { key: 'scrappedCount', label: 'Scrapped' },
+        ]}
+      >
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={weekly}>
             <CartesianGrid stroke={CHART.grain} strokeDasharray="3 3" />
@@ -31,9 +44,20 @@ export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport;
           </BarChart>
         </ResponsiveContainer>
       </ChartPanel>
-      <ChartPanel id="rack-by-section" title="On the rack now, by section" lead={`${report.totals.rackCount} offcuts, ${formatMetres(report.totals.rackMm)}, worth ${formatPence(report.totals.rackValuePence)} at stock prices.`}
-        rows={report.rackBySection} empty={rackEmpty} emptyText="The rack is empty."
-        columns={[{ key: 'sectionName', label: 'Section' }, { key: 'count', label: 'Offcuts' }, { key: 'lengthMm', label: 'Length', format: mm }, { key: 'valuePence', label: 'Value', format: money }]}>
+      <ChartPanel
+        id="rack-by-section"
+        title="On the rack now, by section"
+        lead={`${report.totals.rackCount} offcuts, ${formatMetres(report.totals.rackMm)}, worth ${formatPence(report.totals.rackValuePence)} at stock prices.`}
+        rows={report.rackBySection}
+        empty={rackEmpty}
+        emptyText="The rack is empty."
+        columns={[
+          { key: 'sectionName', label: 'Section' },
+          { key: 'count', label: 'Offcuts' },
+          { key: 'lengthMm', label: 'Length', format: mm },
+          { key: 'valuePence', label: 'Value', format: money },
+        ]}
+      >
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={bySection} layout="vertical" margin={{ left: 40 }}>
             <CartesianGrid stroke={CHART.grain} strokeDasharray="3 3" />
@@ -44,8 +68,18 @@ export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport;
           </BarChart>
         </ResponsiveContainer>
       </ChartPanel>
-      <ChartPanel id="rack-age" title="How long offcuts have sat on the rack" rows={report.ageHistogram} empty={rackEmpty} emptyText="The rack is empty."
-        columns={[{ key: 'label', label: 'Age' }, { key: 'count', label: 'Offcuts' }, { key: 'lengthMm', label: 'Length', format: mm }]}>
+      <ChartPanel
+        id="rack-age"
+        title="How long offcuts have sat on the rack"
+        rows={report.ageHistogram}
+        empty={rackEmpty}
+        emptyText="The rack is empty."
+        columns={[
+          { key: 'label', label: 'Age' },
+          { key: 'count', label: 'Offcuts' },
+          { key: 'lengthMm', label: 'Length', format: mm },
+        ]}
+      >
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={report.ageHistogram}>
             <CartesianGrid stroke={CHART.grain} strokeDasharray="3 3" />
@@ -63,21 +97,42 @@ export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport;
 
 function OldestOffcuts({ report, clearAfterDays }: { report: OffcutReport; clearAfterDays: number }) {
   return (
-    <div className="rounded-xl border-2 border-shaving bg-white p-5 shadow-sm" data-testid="report-oldest-offcuts">
+    <div
+      className="rounded-xl border-2 border-shaving bg-white p-5 shadow-sm"
+      data-testid="report-oldest-offcuts"
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <h3 className="text-lg font-bold">Oldest offcuts</h3>
-        <Link className="font-semibold text-spruce underline" href={`/rack?minAgeDays=${clearAfterDays}`}>Clear old offcuts on the rack</Link>
+        <Link className="font-semibold text-spruce underline" href={`/rack?minAgeDays=${clearAfterDays}`}>
+          Clear old offcuts on the rack
+        </Link>
       </div>
       {report.oldest.length === 0 ? (
         <p className="mt-3 rounded-lg bg-shaving p-6 text-center text-bark-soft">The rack is empty.</p>
       ) : (
         <table className="mt-3 w-full text-left text-sm">
-          <thead className="bg-shaving"><tr><th className="p-1.5">Tag</th><th className="p-1.5">Section</th><th className="p-1.5">Length</th><th className="p-1.5">Where</th><th className="p-1.5">Age</th></tr></thead>
+          <thead className="bg-shaving">
+            <tr>
+              <th className="p-1.5">Tag</th>
+              <th className="p-1.5">Section</th>
+              <th className="p-1.5">Length</th>
+              <th className="p-1.5">Where</th>
+              <th className="p-1.5">Age</th>
+            </tr>
+          </thead>
           <tbody>
             {report.oldest.map((o) => (
               <tr key={o.id} className="border-t border-shaving">
-                <td className="p-1.5 font-mono">{o.tag}</td><td className="p-1.5">{o.sectionName}</td><td className="p-1.5">{o.lengthMm} mm</td><td className="p-1.5">{o.location}</td>
-                <td className="p-1.5">{o.ageDays} days{o.clearSuggested && <span className="ml-1 rounded bg-amber-light px-1 text-xs font-semibold">clear?</span>}</td>
+                <td className="p-1.5 font-mono">{o.tag}</td>
+                <td className="p-1.5">{o.sectionName}</td>
+                <td className="p-1.5">{o.lengthMm} mm</td>
+                <td className="p-1.5">{o.location}</td>
+                <td className="p-1.5">
+                  {o.ageDays} days
+                  {o.clearSuggested && (
+                    <span className="ml-1 rounded bg-amber-light px-1 text-xs font-semibold">clear?</span>
+                  )}
+                </td>
               </tr>
             ))}
           </tbody>

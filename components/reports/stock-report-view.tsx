@@ -16,25 +16,44 @@ export function StockReportView({ report }: { report: StockReport }) {
   return (
     <div className="space-y-4">
       {report.short.length > 0 ? (
-        <div className="rounded-lg border-l-4 border-amber bg-amber-light px-4 py-3" data-testid="short-lengths">
-          <p className="font-semibold">Running short (under three weeks of cover at this range’s rate, or none left):</p>
+        <div
+          className="rounded-lg border-l-4 border-amber bg-amber-light px-4 py-3"
+          data-testid="short-lengths"
+        >
+          <p className="font-semibold">
+            Running short (under three weeks of cover at this range’s rate, or none left):
+          </p>
           <ul className="mt-1 list-disc pl-5 text-sm">
             {report.short.map((l) => (
-              <li key={l.stockLengthId}>{l.sectionName}, {l.lengthMm} mm: {l.onHand} on hand, {l.usedPerWeek} a week{l.weeksOfCover !== null ? ` — about ${l.weeksOfCover} weeks left` : ''}</li>
+              <li key={l.stockLengthId}>
+                {l.sectionName}, {l.lengthMm} mm: {l.onHand} on hand, {l.usedPerWeek} a week
+                {l.weeksOfCover !== null ? ` — about ${l.weeksOfCover} weeks left` : ''}
+              </li>
             ))}
           </ul>
         </div>
       ) : (
-        <p className="rounded-lg bg-spruce-light px-4 py-3">No counted length runs short at this range’s rate of use.</p>
+        <p className="rounded-lg bg-spruce-light px-4 py-3">
+          No counted length runs short at this range’s rate of use.
+        </p>
       )}
-      <ChartPanel id="stock-on-hand" title="On hand against use" lead={`Boards on hand now against boards cut in the ${report.weeks} weeks of the range, for the ${CHART_LENGTHS} busiest counted lengths; the figures list every length.`}
-        rows={report.lines} empty={counted.length === 0} emptyText="No stock length is counted yet: take stock to start counting."
+      <ChartPanel
+        id="stock-on-hand"
+        title="On hand against use"
+        lead={`Boards on hand now against boards cut in the ${report.weeks} weeks of the range, for the ${CHART_LENGTHS} busiest counted lengths; the figures list every length.`}
+        rows={report.lines}
+        empty={counted.length === 0}
+        emptyText="No stock length is counted yet: take stock to start counting."
         columns={[
-          { key: 'sectionName', label: 'Section' }, { key: 'lengthMm', label: 'Length mm' },
-          { key: 'onHand', label: 'On hand', format: (v) => (v === null ? 'unlimited' : String(v)) }, { key: 'used', label: 'Cut in range' },
-          { key: 'usedPerWeek', label: 'Per week' }, { key: 'weeksOfCover', label: 'Weeks of cover', format: (v) => (v === null ? '—' : String(v)) },
+          { key: 'sectionName', label: 'Section' },
+          { key: 'lengthMm', label: 'Length mm' },
+          { key: 'onHand', label: 'On hand', format: (v) => (v === null ? 'unlimited' : String(v)) },
+          { key: 'used', label: 'Cut in range' },
+          { key: 'usedPerWeek', label: 'Per week' },
+          { key: 'weeksOfCover', label: 'Weeks of cover', format: (v) => (v === null ? '—' : String(v)) },
           { key: 'short', label: 'Short', format: (v) => (v ? 'yes' : '') },
-        ]}>
+        ]}
+      >
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={data}>
             <CartesianGrid stroke={CHART.grain} strokeDasharray="3 3" />

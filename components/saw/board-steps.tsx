@@ -11,7 +11,8 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
     <p className="text-2xl font-bold text-bark" data-testid="fetch-line">
       {board.source === 'offcut' && board.offcut ? (
         <>
-          Fetch offcut <span className="rounded bg-amber px-2 text-white">{board.offcut.tag}</span> from {board.offcut.location || 'the rack'}
+          Fetch offcut <span className="rounded bg-amber px-2 text-white">{board.offcut.tag}</span> from{' '}
+          {board.offcut.location || 'the rack'}
           <span className="block text-lg font-semibold text-bark-soft">
             {board.section.name} · {len(board.lengthMm)} · no trim
           </span>
@@ -54,7 +55,9 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
           >
             <span className="text-lg font-bold">{i + 1}</span>
             <span>
-              <span className="block text-sm font-semibold uppercase tracking-wide text-bark-soft">Mark at</span>
+              <span className="block text-sm font-semibold uppercase tracking-wide text-bark-soft">
+                Mark at
+              </span>
               <span className="font-mono text-4xl font-bold text-bark">{len(p.markMm)}</span>
             </span>
             <span className="text-right">
@@ -79,7 +82,8 @@ export function LeftOver({ board, unit }: { board: SawBoard; unit: Unit }) {
     </p>
   ) : (
     <p className="rounded-lg bg-brick px-4 py-3 text-xl font-bold text-white" data-testid="left-over">
-      Scrap {len}{board.section.treated ? ' — treated: never burn it' : ''}.
+      Scrap {len}
+      {board.section.treated ? ' — treated: never burn it' : ''}.
     </p>
   );
 }

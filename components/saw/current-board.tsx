@@ -16,10 +16,24 @@ type Props = {
   onDefect: () => void;
 };
 
-export function CurrentBoard({ board, total, unit, kerfMm, nextCut, busy, onNextCut, onDone, onDefect }: Props) {
+export function CurrentBoard({
+  board,
+  total,
+  unit,
+  kerfMm,
+  nextCut,
+  busy,
+  onNextCut,
+  onDone,
+  onDefect,
+}: Props) {
   const allMarked = nextCut >= board.pieces.length;
   return (
-    <section className="space-y-4 rounded-xl border-2 border-bark bg-white p-4" aria-label={`Board ${board.boardNo}`} data-testid="current-board">
+    <section
+      className="space-y-4 rounded-xl border-2 border-bark bg-white p-4"
+      aria-label={`Board ${board.boardNo}`}
+      data-testid="current-board"
+    >
       <h2 className="text-lg font-bold uppercase tracking-wide text-bark-soft">
         Board {board.boardNo} of {total}
       </h2>
@@ -28,10 +42,22 @@ export function CurrentBoard({ board, total, unit, kerfMm, nextCut, busy, onNext
       <CutList board={board} unit={unit} nextCut={nextCut} />
       <LeftOver board={board} unit={unit} />
       <div className="sticky bottom-0 -mx-4 grid grid-cols-[1fr_1fr_auto] gap-3 border-t-2 border-grain bg-white px-4 py-3">
-        <Button variant="secondary" size="lg" className="min-h-16 text-xl" onClick={onNextCut} disabled={allMarked}>
+        <Button
+          variant="secondary"
+          size="lg"
+          className="min-h-16 text-xl"
+          onClick={onNextCut}
+          disabled={allMarked}
+        >
           {allMarked ? 'All cuts made' : `Cut ${nextCut + 1} made`}
         </Button>
-        <Button size="lg" className="min-h-16 text-xl" onClick={onDone} disabled={busy} data-testid="board-done">
+        <Button
+          size="lg"
+          className="min-h-16 text-xl"
+          onClick={onDone}
+          disabled={busy}
+          data-testid="board-done"
+        >
           Board {board.boardNo} done
         </Button>
         <Button variant="danger" size="lg" className="min-h-16" onClick={onDefect} disabled={busy}>

@@ -37,7 +37,11 @@ export function DefectForm({
   }
 
   return (
-    <section className="space-y-4 rounded-xl border-4 border-brick bg-white p-4" data-testid="defect-form" aria-label={`Report board ${boardNo} bad`}>
+    <section
+      className="space-y-4 rounded-xl border-4 border-brick bg-white p-4"
+      data-testid="defect-form"
+      aria-label={`Report board ${boardNo} bad`}
+    >
       <h2 className="text-2xl font-bold text-brick">Board {boardNo} is bad. What is wrong?</h2>
       <div className="grid grid-cols-3 gap-2 sm:grid-cols-4" role="radiogroup" aria-label="Reason">
         {DEFECT_REASONS.map((r) => (

@@ -38,7 +38,11 @@ export function LabelScanner({ onTag }: { onTag: (tag: string) => void }) {
 
   return (
     <div className="space-y-2" data-testid="label-scanner">
-      {problem ? <Notice tone="warning">{problem}</Notice> : <p className="text-lg">Hold the label&apos;s QR code in the frame.</p>}
+      {problem ? (
+        <Notice tone="warning">{problem}</Notice>
+      ) : (
+        <p className="text-lg">Hold the label&apos;s QR code in the frame.</p>
+      )}
       <video ref={video} className="aspect-video w-full max-w-xl rounded-xl bg-bark" muted playsInline />
     </div>
   );

@@ -59,7 +59,10 @@ export function OffcutFinder({ unit }: { unit: 'mm' | 'imperial' }) {
 
 function OffcutCard({ offcut, unit }: { offcut: OffcutBrief; unit: 'mm' | 'imperial' }) {
   return (
-    <section className="space-y-1 rounded-xl border-2 border-bark bg-white p-4 text-lg" data-testid="offcut-card">
+    <section
+      className="space-y-1 rounded-xl border-2 border-bark bg-white p-4 text-lg"
+      data-testid="offcut-card"
+    >
       <h2 className="font-mono text-3xl font-bold">{offcut.tag}</h2>
       <p className="text-2xl font-bold">
         {offcut.sectionName} · {sawLength(offcut.lengthMm, unit)}
@@ -69,7 +72,10 @@ function OffcutCard({ offcut, unit }: { offcut: OffcutBrief; unit: 'mm' | 'imper
         {offcut.reservedFor ? ` for job ${offcut.reservedFor}` : ''}
       </p>
       <p className="text-bark-soft">{offcut.origin}</p>
-      <Link href={`/labels/offcuts?ids=${offcut.id}`} className="mt-2 inline-flex min-h-12 items-center rounded-lg bg-amber px-4 font-bold text-white">
+      <Link
+        href={`/labels/offcuts?ids=${offcut.id}`}
+        className="mt-2 inline-flex min-h-12 items-center rounded-lg bg-amber px-4 font-bold text-white"
+      >
         Print its label
       </Link>
     </section>

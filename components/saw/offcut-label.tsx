@@ -10,7 +10,12 @@ export async function OffcutLabel({ offcut, unit }: { offcut: OffcutBrief; unit:
   return (
     <article className="offcut-label" data-testid={`label-${offcut.tag}`}>
       <div className="label-face">
-        <div className="label-qr" dangerouslySetInnerHTML={{ __html: svg }} aria-label={`QR code for ${offcut.tag}`} role="img" />
+        <div
+          className="label-qr"
+          dangerouslySetInnerHTML={{ __html: svg }}
+          aria-label={`QR code for ${offcut.tag}`}
+          role="img"
+        />
         <div className="label-text">
           <p className="label-tag">{offcut.tag}</p>
           <p className="label-length">{sawLength(offcut.lengthMm, unit)}</p>

@@ -8,7 +8,10 @@ import { moveOffcutRequest } from '@/lib/queries/saw';
 export function RackLocationForm({ offcutId, location }: { offcutId: number; location: string }) {
   const router = useRouter();
   const [value, setValue] = useState(location);
-  const move = useMutation({ mutationFn: () => moveOffcutRequest(offcutId, value.trim()), onSuccess: () => router.refresh() });
+  const move = useMutation({
+    mutationFn: () => moveOffcutRequest(offcutId, value.trim()),
+    onSuccess: () => router.refresh(),
+  });
   return (
     <form
       className="no-print mt-2 grid max-w-[62mm] grid-cols-[1fr_auto] gap-2"
@@ -26,10 +29,16 @@ export function RackLocationForm({ offcutId, location }: { offcutId: number; loc
         onChange={(e) => setValue(e.target.value)}
         className="min-h-12 min-w-0 rounded-lg border-2 border-grain px-2 text-base"
       />
-      <button type="submit" className="min-h-12 rounded-lg border-2 border-spruce px-3 font-semibold text-spruce" disabled={move.isPending || !value.trim()}>
+      <button
+        type="submit"
+        className="min-h-12 rounded-lg border-2 border-spruce px-3 font-semibold text-spruce"
+        disabled={move.isPending || !value.trim()}
+      >
         Set place
       </button>
-      {move.error && <span className="col-span-2 text-sm font-semibold text-brick">{move.error.message}</span>}
+      {move.error && (
+        <span className="col-span-2 text-sm font-semibold text-brick">{move.error.message}</span>
+      )}
     </form>
   );
 }

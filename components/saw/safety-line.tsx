@@ -11,11 +11,15 @@ const CAUTIONS = [
 
 export function SafetyLine({ treated = false }: { treated?: boolean }) {
   return (
-    <details className="no-print group rounded-lg border-2 border-amber bg-amber-light text-bark" data-testid="safety-line">
+    <details
+      className="no-print group rounded-lg border-2 border-amber bg-amber-light text-bark"
+      data-testid="safety-line"
+    >
       <summary className="flex min-h-12 cursor-pointer list-none items-center gap-2 px-4 text-base font-semibold">
         <span aria-hidden="true">⚠</span>
         <span className="flex-1">
-          Guards, riving knife, push sticks, eyes and ears, dust extraction{treated ? ' — treated timber: mask and gloves' : ''}.
+          Guards, riving knife, push sticks, eyes and ears, dust extraction
+          {treated ? ' — treated timber: mask and gloves' : ''}.
         </span>
         <span className="text-sm underline group-open:hidden">More</span>
         <span className="hidden text-sm underline group-open:inline">Less</span>
@@ -24,7 +28,9 @@ export function SafetyLine({ treated = false }: { treated?: boolean }) {
         {CAUTIONS.map((c) => (
           <li key={c}>{c}</li>
         ))}
-        <li className="list-none font-semibold">Your yard&apos;s own safe-working rules and training come first.</li>
+        <li className="list-none font-semibold">
+          Your yard&apos;s own safe-working rules and training come first.
+        </li>
       </ul>
     </details>
   );

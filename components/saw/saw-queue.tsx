@@ -11,7 +11,10 @@ export function SawQueue() {
   if (!queue) return <p className="text-xl">Loading the queue…</p>;
   if (queue.length === 0) {
     return (
-      <p className="rounded-xl border-2 border-dashed border-grain p-8 text-center text-lg text-bark-soft" data-testid="saw-queue-empty">
+      <p
+        className="rounded-xl border-2 border-dashed border-grain p-8 text-center text-lg text-bark-soft"
+        data-testid="saw-queue-empty"
+      >
         Nothing is released to the saw yet.
       </p>
     );

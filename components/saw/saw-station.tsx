@@ -32,7 +32,12 @@ export function SawStation({ planId }: { planId: number }) {
     // Fresh boards first, then the message: the screen never shows a confirmed board as the next one.
     onSuccess: async (r) => {
       await refresh();
-      setMessage({ kind: 'done', boardNo: r.boardNo, offcut: r.newOffcut, finished: r.planStatus === 'done' });
+      setMessage({
+        kind: 'done',
+        boardNo: r.boardNo,
+        offcut: r.newOffcut,
+        finished: r.planStatus === 'done',
+      });
       moveOn();
     },
     onError: (e) => setMessage({ kind: 'error', text: e.message }),
@@ -48,10 +53,17 @@ export function SawStation({ planId }: { planId: number }) {
     onError: (e) => setMessage({ kind: 'error', text: e.message }),
   });
   const defect = useMutation({
-    mutationFn: ({ boardNo, body }: { boardNo: number; body: ReportDefectBody }) => reportDefectRequest(planId, boardNo, body),
+    mutationFn: ({ boardNo, body }: { boardNo: number; body: ReportDefectBody }) =>
+      reportDefectRequest(planId, boardNo, body),
     onSuccess: async (r) => {
       await refresh();
-      setMessage({ kind: 'defect', boardNo: r.boardNo, added: r.replan?.boardNos ?? [], unplaced: r.replan?.unplaced ?? [], offcut: r.newOffcut });
+      setMessage({
+        kind: 'defect',
+        boardNo: r.boardNo,
+        added: r.replan?.boardNos ?? [],
+        unplaced: r.replan?.unplaced ?? [],
+        offcut: r.newOffcut,
+      });
       moveOn();
     },
   });
@@ -65,7 +77,10 @@ export function SawStation({ planId }: { planId: number }) {
   return (
     <div className="space-y-4">
       <header className="flex flex-wrap items-center gap-3">
-        <Link href="/saw" className="inline-flex min-h-12 items-center rounded-lg border-2 border-grain bg-white px-4 font-semibold">
+        <Link
+          href="/saw"
+          className="inline-flex min-h-12 items-center rounded-lg border-2 border-grain bg-white px-4 font-semibold"
+        >
           ‹ Queue
         </Link>
         <h1 className="flex-1 text-2xl font-bold">
@@ -121,14 +136,25 @@ export function SawStation({ planId }: { planId: number }) {
 
 function AllCut({ planId, hasBoards, onUndo }: { planId: number; hasBoards: boolean; onUndo: () => void }) {
   return (
-    <section className="space-y-4 rounded-xl border-2 border-spruce bg-spruce-light p-6" data-testid="plan-finished">
-      <h2 className="text-3xl font-bold text-spruce-dark">{hasBoards ? 'Every board is cut.' : 'This plan has no boards.'}</h2>
+    <section
+      className="space-y-4 rounded-xl border-2 border-spruce bg-spruce-light p-6"
+      data-testid="plan-finished"
+    >
+      <h2 className="text-3xl font-bold text-spruce-dark">
+        {hasBoards ? 'Every board is cut.' : 'This plan has no boards.'}
+      </h2>
       <p className="text-lg">Label and rack the kept offcuts, then take the next job from the queue.</p>
       <div className="flex flex-wrap gap-3">
-        <Link href={`/labels/offcuts?plan=${planId}`} className="inline-flex min-h-14 items-center rounded-lg bg-spruce px-6 text-lg font-semibold text-white">
+        <Link
+          href={`/labels/offcuts?plan=${planId}`}
+          className="inline-flex min-h-14 items-center rounded-lg bg-spruce px-6 text-lg font-semibold text-white"
+        >
           Labels for this plan
         </Link>
-        <Link href="/saw" className="inline-flex min-h-14 items-center rounded-lg border-2 border-grain bg-white px-6 text-lg font-semibold">
+        <Link
+          href="/saw"
+          className="inline-flex min-h-14 items-center rounded-lg border-2 border-grain bg-white px-6 text-lg font-semibold"
+        >
           Back to the queue
         </Link>
         <Button variant="quiet" size="lg" onClick={onUndo}>

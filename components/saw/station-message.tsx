@@ -6,7 +6,13 @@ import { Notice } from '@/components/ui/notice';
 export type Message =
   | { kind: 'done'; boardNo: number; offcut: { id: number; tag: string } | null; finished: boolean }
   | { kind: 'undone'; boardNo: number }
-  | { kind: 'defect'; boardNo: number; added: number[]; unplaced: { label: string; length: number }[]; offcut: { id: number; tag: string } | null }
+  | {
+      kind: 'defect';
+      boardNo: number;
+      added: number[];
+      unplaced: { label: string; length: number }[];
+      offcut: { id: number; tag: string } | null;
+    }
   | { kind: 'error'; text: string };
 
 const labelLink = (offcut: { id: number; tag: string }) => (
@@ -19,19 +25,32 @@ const labelLink = (offcut: { id: number; tag: string }) => (
   </Link>
 );
 
-export function StationMessage({ message, onUndo, undoBusy }: { message: Message; onUndo: () => void; undoBusy: boolean }) {
+export function StationMessage({
+  message,
+  onUndo,
+  undoBusy,
+}: {
+  message: Message;
+  onUndo: () => void;
+  undoBusy: boolean;
+}) {
   if (message.kind === 'error') return <Notice tone="error">{message.text}</Notice>;
-  if (message.kind === 'undone') return <Notice data-testid="station-message">Board {message.boardNo} is back to be cut.</Notice>;
+  if (message.kind === 'undone')
+    return <Notice data-testid="station-message">Board {message.boardNo} is back to be cut.</Notice>;
   if (message.kind === 'defect') {
     return (
       <Notice tone={message.unplaced.length ? 'error' : 'warning'} data-testid="station-message">
         <p className="text-lg font-semibold">
           Board {message.boardNo} recorded as bad.{' '}
-          {message.added.length ? `Its pieces are re-planned on board${message.added.length > 1 ? 's' : ''} ${message.added.join(', ')}.` : ''}
+          {message.added.length
+            ? `Its pieces are re-planned on board${message.added.length > 1 ? 's' : ''} ${message.added.join(', ')}.`
+            : ''}
         </p>
         {message.unplaced.length > 0 && (
           <p className="text-lg">
-            Nothing in the yard can hold {message.unplaced.map((u) => `${u.label || 'piece'} ${u.length} mm`).join(', ')}. The office has been told.
+            Nothing in the yard can hold{' '}
+            {message.unplaced.map((u) => `${u.label || 'piece'} ${u.length} mm`).join(', ')}. The office has
+            been told.
           </p>
         )}
         {message.offcut && <div className="mt-2">{labelLink(message.offcut)}</div>}

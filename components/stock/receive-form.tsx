@@ -20,16 +20,24 @@ export function ReceiveForm({ sections, unit }: { sections: SectionRow[]; unit: 
   const [done, setDone] = useState<string | null>(null);
   const choices = stockLengthChoices(sections, unit);
   const receive = useMutation({
-    mutationFn: () => receiveStockRequest({ reference, lines: lines.map((l) => ({ stockLengthId: Number(l.stockLengthId), quantity: Number(l.quantity) })) }),
+    mutationFn: () =>
+      receiveStockRequest({
+        reference,
+        lines: lines.map((l) => ({ stockLengthId: Number(l.stockLengthId), quantity: Number(l.quantity) })),
+      }),
     onSuccess: () => {
       const boards = lines.reduce((n, l) => n + Number(l.quantity), 0);
       setDone(`Received ${boards} boards on ${reference}.`);
       setReference('');
       setLines([emptyLine]);
-      return Promise.all([queryClient.invalidateQueries({ queryKey: ['sections'] }), queryClient.invalidateQueries({ queryKey: ['stock-movements'] })]);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: ['sections'] }),
+        queryClient.invalidateQueries({ queryKey: ['stock-movements'] }),
+      ]);
     },
   });
-  const setLine = (i: number, change: Partial<Line>) => setLines(lines.map((l, k) => (k === i ? { ...l, ...change } : l)));
+  const setLine = (i: number, change: Partial<Line>) =>
+    setLines(lines.map((l, k) => (k === i ? { ...l, ...change } : l)));
 
   return (
     <form
@@ -42,21 +50,57 @@ export function ReceiveForm({ sections, unit }: { sections: SectionRow[]; unit: 
       }}
     >
       <Field label="Delivery note or reference">
-        {(p) => <input {...p} value={reference} onChange={(e) => setReference(e.target.value)} placeholder="DN-4410, Northwood Timber" />}
+        {(p) => (
+          <input
+            {...p}
+            value={reference}
+            onChange={(e) => setReference(e.target.value)}
+            placeholder="DN-4410, Northwood Timber"
+          />
+        )}
       </Field>
       {lines.map((line, i) => (
         <div key={i} className="grid gap-2 sm:grid-cols-[1fr_8rem_auto]">
-          <select aria-label={`Stock length, line ${i + 1}`} className={inputClass} value={line.stockLengthId} onChange={(e) => setLine(i, { stockLengthId: e.target.value })}>
+          <select
+            aria-label={`Stock length, line ${i + 1}`}
+            className={inputClass}
+            value={line.stockLengthId}
+            onChange={(e) => setLine(i, { stockLengthId: e.target.value })}
+          >
             <option value="">Choose a stock length…</option>
-            {choices.map((c) => <option key={c.id} value={c.id}>{c.label}</option>)}
+            {choices.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.label}
+              </option>
+            ))}
           </select>
-          <input aria-label={`Boards received, line ${i + 1}`} className={inputClass} type="number" min={1} inputMode="numeric" value={line.quantity} onChange={(e) => setLine(i, { quantity: e.target.value })} placeholder="Boards" />
-          {lines.length > 1 && <Button type="button" variant="quiet" onClick={() => setLines(lines.filter((_, k) => k !== i))}>Remove</Button>}
+          <input
+            aria-label={`Boards received, line ${i + 1}`}
+            className={inputClass}
+            type="number"
+            min={1}
+            inputMode="numeric"
+            value={line.quantity}
+            onChange={(e) => setLine(i, { quantity: e.target.value })}
+            placeholder="Boards"
+          />
+          {lines.length > 1 && (
+            <Button type="button" variant="quiet" onClick={() => setLines(lines.filter((_, k) => k !== i))}>
+              Remove
+            </Button>
+          )}
         </div>
       ))}
       <div className="flex flex-wrap gap-2">
-        <Button type="button" variant="secondary" onClick={() => setLines([...lines, emptyLine])}>Add a line</Button>
-        <Button type="submit" disabled={receive.isPending || lines.some((l) => !l.stockLengthId || !l.quantity)}>Receive delivery</Button>
+        <Button type="button" variant="secondary" onClick={() => setLines([...lines, emptyLine])}>
+          Add a line
+        </Button>
+        <Button
+          type="submit"
+          disabled={receive.isPending || lines.some((l) => !l.stockLengthId || !l.quantity)}
+        >
+          Receive delivery
+        </Button>
       </div>
       {receive.error && <Notice tone="error">{receive.error.message}</Notice>}
       {done && <Notice data-testid="receive-done">{done}</Notice>}

@@ -16,14 +16,32 @@ export function RecentMovements({ unit }: { unit: DisplayUnit }) {
   return (
     <Card className="overflow-x-auto p-0">
       <table className="w-full text-left text-sm" data-testid="movements-table">
-        <thead className="bg-shaving"><tr><th className="p-2">When</th><th className="p-2">What</th><th className="p-2">Stock length</th><th className="p-2 text-right">Change</th><th className="p-2">Why</th><th className="p-2">Who</th></tr></thead>
+        <thead className="bg-shaving">
+          <tr>
+            <th className="p-2">When</th>
+            <th className="p-2">What</th>
+            <th className="p-2">Stock length</th>
+            <th className="p-2 text-right">Change</th>
+            <th className="p-2">Why</th>
+            <th className="p-2">Who</th>
+          </tr>
+        </thead>
         <tbody>
           {(movements.data ?? []).map((m) => (
             <tr key={m.id} className="border-t border-shaving">
-              <td className="p-2 whitespace-nowrap">{new Date(m.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}</td>
+              <td className="p-2 whitespace-nowrap">
+                {new Date(m.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}
+              </td>
               <td className="p-2">{KIND_NAMES[m.kind] ?? m.kind}</td>
-              <td className="p-2">{m.sectionName} — {lengthText(m.lengthMm, unit)}</td>
-              <td className={`p-2 text-right font-semibold ${m.quantityDelta < 0 ? 'text-brick' : 'text-spruce-dark'}`}>{m.quantityDelta > 0 ? '+' : ''}{m.quantityDelta}</td>
+              <td className="p-2">
+                {m.sectionName} — {lengthText(m.lengthMm, unit)}
+              </td>
+              <td
+                className={`p-2 text-right font-semibold ${m.quantityDelta < 0 ? 'text-brick' : 'text-spruce-dark'}`}
+              >
+                {m.quantityDelta > 0 ? '+' : ''}
+                {m.quantityDelta}
+              </td>
               <td className="p-2">{m.reason}</td>
               <td className="p-2">{m.userName ?? '—'}</td>
             </tr>

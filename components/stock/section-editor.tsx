@@ -9,13 +9,33 @@ import { ApiError } from '@/lib/queries/fetch-json';
 import { saveSectionRequest, type SectionInput, type SectionRow } from '@/lib/queries/stock';
 
 type LengthDraft = { id?: number; lengthMm: string; price: string; unlimited: boolean; active: boolean };
-const TEXT_FIELDS = [['name', 'Name'], ['code', 'Code'], ['species', 'Species'], ['grade', 'Grade'], ['treatment', 'Treatment']] as const;
+const TEXT_FIELDS = [
+  ['name', 'Name'],
+  ['code', 'Code'],
+  ['species', 'Species'],
+  ['grade', 'Grade'],
+  ['treatment', 'Treatment'],
+] as const;
 
 function toDraft(s: SectionRow | null) {
   return {
-    fields: { name: s?.name ?? '', code: s?.code ?? '', species: s?.species ?? '', grade: s?.grade ?? '', treatment: s?.treatment ?? '', thicknessMm: String(s?.thicknessMm ?? ''), widthMm: String(s?.widthMm ?? '') },
+    fields: {
+      name: s?.name ?? '',
+      code: s?.code ?? '',
+      species: s?.species ?? '',
+      grade: s?.grade ?? '',
+      treatment: s?.treatment ?? '',
+      thicknessMm: String(s?.thicknessMm ?? ''),
+      widthMm: String(s?.widthMm ?? ''),
+    },
     active: s?.active ?? true,
-    lengths: (s?.lengths ?? []).map((l): LengthDraft => ({ id: l.id, lengthMm: String(l.lengthMm), price: (l.pricePence / 100).toFixed(2), unlimited: l.onHand === null, active: l.active })),
+    lengths: (s?.lengths ?? []).map((l): LengthDraft => ({
+      id: l.id,
+      lengthMm: String(l.lengthMm),
+      price: (l.pricePence / 100).toFixed(2),
+      unlimited: l.onHand === null,
+      active: l.active,
+    })),
   };
 }
 
@@ -26,8 +46,17 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
   const save = useMutation({
     mutationFn: () => {
       const body: SectionInput = {
-        ...draft.fields, thicknessMm: Number(draft.fields.thicknessMm), widthMm: Number(draft.fields.widthMm), active: draft.active,
-        lengths: draft.lengths.map((l) => ({ id: l.id, lengthMm: Number(l.lengthMm), pricePence: Math.round(Number(l.price) * 100), unlimited: l.unlimited, active: l.active })),
+        ...draft.fields,
+        thicknessMm: Number(draft.fields.thicknessMm),
+        widthMm: Number(draft.fields.widthMm),
+        active: draft.active,
+        lengths: draft.lengths.map((l) => ({
+          id: l.id,
+          lengthMm: Number(l.lengthMm),
+          pricePence: Math.round(Number(l.price) * 100),
+          unlimited: l.unlimited,
+          active: l.active,
+        })),
       };
       return saveSectionRequest(section?.id ?? null, body);
     },
@@ -36,41 +65,133 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
       onClose();
     },
   });
-  const issues = save.error instanceof ApiError ? ((save.error.body as { issues?: { path: string; message: string }[] })?.issues ?? []) : [];
+  const issues =
+    save.error instanceof ApiError
+      ? ((save.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
+      : [];
   const issue = (path: string) => issues.find((i) => i.path === path)?.message;
-  const setField = (key: keyof typeof draft.fields, value: string) => setDraft({ ...draft, fields: { ...draft.fields, [key]: value } });
-  const setLength = (i: number, change: Partial<LengthDraft>) => setDraft({ ...draft, lengths: draft.lengths.map((l, k) => (k === i ? { ...l, ...change } : l)) });
+  const setField = (key: keyof typeof draft.fields, value: string) =>
+    setDraft({ ...draft, fields: { ...draft.fields, [key]: value } });
+  const setLength = (i: number, change: Partial<LengthDraft>) =>
+    setDraft({ ...draft, lengths: draft.lengths.map((l, k) => (k === i ? { ...l, ...change } : l)) });
 
   return (
-    <form className="space-y-4" data-testid="section-editor" onSubmit={(e) => { e.preventDefault(); save.mutate(); }}>
+    <form
+      className="space-y-4"
+      data-testid="section-editor"
+      onSubmit={(e) => {
+        e.preventDefault();
+        save.mutate();
+      }}
+    >
       <h3 className="text-lg font-bold">{section ? `Edit ${section.name}` : 'Add a section'}</h3>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         {TEXT_FIELDS.map(([key, label]) => (
-          <Field key={key} label={label} error={issue(key)}>{(p) => <input {...p} value={draft.fields[key]} onChange={(e) => setField(key, e.target.value)} />}</Field>
+          <Field key={key} label={label} error={issue(key)}>
+            {(p) => (
+              <input {...p} value={draft.fields[key]} onChange={(e) => setField(key, e.target.value)} />
+            )}
+          </Field>
         ))}
-        <Field label="Thickness (mm)" error={issue('thicknessMm')}>{(p) => <input {...p} type="number" value={draft.fields.thicknessMm} onChange={(e) => setField('thicknessMm', e.target.value)} />}</Field>
-        <Field label="Width (mm)" error={issue('widthMm')}>{(p) => <input {...p} type="number" value={draft.fields.widthMm} onChange={(e) => setField('widthMm', e.target.value)} />}</Field>
-        <label className="flex items-center gap-2 self-end pb-3"><input type="checkbox" checked={draft.active} onChange={(e) => setDraft({ ...draft, active: e.target.checked })} /> Sold (active)</label>
+        <Field label="Thickness (mm)" error={issue('thicknessMm')}>
+          {(p) => (
+            <input
+              {...p}
+              type="number"
+              value={draft.fields.thicknessMm}
+              onChange={(e) => setField('thicknessMm', e.target.value)}
+            />
+          )}
+        </Field>
+        <Field label="Width (mm)" error={issue('widthMm')}>
+          {(p) => (
+            <input
+              {...p}
+              type="number"
+              value={draft.fields.widthMm}
+              onChange={(e) => setField('widthMm', e.target.value)}
+            />
+          )}
+        </Field>
+        <label className="flex items-center gap-2 self-end pb-3">
+          <input
+            type="checkbox"
+            checked={draft.active}
+            onChange={(e) => setDraft({ ...draft, active: e.target.checked })}
+          />{' '}
+          Sold (active)
+        </label>
       </div>
       <fieldset className="space-y-2">
         <legend className="font-semibold">Stock lengths sold</legend>
         {draft.lengths.map((l, i) => (
           <div key={l.id ?? `new-${i}`} className="flex flex-wrap items-center gap-3">
-            <input aria-label={`Length ${i + 1} in mm`} className={`${inputClass} w-28`} type="number" value={l.lengthMm} onChange={(e) => setLength(i, { lengthMm: e.target.value })} />
+            <input
+              aria-label={`Length ${i + 1} in mm`}
+              className={`${inputClass} w-28`}
+              type="number"
+              value={l.lengthMm}
+              onChange={(e) => setLength(i, { lengthMm: e.target.value })}
+            />
             <span className="text-sm">mm at £</span>
-            <input aria-label={`Price of length ${i + 1} in pounds`} className={`${inputClass} w-28`} type="number" step="0.01" value={l.price} onChange={(e) => setLength(i, { price: e.target.value })} />
-            <label className="flex items-center gap-1 text-sm"><input type="checkbox" checked={l.unlimited} onChange={(e) => setLength(i, { unlimited: e.target.checked })} /> Unlimited</label>
-            <label className="flex items-center gap-1 text-sm"><input type="checkbox" checked={l.active} onChange={(e) => setLength(i, { active: e.target.checked })} /> Active</label>
-            {issue(`lengths.${i}.lengthMm`) && <span className="text-sm font-semibold text-brick">{issue(`lengths.${i}.lengthMm`)}</span>}
+            <input
+              aria-label={`Price of length ${i + 1} in pounds`}
+              className={`${inputClass} w-28`}
+              type="number"
+              step="0.01"
+              value={l.price}
+              onChange={(e) => setLength(i, { price: e.target.value })}
+            />
+            <label className="flex items-center gap-1 text-sm">
+              <input
+                type="checkbox"
+                checked={l.unlimited}
+                onChange={(e) => setLength(i, { unlimited: e.target.checked })}
+              />{' '}
+              Unlimited
+            </label>
+            <label className="flex items-center gap-1 text-sm">
+              <input
+                type="checkbox"
+                checked={l.active}
+                onChange={(e) => setLength(i, { active: e.target.checked })}
+              />{' '}
+              Active
+            </label>
+            {issue(`lengths.${i}.lengthMm`) && (
+              <span className="text-sm font-semibold text-brick">{issue(`lengths.${i}.lengthMm`)}</span>
+            )}
           </div>
         ))}
-        <Button type="button" variant="secondary" onClick={() => setDraft({ ...draft, lengths: [...draft.lengths, { lengthMm: '', price: '', unlimited: false, active: true }] })}>Add a stock length</Button>
-        <p className="text-sm text-bark-soft">A new counted length starts at 0 on hand; receive a delivery or take stock to set its count.</p>
+        <Button
+          type="button"
+          variant="secondary"
+          onClick={() =>
+            setDraft({
+              ...draft,
+              lengths: [...draft.lengths, { lengthMm: '', price: '', unlimited: false, active: true }],
+            })
+          }
+        >
+          Add a stock length
+        </Button>
+        <p className="text-sm text-bark-soft">
+          A new counted length starts at 0 on hand; receive a delivery or take stock to set its count.
+        </p>
       </fieldset>
-      {save.error && <Notice tone="error">{save.error.message}{issue('lengths') ? ` ${issue('lengths')}` : ''}</Notice>}
+      {save.error && (
+        <Notice tone="error">
+          {save.error.message}
+          {issue('lengths') ? ` ${issue('lengths')}` : ''}
+        </Notice>
+      )}
       <div className="flex gap-2">
-        <Button type="submit" disabled={save.isPending}>Save section</Button>
-        <Button type="button" variant="quiet" onClick={onClose}>Cancel</Button>
+        <Button type="submit" disabled={save.isPending}>
+          Save section
+        </Button>
+        <Button type="button" variant="quiet" onClick={onClose}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -10,37 +10,84 @@ import { SectionEditor } from './section-editor';
 import { lengthText, onHandText } from './stock-length-label';
 
 /** The sections the yard sells. The owner edits; everyone else reads. */
-export function SectionsCatalogue({ sections, unit, canEdit }: { sections: SectionRow[]; unit: DisplayUnit; canEdit: boolean }) {
+export function SectionsCatalogue({
+  sections,
+  unit,
+  canEdit,
+}: {
+  sections: SectionRow[];
+  unit: DisplayUnit;
+  canEdit: boolean;
+}) {
   const [editing, setEditing] = useState<SectionRow | 'new' | null>(null);
   return (
     <div className="space-y-4">
-      {canEdit && editing === null && <Button variant="secondary" onClick={() => setEditing('new')}>Add a section</Button>}
+      {canEdit && editing === null && (
+        <Button variant="secondary" onClick={() => setEditing('new')}>
+          Add a section
+        </Button>
+      )}
       {editing !== null && (
-        <Card><SectionEditor key={editing === 'new' ? 'new' : editing.id} section={editing === 'new' ? null : editing} onClose={() => setEditing(null)} /></Card>
+        <Card>
+          <SectionEditor
+            key={editing === 'new' ? 'new' : editing.id}
+            section={editing === 'new' ? null : editing}
+            onClose={() => setEditing(null)}
+          />
+        </Card>
       )}
       <Card className="overflow-x-auto p-0">
         <table className="w-full text-left" data-testid="sections-table">
           <thead className="bg-shaving text-sm">
-            <tr><th className="p-3">Section</th><th className="p-3">Timber</th><th className="p-3">Stock lengths (price, on hand)</th>{canEdit && <th className="p-3"><span className="sr-only">Edit</span></th>}</tr>
+            <tr>
+              <th className="p-3">Section</th>
+              <th className="p-3">Timber</th>
+              <th className="p-3">Stock lengths (price, on hand)</th>
+              {canEdit && (
+                <th className="p-3">
+                  <span className="sr-only">Edit</span>
+                </th>
+              )}
+            </tr>
           </thead>
           <tbody>
             {sections.map((s) => (
-              <tr key={s.id} className={`border-t border-shaving align-top ${s.active ? '' : 'opacity-60'}`} data-testid={`section-row-${s.code}`}>
+              <tr
+                key={s.id}
+                className={`border-t border-shaving align-top ${s.active ? '' : 'opacity-60'}`}
+                data-testid={`section-row-${s.code}`}
+              >
                 <td className="p-3">
                   <div className="font-semibold">{s.name}</div>
-                  <div className="text-sm text-bark-soft">{s.thicknessMm} × {s.widthMm} mm · {s.code}{s.active ? '' : ' · not sold'}</div>
+                  <div className="text-sm text-bark-soft">
+                    {s.thicknessMm} × {s.widthMm} mm · {s.code}
+                    {s.active ? '' : ' · not sold'}
+                  </div>
                 </td>
-                <td className="p-3 text-sm">{[s.species, s.grade, s.treatment].filter(Boolean).join(' · ')}</td>
+                <td className="p-3 text-sm">
+                  {[s.species, s.grade, s.treatment].filter(Boolean).join(' · ')}
+                </td>
                 <td className="p-3">
                   <ul className="flex flex-wrap gap-2 text-sm">
                     {s.lengths.map((l) => (
-                      <li key={l.id} className={`rounded-md px-2 py-1 ${l.onHand === 0 ? 'bg-brick-light text-brick' : 'bg-shaving'} ${l.active ? '' : 'line-through'}`} data-testid={`stock-length-${l.id}`}>
-                        <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span> · {formatPence(l.pricePence)} · {onHandText(l)}
+                      <li
+                        key={l.id}
+                        className={`rounded-md px-2 py-1 ${l.onHand === 0 ? 'bg-brick-light text-brick' : 'bg-shaving'} ${l.active ? '' : 'line-through'}`}
+                        data-testid={`stock-length-${l.id}`}
+                      >
+                        <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span> ·{' '}
+                        {formatPence(l.pricePence)} · {onHandText(l)}
                       </li>
                     ))}
                   </ul>
                 </td>
-                {canEdit && <td className="p-3"><Button variant="quiet" onClick={() => setEditing(s)} aria-label={`Edit ${s.name}`}>Edit</Button></td>}
+                {canEdit && (
+                  <td className="p-3">
+                    <Button variant="quiet" onClick={() => setEditing(s)} aria-label={`Edit ${s.name}`}>
+                      Edit
+                    </Button>
+                  </td>
+                )}
               </tr>
             ))}
           </tbody>

@@ -3,13 +3,19 @@ import { formatLength } from '@/lib/units';
 import type { SectionRow, StockLengthRow } from '@/lib/queries/stock';
 
 /** A length with its unit, so a bare number is never mistaken: "4800 mm" or 15′-9″. */
-export const lengthText = (mm: number, unit: DisplayUnit) => (unit === 'mm' ? `${formatLength(mm, unit)} mm` : formatLength(mm, unit));
+export const lengthText = (mm: number, unit: DisplayUnit) =>
+  unit === 'mm' ? `${formatLength(mm, unit)} mm` : formatLength(mm, unit);
 
-export const onHandText = (l: Pick<StockLengthRow, 'onHand'>) => (l.onHand === null ? 'unlimited' : `${l.onHand} on hand`);
+export const onHandText = (l: Pick<StockLengthRow, 'onHand'>) =>
+  l.onHand === null ? 'unlimited' : `${l.onHand} on hand`;
 
 /** Every active stock length as a choice: "47×100 C24 treated — 4800 mm (23 on hand)". */
 export function stockLengthChoices(sections: SectionRow[], unit: DisplayUnit) {
   return sections
     .filter((s) => s.active)
-    .flatMap((s) => s.lengths.filter((l) => l.active).map((l) => ({ id: l.id, label: `${s.name} — ${lengthText(l.lengthMm, unit)} (${onHandText(l)})` })));
+    .flatMap((s) =>
+      s.lengths
+        .filter((l) => l.active)
+        .map((l) => ({ id: l.id, label: `${s.name} — ${lengthText(l.lengthMm, unit)} (${onHandText(l)})` })),
+    );
 }

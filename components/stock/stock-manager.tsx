@@ -10,7 +10,17 @@ import { RecentMovements } from './recent-movements';
 import { SectionsCatalogue } from './sections-catalogue';
 import { StocktakeForm } from './stocktake-form';
 
-export function StockManager({ unit, canEditSections, canReceive, canAdjust }: { unit: DisplayUnit; canEditSections: boolean; canReceive: boolean; canAdjust: boolean }) {
+export function StockManager({
+  unit,
+  canEditSections,
+  canReceive,
+  canAdjust,
+}: {
+  unit: DisplayUnit;
+  canEditSections: boolean;
+  canReceive: boolean;
+  canAdjust: boolean;
+}) {
   const sections = useQuery(sectionsQuery());
   if (sections.error) return <Notice tone="error">{sections.error.message}</Notice>;
   if (!sections.data) return <p>Loading the catalogue…</p>;
@@ -18,8 +28,18 @@ export function StockManager({ unit, canEditSections, canReceive, canAdjust }: {
     <div className="space-y-8">
       {(canReceive || canAdjust) && (
         <div className="grid gap-6 lg:grid-cols-2">
-          {canReceive && <Card><h2 className="mb-4 text-xl font-bold">Receive a delivery</h2><ReceiveForm sections={sections.data} unit={unit} /></Card>}
-          {canAdjust && <Card><h2 className="mb-4 text-xl font-bold">Stocktake</h2><StocktakeForm sections={sections.data} unit={unit} /></Card>}
+          {canReceive && (
+            <Card>
+              <h2 className="mb-4 text-xl font-bold">Receive a delivery</h2>
+              <ReceiveForm sections={sections.data} unit={unit} />
+            </Card>
+          )}
+          {canAdjust && (
+            <Card>
+              <h2 className="mb-4 text-xl font-bold">Stocktake</h2>
+              <StocktakeForm sections={sections.data} unit={unit} />
+            </Card>
+          )}
         </div>
       )}
       <section>

@@ -17,44 +17,97 @@ export function StocktakeForm({ sections, unit }: { sections: SectionRow[]; unit
   const [reason, setReason] = useState('');
   const [done, setDone] = useState<string | null>(null);
   const section = sections.find((s) => String(s.id) === sectionId);
-  const changed = (section?.lengths ?? []).filter((l) => counts[l.id] !== undefined && counts[l.id] !== '' && Number(counts[l.id]) !== l.onHand);
+  const changed = (section?.lengths ?? []).filter(
+    (l) => counts[l.id] !== undefined && counts[l.id] !== '' && Number(counts[l.id]) !== l.onHand,
+  );
   const save = useMutation({
-    mutationFn: () => stocktakeRequest({ reason, counts: changed.map((l) => ({ stockLengthId: l.id, counted: Number(counts[l.id]) })) }),
+    mutationFn: () =>
+      stocktakeRequest({
+        reason,
+        counts: changed.map((l) => ({ stockLengthId: l.id, counted: Number(counts[l.id]) })),
+      }),
     onSuccess: () => {
-      setDone(`Stocktake saved for ${section?.name}: ${changed.length} length${changed.length === 1 ? '' : 's'} corrected.`);
+      setDone(
+        `Stocktake saved for ${section?.name}: ${changed.length} length${changed.length === 1 ? '' : 's'} corrected.`,
+      );
       setCounts({});
       setReason('');
-      return Promise.all([queryClient.invalidateQueries({ queryKey: ['sections'] }), queryClient.invalidateQueries({ queryKey: ['stock-movements'] })]);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: ['sections'] }),
+        queryClient.invalidateQueries({ queryKey: ['stock-movements'] }),
+      ]);
     },
   });
 
   return (
-    <form className="space-y-4" data-testid="stocktake-form" onSubmit={(e) => { e.preventDefault(); setDone(null); save.mutate(); }}>
+    <form
+      className="space-y-4"
+      data-testid="stocktake-form"
+      onSubmit={(e) => {
+        e.preventDefault();
+        setDone(null);
+        save.mutate();
+      }}
+    >
       <Field label="Section counted">
         {(p) => (
-          <select {...p} value={sectionId} onChange={(e) => { setSectionId(e.target.value); setCounts({}); }}>
+          <select
+            {...p}
+            value={sectionId}
+            onChange={(e) => {
+              setSectionId(e.target.value);
+              setCounts({});
+            }}
+          >
             <option value="">Choose a section…</option>
-            {sections.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
+            {sections.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.name}
+              </option>
+            ))}
           </select>
         )}
       </Field>
       {section && (
         <div className="grid gap-2 sm:grid-cols-2">
           {section.lengths.map((l) => (
-            <label key={l.id} className="flex items-center justify-between gap-3 rounded-lg bg-shaving px-3 py-2">
+            <label
+              key={l.id}
+              className="flex items-center justify-between gap-3 rounded-lg bg-shaving px-3 py-2"
+            >
               <span>
                 <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span>
-                <span className="block text-sm text-bark-soft">{l.onHand === null ? 'Unlimited — a count starts counting it' : `Records say ${l.onHand}`}</span>
+                <span className="block text-sm text-bark-soft">
+                  {l.onHand === null ? 'Unlimited — a count starts counting it' : `Records say ${l.onHand}`}
+                </span>
               </span>
-              <input aria-label={`Counted ${lengthText(l.lengthMm, unit)}`} className={`${inputClass} w-24`} type="number" min={0} inputMode="numeric" value={counts[l.id] ?? ''} onChange={(e) => setCounts({ ...counts, [l.id]: e.target.value })} placeholder={l.onHand === null ? '—' : String(l.onHand)} />
+              <input
+                aria-label={`Counted ${lengthText(l.lengthMm, unit)}`}
+                className={`${inputClass} w-24`}
+                type="number"
+                min={0}
+                inputMode="numeric"
+                value={counts[l.id] ?? ''}
+                onChange={(e) => setCounts({ ...counts, [l.id]: e.target.value })}
+                placeholder={l.onHand === null ? '—' : String(l.onHand)}
+              />
             </label>
           ))}
         </div>
       )}
       <Field label="Why the count changed">
-        {(p) => <input {...p} value={reason} onChange={(e) => setReason(e.target.value)} placeholder="Monthly count; two boards split in the rain" />}
+        {(p) => (
+          <input
+            {...p}
+            value={reason}
+            onChange={(e) => setReason(e.target.value)}
+            placeholder="Monthly count; two boards split in the rain"
+          />
+        )}
       </Field>
-      <Button type="submit" disabled={save.isPending || changed.length === 0 || !reason.trim()}>Save stocktake</Button>
+      <Button type="submit" disabled={save.isPending || changed.length === 0 || !reason.trim()}>
+        Save stocktake
+      </Button>
       {save.error && <Notice tone="error">{save.error.message}</Notice>}
       {done && <Notice>{done}</Notice>}
     </form>

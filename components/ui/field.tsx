@@ -4,7 +4,12 @@ import { cn } from '@/lib/cn';
 const control =
   'block w-full rounded-lg border-2 border-grain bg-white px-3 py-2 text-base text-bark min-h-11 focus:border-spruce aria-invalid:border-brick';
 
-type FieldProps = { label: string; error?: string; hint?: string; children: (props: ControlProps) => React.ReactNode };
+type FieldProps = {
+  label: string;
+  error?: string;
+  hint?: string;
+  children: (props: ControlProps) => React.ReactNode;
+};
 type ControlProps = { id: string; className: string; 'aria-describedby'?: string; 'aria-invalid'?: boolean };
 
 /** A labelled form control with its hint and error wired up for screen readers. */
@@ -16,7 +21,12 @@ export function Field({ label, error, hint, children }: FieldProps) {
       <label htmlFor={id} className="block text-sm font-semibold text-bark">
         {label}
       </label>
-      {children({ id, className: control, 'aria-describedby': describedBy, 'aria-invalid': error ? true : undefined })}
+      {children({
+        id,
+        className: control,
+        'aria-describedby': describedBy,
+        'aria-invalid': error ? true : undefined,
+      })}
       {hint && !error && (
         <p id={`${id}-hint`} className="text-sm text-bark-soft">
           {hint}
@@ -34,5 +44,7 @@ export function Field({ label, error, hint, children }: FieldProps) {
 export const inputClass = control;
 
 export function Card({ className, ...props }: React.HTMLAttributes<HTMLDivElement>) {
-  return <div className={cn('rounded-xl border-2 border-shaving bg-white p-5 shadow-sm', className)} {...props} />;
+  return (
+    <div className={cn('rounded-xl border-2 border-shaving bg-white p-5 shadow-sm', className)} {...props} />
+  );
 }

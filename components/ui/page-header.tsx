@@ -1,4 +1,12 @@
-export function PageHeader({ title, lead, actions }: { title: string; lead?: string; actions?: React.ReactNode }) {
+export function PageHeader({
+  title,
+  lead,
+  actions,
+}: {
+  title: string;
+  lead?: string;
+  actions?: React.ReactNode;
+}) {
   return (
     <header className="mb-6 flex flex-wrap items-end justify-between gap-4">
       <div>

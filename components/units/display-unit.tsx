@@ -22,10 +22,21 @@ function subscribe(listener: () => void) {
   };
 }
 
-type UnitContext = { unit: DisplayUnit; setUnit: (unit: DisplayUnit) => void; format: (mm: number) => string; suffix: string };
+type UnitContext = {
+  unit: DisplayUnit;
+  setUnit: (unit: DisplayUnit) => void;
+  format: (mm: number) => string;
+  suffix: string;
+};
 const Context = createContext<UnitContext | null>(null);
 
-export function DisplayUnitProvider({ yardUnit, children }: { yardUnit: DisplayUnit; children: React.ReactNode }) {
+export function DisplayUnitProvider({
+  yardUnit,
+  children,
+}: {
+  yardUnit: DisplayUnit;
+  children: React.ReactNode;
+}) {
   const choice = useSyncExternalStore(subscribe, readChoice, () => null);
   const unit = choice ?? yardUnit;
   const setUnit = useCallback((next: DisplayUnit) => {
@@ -33,7 +44,12 @@ export function DisplayUnitProvider({ yardUnit, children }: { yardUnit: DisplayU
     listeners.forEach((l) => l());
   }, []);
   const value = useMemo(
-    () => ({ unit, setUnit, format: (mm: number) => formatLength(mm, unit), suffix: unit === 'mm' ? ' mm' : '' }),
+    () => ({
+      unit,
+      setUnit,
+      format: (mm: number) => formatLength(mm, unit),
+      suffix: unit === 'mm' ? ' mm' : '',
+    }),
     [unit, setUnit],
   );
   return <Context.Provider value={value}>{children}</Context.Provider>;
@@ -41,7 +57,14 @@ export function DisplayUnitProvider({ yardUnit, children }: { yardUnit: DisplayU
 
 /** Lengths as this person reads them; falls back to millimetres outside a provider. */
 export function useDisplayUnit(): UnitContext {
-  return useContext(Context) ?? { unit: 'mm', setUnit: () => {}, format: (mm) => formatLength(mm, 'mm'), suffix: ' mm' };
+  return (
+    useContext(Context) ?? {
+      unit: 'mm',
+      setUnit: () => {},
+      format: (mm) => formatLength(mm, 'mm'),
+      suffix: ' mm',
+    }
+  );
 }
 
 /** "2400 mm" or "7′-10 1/2″". */

@@ -11,13 +11,20 @@ export function UnitToggle() {
       type="button"
       aria-pressed={unit === value}
       onClick={() => setUnit(value)}
-      className={cn('min-h-9 px-3 text-sm font-semibold', unit === value ? 'bg-spruce text-white' : 'bg-white text-bark hover:bg-shaving')}
+      className={cn(
+        'min-h-9 px-3 text-sm font-semibold',
+        unit === value ? 'bg-spruce text-white' : 'bg-white text-bark hover:bg-shaving',
+      )}
     >
       {label}
     </button>
   );
   return (
-    <div role="group" aria-label="Show lengths in" className="no-print inline-flex overflow-hidden rounded-lg border-2 border-grain">
+    <div
+      role="group"
+      aria-label="Show lengths in"
+      className="no-print inline-flex overflow-hidden rounded-lg border-2 border-grain"
+    >
       {option('mm', 'mm')}
       {option('imperial', 'ft-in')}
     </div>

@@ -10,7 +10,10 @@ import { createUserRequest } from '@/lib/queries/users';
 import { ROLE_NAMES } from './role-names';
 
 function fieldErrors(error: unknown): Record<string, string> {
-  const issues = error instanceof ApiError ? (error.body as { issues?: { path: string; message: string }[] })?.issues : undefined;
+  const issues =
+    error instanceof ApiError
+      ? (error.body as { issues?: { path: string; message: string }[] })?.issues
+      : undefined;
   return Object.fromEntries((issues ?? []).map((i) => [i.path, i.message]));
 }
 
@@ -39,24 +42,40 @@ export function AddUserForm() {
 
   return (
     <form onSubmit={onSubmit} className="grid gap-4 sm:grid-cols-2" data-testid="add-user-form" noValidate>
-      {create.error && !Object.keys(errors).length && <Notice tone="error" className="sm:col-span-2">{create.error.message}</Notice>}
+      {create.error && !Object.keys(errors).length && (
+        <Notice tone="error" className="sm:col-span-2">
+          {create.error.message}
+        </Notice>
+      )}
       {create.isSuccess && <Notice className="sm:col-span-2">Account added.</Notice>}
-      <Field label="Name" error={errors.name}>{(p) => <input {...p} name="name" required />}</Field>
-      <Field label="E-mail" error={errors.email}>{(p) => <input {...p} name="email" type="email" required />}</Field>
+      <Field label="Name" error={errors.name}>
+        {(p) => <input {...p} name="name" required />}
+      </Field>
+      <Field label="E-mail" error={errors.email}>
+        {(p) => <input {...p} name="email" type="email" required />}
+      </Field>
       <Field label="Role" error={errors.role}>
         {(p) => (
           <select {...p} name="role" defaultValue="yard_hand">
             {ROLES.map((r) => (
-              <option key={r} value={r}>{ROLE_NAMES[r]}</option>
+              <option key={r} value={r}>
+                {ROLE_NAMES[r]}
+              </option>
             ))}
           </select>
         )}
       </Field>
-      <Field label="First password" error={errors.password} hint="At least 8 characters; they can change it later.">
+      <Field
+        label="First password"
+        error={errors.password}
+        hint="At least 8 characters; they can change it later."
+      >
         {(p) => <input {...p} name="password" type="password" autoComplete="new-password" required />}
       </Field>
       <div className="sm:col-span-2">
-        <Button type="submit" disabled={create.isPending}>Add account</Button>
+        <Button type="submit" disabled={create.isPending}>
+          Add account
+        </Button>
       </div>
     </form>
   );

@@ -36,7 +36,9 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
           onChange={(e) => update.mutate({ role: e.target.value as Role })}
         >
           {ROLES.map((r) => (
-            <option key={r} value={r}>{ROLE_NAMES[r]}</option>
+            <option key={r} value={r}>
+              {ROLE_NAMES[r]}
+            </option>
           ))}
         </select>
       </td>
@@ -57,7 +59,9 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
             onChange={(e) => setPassword(e.target.value)}
             placeholder="New password"
           />
-          <Button type="submit" variant="secondary" disabled={!password || update.isPending}>Reset</Button>
+          <Button type="submit" variant="secondary" disabled={!password || update.isPending}>
+            Reset
+          </Button>
         </form>
       </td>
       <td className="p-3">

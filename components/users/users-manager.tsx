@@ -15,9 +15,17 @@ export function UsersManager() {
   return (
     <div className="space-y-6">
       <Card className="overflow-x-auto p-0">
-        {rowError && <Notice tone="error" className="m-4">{rowError}</Notice>}
+        {rowError && (
+          <Notice tone="error" className="m-4">
+            {rowError}
+          </Notice>
+        )}
         {users.isPending && <p className="p-4">Loading accounts…</p>}
-        {users.error && <Notice tone="error" className="m-4">{users.error.message}</Notice>}
+        {users.error && (
+          <Notice tone="error" className="m-4">
+            {users.error.message}
+          </Notice>
+        )}
         {users.data && (
           <table className="w-full text-left" data-testid="users-table">
             <thead className="bg-shaving text-sm">

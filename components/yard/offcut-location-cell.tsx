@@ -7,13 +7,25 @@ import { inputClass } from '@/components/ui/field';
 import { moveOffcutRequest, type OffcutRow } from '@/lib/queries/offcuts';
 
 /** Shows an offcut's rack location; the yard hand and owner can move it. */
-export function OffcutLocationCell({ offcut, canEdit, onError }: { offcut: OffcutRow; canEdit: boolean; onError: (m: string | null) => void }) {
+export function OffcutLocationCell({
+  offcut,
+  canEdit,
+  onError,
+}: {
+  offcut: OffcutRow;
+  canEdit: boolean;
+  onError: (m: string | null) => void;
+}) {
   const queryClient = useQueryClient();
   const [editing, setEditing] = useState(false);
   const [location, setLocation] = useState(offcut.location);
   const move = useMutation({
     mutationFn: () => moveOffcutRequest(offcut.id, location),
-    onSuccess: () => { onError(null); setEditing(false); return queryClient.invalidateQueries({ queryKey: ['offcuts'] }); },
+    onSuccess: () => {
+      onError(null);
+      setEditing(false);
+      return queryClient.invalidateQueries({ queryKey: ['offcuts'] });
+    },
     onError: (e) => onError(e.message),
   });
   const onRack = offcut.status === 'available' || offcut.status === 'reserved';
@@ -21,14 +33,37 @@ export function OffcutLocationCell({ offcut, canEdit, onError }: { offcut: Offcu
     return (
       <span className="flex items-center gap-2">
         {offcut.location || '—'}
-        {canEdit && onRack && <button type="button" className="text-sm font-semibold text-spruce underline" onClick={() => setEditing(true)} aria-label={`Move ${offcut.tag}`}>Move</button>}
+        {canEdit && onRack && (
+          <button
+            type="button"
+            className="text-sm font-semibold text-spruce underline"
+            onClick={() => setEditing(true)}
+            aria-label={`Move ${offcut.tag}`}
+          >
+            Move
+          </button>
+        )}
       </span>
     );
   }
   return (
-    <form className="flex gap-1" onSubmit={(e) => { e.preventDefault(); move.mutate(); }}>
-      <input aria-label={`New location of ${offcut.tag}`} className={`${inputClass} w-32 text-sm`} value={location} onChange={(e) => setLocation(e.target.value)} autoFocus />
-      <Button type="submit" variant="secondary" disabled={move.isPending || !location.trim()}>Save</Button>
+    <form
+      className="flex gap-1"
+      onSubmit={(e) => {
+        e.preventDefault();
+        move.mutate();
+      }}
+    >
+      <input
+        aria-label={`New location of ${offcut.tag}`}
+        className={`${inputClass} w-32 text-sm`}
+        value={location}
+        onChange={(e) => setLocation(e.target.value)}
+        autoFocus
+      />
+      <Button type="submit" variant="secondary" disabled={move.isPending || !location.trim()}>
+        Save
+      </Button>
     </form>
   );
 }

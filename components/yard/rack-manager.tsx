@@ -12,9 +12,26 @@ import { RackImport } from './rack-import';
 import { RackTable } from './rack-table';
 import { ScrapBar } from './scrap-bar';
 
-const START: RackFilters = { q: '', sectionId: '', minLengthMm: '', maxLengthMm: '', location: '', minAgeDays: '', status: 'on_rack', sort: 'age', dir: 'desc', page: '1' };
+const START: RackFilters = {
+  q: '',
+  sectionId: '',
+  minLengthMm: '',
+  maxLengthMm: '',
+  location: '',
+  minAgeDays: '',
+  status: 'on_rack',
+  sort: 'age',
+  dir: 'desc',
+  page: '1',
+};
 
-type Props = { unit: DisplayUnit; clearAfterDays: number; canEdit: boolean; sections: { id: number; name: string }[]; initial?: Partial<RackFilters> };
+type Props = {
+  unit: DisplayUnit;
+  clearAfterDays: number;
+  canEdit: boolean;
+  sections: { id: number; name: string }[];
+  initial?: Partial<RackFilters>;
+};
 
 export function RackManager({ unit, clearAfterDays, canEdit, sections, initial }: Props) {
   const [filters, setFilters] = useState<RackFilters>({ ...START, ...initial });
@@ -24,7 +41,12 @@ export function RackManager({ unit, clearAfterDays, canEdit, sections, initial }
   const [error, setError] = useState<string | null>(null);
   const rack = useQuery(offcutsQuery(filters));
   const change = (c: Partial<RackFilters>) => setFilters((f) => ({ ...f, ...c }));
-  const choose = (ids: number[], on: boolean) => setChosen((s) => { const next = new Set(s); ids.forEach((id) => (on ? next.add(id) : next.delete(id))); return next; });
+  const choose = (ids: number[], on: boolean) =>
+    setChosen((s) => {
+      const next = new Set(s);
+      ids.forEach((id) => (on ? next.add(id) : next.delete(id)));
+      return next;
+    });
   const page = Number(filters.page);
   const data = rack.data;
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
@@ -32,34 +54,87 @@ export function RackManager({ unit, clearAfterDays, canEdit, sections, initial }
 
   return (
     <div className="space-y-4">
-      <Card><RackFiltersBar filters={filters} onChange={change} sections={sections} locations={data?.locations ?? []} clearAfterDays={clearAfterDays} /></Card>
-      {chosen.size > 0 && <ScrapBar ids={[...chosen]} canEdit={canEdit} onError={setError} onDone={(m) => { setMessage(m); setChosen(new Set()); }} />}
+      <Card>
+        <RackFiltersBar
+          filters={filters}
+          onChange={change}
+          sections={sections}
+          locations={data?.locations ?? []}
+          clearAfterDays={clearAfterDays}
+        />
+      </Card>
+      {chosen.size > 0 && (
+        <ScrapBar
+          ids={[...chosen]}
+          canEdit={canEdit}
+          onError={setError}
+          onDone={(m) => {
+            setMessage(m);
+            setChosen(new Set());
+          }}
+        />
+      )}
       {message && <Notice data-testid="rack-message">{message}</Notice>}
       {error && <Notice tone="error">{error}</Notice>}
       {rack.error && <Notice tone="error">{rack.error.message}</Notice>}
       <Card className="overflow-x-auto p-0">
         {data && data.total === 0 ? (
-          <p className="p-6 text-center text-bark-soft" data-testid="rack-empty">No offcuts match these filters.</p>
+          <p className="p-6 text-center text-bark-soft" data-testid="rack-empty">
+            No offcuts match these filters.
+          </p>
         ) : (
-          data && <RackTable rows={data.offcuts} unit={unit} clearAfterDays={clearAfterDays} canEdit={canEdit} chosen={chosen} onChoose={choose} filters={filters} onSort={(sort, dir) => change({ sort, dir, page: '1' })} onError={setError} now={now} />
+          data && (
+            <RackTable
+              rows={data.offcuts}
+              unit={unit}
+              clearAfterDays={clearAfterDays}
+              canEdit={canEdit}
+              chosen={chosen}
+              onChoose={choose}
+              filters={filters}
+              onSort={(sort, dir) => change({ sort, dir, page: '1' })}
+              onError={setError}
+              now={now}
+            />
+          )
         )}
         {rack.isPending && <p className="p-4">Loading the rack…</p>}
       </Card>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-sm" data-testid="rack-count">
-          {data ? `${data.total === 0 ? 0 : (page - 1) * data.pageSize + 1}–${Math.min(page * data.pageSize, data.total)} of ${data.total} offcuts` : ''}
+          {data
+            ? `${data.total === 0 ? 0 : (page - 1) * data.pageSize + 1}–${Math.min(page * data.pageSize, data.total)} of ${data.total} offcuts`
+            : ''}
         </p>
         <div className="flex items-center gap-2">
-          <Button variant="secondary" disabled={page <= 1} onClick={() => change({ page: String(page - 1) })}>Previous</Button>
-          <span className="text-sm">Page {page} of {pages}</span>
-          <Button variant="secondary" disabled={page >= pages} onClick={() => change({ page: String(page + 1) })}>Next</Button>
-          <a className="inline-flex min-h-11 items-center rounded-lg px-3 font-semibold text-spruce underline" href={`/api/offcuts/export?${rackQueryString(exportFilters)}`} download>Export CSV</a>
+          <Button variant="secondary" disabled={page <= 1} onClick={() => change({ page: String(page - 1) })}>
+            Previous
+          </Button>
+          <span className="text-sm">
+            Page {page} of {pages}
+          </span>
+          <Button
+            variant="secondary"
+            disabled={page >= pages}
+            onClick={() => change({ page: String(page + 1) })}
+          >
+            Next
+          </Button>
+          <a
+            className="inline-flex min-h-11 items-center rounded-lg px-3 font-semibold text-spruce underline"
+            href={`/api/offcuts/export?${rackQueryString(exportFilters)}`}
+            download
+          >
+            Export CSV
+          </a>
         </div>
       </div>
       {canEdit && (
         <details className="rounded-xl border-2 border-shaving bg-white p-4">
           <summary className="cursor-pointer font-semibold">Import an existing rack from CSV</summary>
-          <div className="mt-3"><RackImport /></div>
+          <div className="mt-3">
+            <RackImport />
+          </div>
         </details>
       )}
     </div>

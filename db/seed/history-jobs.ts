@@ -61,7 +61,16 @@ export const pastJobKinds: { notes: string; lines: Line[] }[] = [
 ];
 
 export const pastCustomers = [
-  'Harlow & Finch Builders', 'Nadia Brennock', 'Otterbrook Primary PTA', 'G. Stannard', 'Wexcombe Property Care',
-  'Imogen Treadwell', 'Lark Rise Garden Co.', 'Callum Ashdown', 'Riverside Community Allotment', 'Petra Colebrook',
-  'Holloway Loft Conversions', 'Dominic Fairbairn',
+  'Harlow & Finch Builders',
+  'Nadia Brennock',
+  'Otterbrook Primary PTA',
+  'G. Stannard',
+  'Wexcombe Property Care',
+  'Imogen Treadwell',
+  'Lark Rise Garden Co.',
+  'Callum Ashdown',
+  'Riverside Community Allotment',
+  'Petra Colebrook',
+  'Holloway Loft Conversions',
+  'Dominic Fairbairn',
 ];

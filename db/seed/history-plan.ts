@@ -10,7 +10,13 @@ export function boardPiecesOf(board: SolvedBoard, kerf: number, labels: Map<numb
     const lengthMm = board.pieceLengths[k];
     position += (k > 0 ? kerf : 0) + lengthMm;
     const jobItemId = parsePieceId(pieceId);
-    return { pieceId, jobItemId, label: labels.get(jobItemId) ?? '', lengthMm, markMm: board.marks[k] ?? position };
+    return {
+      pieceId,
+      jobItemId,
+      label: labels.get(jobItemId) ?? '',
+      lengthMm,
+      markMm: board.marks[k] ?? position,
+    };
   });
 }
 

@@ -4,7 +4,13 @@
 // Rows are built in memory with ids taken after the current maximum and inserted in bulk (seeding stays fast).
 import { eq, sql } from 'drizzle-orm';
 import type { PgliteDatabase } from 'drizzle-orm/pglite';
-import { offcutSourceId, pieceIdFor, stockSourceId, type PlanSection, type PlanSettings } from '@/lib/plans/plan-shapes';
+import {
+  offcutSourceId,
+  pieceIdFor,
+  stockSourceId,
+  type PlanSection,
+  type PlanSettings,
+} from '@/lib/plans/plan-shapes';
 import { solve, type SolveInput } from '@/solver';
 import * as schema from '../schema';
 import { rackLocations, seededRandom } from './demo-yard';
@@ -19,7 +25,14 @@ const DAY_MS = 86_400_000;
 const HOUR_MS = 3_600_000;
 const HISTORY_DAYS = 112;
 const PAST_JOBS = 24;
-const SETTINGS: PlanSettings = { kerfMm: 3, trimMm: 5, minOffcutMm: 300, useOffcuts: true, stockLengthIds: null, timeLimitMs: 30 };
+const SETTINGS: PlanSettings = {
+  kerfMm: 3,
+  trimMm: 5,
+  minOffcutMm: 300,
+  useOffcuts: true,
+  stockLengthIds: null,
+  timeLimitMs: 30,
+};
 const REORDER_BELOW = 8;
 const DELIVERY_SIZE = 20;
 const CLEAR_REASON = 'Rack clear-out: short and old';
@@ -32,13 +45,18 @@ function groupBy<T, K>(list: T[], key: (item: T) => K): Map<K, T[]> {
 }
 
 async function maxId(tx: SeedTx, table: string): Promise<number> {
-  const { rows } = await tx.execute<{ n: number }>(sql.raw(`select coalesce(max(id), 0)::int as n from ${table}`));
+  const { rows } = await tx.execute<{ n: number }>(
+    sql.raw(`select coalesce(max(id), 0)::int as n from ${table}`),
+  );
   return rows[0].n;
 }
 
-export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; userIds: { owner: number; hand: number; saw: number } }) {
+export async function seedHistory(
+  tx: SeedTx,
+  { now, userIds }: { now: Date; userIds: { owner: number; hand: number; saw: number } },
+) {
   const random = seededRandom(7731);
-  const pick = <T,>(list: T[]) => list[Math.floor(random() * list.length)];
+  const pick = <T>(list: T[]) => list[Math.floor(random() * list.length)];
   const between = (min: number, max: number) => min + Math.floor(random() * (max - min + 1));
   const start = new Date(now.getTime() - HISTORY_DAYS * DAY_MS);
 
@@ -47,10 +65,21 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
   const lengths = await tx.select().from(schema.stockLengths);
   const lengthById = new Map(lengths.map((l) => [l.id, l]));
   const lengthsBySection = groupBy(lengths, (l) => l.sectionId);
-  const pencePerMetre = new Map([...lengthsBySection].map(([id, ls]) => [id, Math.min(...ls.map((l) => (1000 * l.pricePence) / l.lengthMm))]));
-  const valueOf = (sectionId: number, lengthMm: number) => Math.round((lengthMm * pencePerMetre.get(sectionId)!) / 1000);
+  const pencePerMetre = new Map(
+    [...lengthsBySection].map(([id, ls]) => [
+      id,
+      Math.min(...ls.map((l) => (1000 * l.pricePence) / l.lengthMm)),
+    ]),
+  );
+  const valueOf = (sectionId: number, lengthMm: number) =>
+    Math.round((lengthMm * pencePerMetre.get(sectionId)!) / 1000);
 
-  const next = { job: await maxId(tx, 'jobs'), item: await maxId(tx, 'job_items'), plan: await maxId(tx, 'plans'), offcut: await maxId(tx, 'offcuts') };
+  const next = {
+    job: await maxId(tx, 'jobs'),
+    item: await maxId(tx, 'job_items'),
+    plan: await maxId(tx, 'plans'),
+    offcut: await maxId(tx, 'offcuts'),
+  };
   const rows = {
     jobs: [] as (typeof schema.jobs.$inferInsert)[],
     items: [] as (typeof schema.jobItems.$inferInsert)[],
@@ -65,16 +94,27 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
   for (const [id, count] of onHand) {
     const l = lengthById.get(id)!;
     rows.movements.push({
-      at: new Date(start.getTime() - 2 * DAY_MS), kind: 'stocktake', userId: userIds.owner, sectionId: l.sectionId,
-      stockLengthId: id, quantityDelta: count, lengthMm: l.lengthMm, valuePence: count * l.pricePence, reason: 'Opening count',
+      at: new Date(start.getTime() - 2 * DAY_MS),
+      kind: 'stocktake',
+      userId: userIds.owner,
+      sectionId: l.sectionId,
+      stockLengthId: id,
+      quantityDelta: count,
+      lengthMm: l.lengthMm,
+      valuePence: count * l.pricePence,
+      reason: 'Opening count',
     });
   }
 
-  const rack: Offcut[] = (await tx.select().from(schema.offcuts).where(eq(schema.offcuts.status, 'available'))).map((o) => ({ ...o }));
+  const rack: Offcut[] = (
+    await tx.select().from(schema.offcuts).where(eq(schema.offcuts.status, 'available'))
+  ).map((o) => ({ ...o }));
   const preexisting = new Set(rack.map((o) => o.id));
 
   for (let j = 0; j < PAST_JOBS; j++) {
-    const plannedAt = new Date(start.getTime() + Math.round(((j + 0.5) * (HISTORY_DAYS - 3) * DAY_MS) / PAST_JOBS) + 9 * HOUR_MS);
+    const plannedAt = new Date(
+      start.getTime() + Math.round(((j + 0.5) * (HISTORY_DAYS - 3) * DAY_MS) / PAST_JOBS) + 9 * HOUR_MS,
+    );
     const doneAt = new Date(plannedAt.getTime() + 5 * HOUR_MS);
     const kind = pick(pastJobKinds);
 
@@ -84,8 +124,14 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
       const l = lengthById.get(id)!;
       onHand.set(id, count + DELIVERY_SIZE);
       rows.movements.push({
-        at: new Date(plannedAt.getTime() - 14 * HOUR_MS), kind: 'receipt', userId: userIds.hand, sectionId: l.sectionId,
-        stockLengthId: id, quantityDelta: DELIVERY_SIZE, lengthMm: l.lengthMm, valuePence: DELIVERY_SIZE * l.pricePence,
+        at: new Date(plannedAt.getTime() - 14 * HOUR_MS),
+        kind: 'receipt',
+        userId: userIds.hand,
+        sectionId: l.sectionId,
+        stockLengthId: id,
+        quantityDelta: DELIVERY_SIZE,
+        lengthMm: l.lengthMm,
+        valuePence: DELIVERY_SIZE * l.pricePence,
         reason: `Delivery note DN-${4100 + j}`,
       });
     }
@@ -93,12 +139,24 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
     const jobId = ++next.job;
     const reference = `J-0${901 + j}`;
     rows.jobs.push({
-      id: jobId, reference, customerName: pick(pastCustomers), dueDate: doneAt.toISOString().slice(0, 10), status: 'done',
-      notes: kind.notes, createdBy: userIds.hand, createdAt: plannedAt, updatedAt: doneAt,
+      id: jobId,
+      reference,
+      customerName: pick(pastCustomers),
+      dueDate: doneAt.toISOString().slice(0, 10),
+      status: 'done',
+      notes: kind.notes,
+      createdBy: userIds.hand,
+      createdAt: plannedAt,
+      updatedAt: doneAt,
     });
     const items = kind.lines.map((line, position) => ({
-      id: ++next.item, jobId, sectionId: sectionByCode.get(line.code)!.id, lengthMm: pick(line.lengths),
-      quantity: between(line.min, line.max), label: line.label, position,
+      id: ++next.item,
+      jobId,
+      sectionId: sectionByCode.get(line.code)!.id,
+      lengthMm: pick(line.lengths),
+      quantity: between(line.min, line.max),
+      label: line.label,
+      position,
     }));
     rows.items.push(...items);
     const labels = new Map(items.map((i) => [i.id, i.label]));
@@ -106,19 +164,37 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
     const planId = ++next.plan;
     const planSections: PlanSection[] = [];
     for (const [sectionId, sectionItems] of groupBy(items, (i) => i.sectionId)) {
-      const offcutsHere = rack.filter((o) => o.sectionId === sectionId && o.status === 'available' && o.createdAt < plannedAt).slice(0, 16);
+      const offcutsHere = rack
+        .filter((o) => o.sectionId === sectionId && o.status === 'available' && o.createdAt < plannedAt)
+        .slice(0, 16);
       const input: SolveInput = {
-        kerf: SETTINGS.kerfMm, trim: SETTINGS.trimMm, minOffcut: SETTINGS.minOffcutMm, timeLimitMs: SETTINGS.timeLimitMs,
-        stock: lengthsBySection.get(sectionId)!.map((l) => ({ id: stockSourceId(l.id), length: l.lengthMm, cost: l.pricePence / 100, available: onHand.get(l.id) ?? null })),
+        kerf: SETTINGS.kerfMm,
+        trim: SETTINGS.trimMm,
+        minOffcut: SETTINGS.minOffcutMm,
+        timeLimitMs: SETTINGS.timeLimitMs,
+        stock: lengthsBySection
+          .get(sectionId)!
+          .map((l) => ({
+            id: stockSourceId(l.id),
+            length: l.lengthMm,
+            cost: l.pricePence / 100,
+            available: onHand.get(l.id) ?? null,
+          })),
         offcuts: offcutsHere.map((o) => ({ id: offcutSourceId(o.id), length: o.lengthMm })),
         pieces: sectionItems.map((i) => ({ id: pieceIdFor(i.id), length: i.lengthMm, quantity: i.quantity })),
       };
       const output = solve(input);
-      planSections.push({ sectionId, sectionName: sections.find((s) => s.id === sectionId)!.name, input, output });
+      planSections.push({
+        sectionId,
+        sectionName: sections.find((s) => s.id === sectionId)!.name,
+        input,
+        output,
+      });
 
       for (const board of output.boards) {
         const source = sourceOf(board);
-        if (source.kind === 'stock' && onHand.has(source.id)) onHand.set(source.id, onHand.get(source.id)! - 1);
+        if (source.kind === 'stock' && onHand.has(source.id))
+          onHand.set(source.id, onHand.get(source.id)! - 1);
         if (source.kind === 'offcut') {
           const used = rack.find((o) => o.id === source.id)!;
           used.status = 'used';
@@ -128,48 +204,100 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
         if (board.remainderKept) {
           newOffcutId = ++next.offcut;
           const made: Offcut = {
-            id: newOffcutId, tag: `H-${String(rows.offcuts.length + 1).padStart(4, '0')}`, sectionId, lengthMm: board.remainder,
-            location: board.remainder < 600 ? 'Short bin' : pick(rackLocations.slice(0, 7)), status: 'available',
-            origin: `Job ${reference}`, originPlanId: planId, createdAt: doneAt, updatedAt: doneAt,
+            id: newOffcutId,
+            tag: `H-${String(rows.offcuts.length + 1).padStart(4, '0')}`,
+            sectionId,
+            lengthMm: board.remainder,
+            location: board.remainder < 600 ? 'Short bin' : pick(rackLocations.slice(0, 7)),
+            status: 'available',
+            origin: `Job ${reference}`,
+            originPlanId: planId,
+            createdAt: doneAt,
+            updatedAt: doneAt,
           };
           rows.offcuts.push(made);
           rack.push(made);
         }
         rows.movements.push({
-          at: doneAt, kind: source.kind === 'stock' ? 'stock_cut' : 'offcut_used', userId: userIds.saw, sectionId,
-          stockLengthId: source.kind === 'stock' ? source.id : null, offcutId: source.kind === 'offcut' ? source.id : null,
-          quantityDelta: source.kind === 'stock' ? -1 : 0, lengthMm: board.length,
-          valuePence: source.kind === 'stock' ? Math.round(board.cost * 100) : valueOf(sectionId, board.length), planId, jobId,
+          at: doneAt,
+          kind: source.kind === 'stock' ? 'stock_cut' : 'offcut_used',
+          userId: userIds.saw,
+          sectionId,
+          stockLengthId: source.kind === 'stock' ? source.id : null,
+          offcutId: source.kind === 'offcut' ? source.id : null,
+          quantityDelta: source.kind === 'stock' ? -1 : 0,
+          lengthMm: board.length,
+          valuePence:
+            source.kind === 'stock' ? Math.round(board.cost * 100) : valueOf(sectionId, board.length),
+          planId,
+          jobId,
         });
         if (newOffcutId) {
           rows.movements.push({
-            at: doneAt, kind: 'offcut_made', userId: userIds.saw, sectionId, offcutId: newOffcutId, lengthMm: board.remainder,
-            valuePence: valueOf(sectionId, board.remainder), planId, jobId,
+            at: doneAt,
+            kind: 'offcut_made',
+            userId: userIds.saw,
+            sectionId,
+            offcutId: newOffcutId,
+            lengthMm: board.remainder,
+            valuePence: valueOf(sectionId, board.remainder),
+            planId,
+            jobId,
           });
         }
         rows.boards.push({
-          planId, boardNo: rows.boards.filter((b) => b.planId === planId).length + 1, sectionId, source: source.kind,
-          stockLengthId: source.kind === 'stock' ? source.id : null, offcutId: source.kind === 'offcut' ? source.id : null,
-          lengthMm: board.length, trimMm: board.trim, pieces: boardPiecesOf(board, SETTINGS.kerfMm, labels),
-          remainderMm: board.remainder, keepRemainder: board.remainderKept, status: 'done', doneAt, doneBy: userIds.saw, newOffcutId,
+          planId,
+          boardNo: rows.boards.filter((b) => b.planId === planId).length + 1,
+          sectionId,
+          source: source.kind,
+          stockLengthId: source.kind === 'stock' ? source.id : null,
+          offcutId: source.kind === 'offcut' ? source.id : null,
+          lengthMm: board.length,
+          trimMm: board.trim,
+          pieces: boardPiecesOf(board, SETTINGS.kerfMm, labels),
+          remainderMm: board.remainder,
+          keepRemainder: board.remainderKept,
+          status: 'done',
+          doneAt,
+          doneBy: userIds.saw,
+          newOffcutId,
         });
       }
     }
     const totals = summarisePlan(planSections);
     rows.plans.push({
-      id: planId, jobId, status: 'done', settings: SETTINGS, sections: planSections, totals,
-      pricePence: totals.stockCostPence + totals.cuts * 25, createdBy: userIds.hand, createdAt: plannedAt, releasedAt: plannedAt,
+      id: planId,
+      jobId,
+      status: 'done',
+      settings: SETTINGS,
+      sections: planSections,
+      totals,
+      pricePence: totals.stockCostPence + totals.cuts * 25,
+      createdBy: userIds.hand,
+      createdAt: plannedAt,
+      releasedAt: plannedAt,
     });
   }
 
   // A clear-out three weeks ago: short pieces that sat on the rack for over sixty days.
   const clearAt = new Date(now.getTime() - 21 * DAY_MS);
   for (const o of rack) {
-    if (o.status !== 'available' || o.lengthMm >= 600 || o.createdAt.getTime() > clearAt.getTime() - 60 * DAY_MS) continue;
+    if (
+      o.status !== 'available' ||
+      o.lengthMm >= 600 ||
+      o.createdAt.getTime() > clearAt.getTime() - 60 * DAY_MS
+    )
+      continue;
     Object.assign(o, { status: 'scrapped', scrapReason: CLEAR_REASON, updatedAt: clearAt });
     rows.movements.push({
-      at: clearAt, kind: 'offcut_scrapped', userId: userIds.owner, sectionId: o.sectionId, offcutId: o.id, lengthMm: o.lengthMm,
-      valuePence: valueOf(o.sectionId, o.lengthMm), reason: CLEAR_REASON,
+      at: clearAt,
+      kind: 'offcut_scrapped',
+      userId: userIds.owner,
+      sectionId: o.sectionId,
+      offcutId: o.id,
+      lengthMm: o.lengthMm,
+      valuePence: valueOf(o.sectionId, o.lengthMm),
+      reason: CLEAR_REASON,
     });
   }
 
@@ -178,12 +306,22 @@ export async function seedHistory(tx: SeedTx, { now, userIds }: { now: Date; use
   await tx.insert(schema.plans).values(rows.plans);
   if (rows.offcuts.length > 0) await tx.insert(schema.offcuts).values(rows.offcuts);
   await tx.insert(schema.planBoards).values(rows.boards);
-  for (let i = 0; i < rows.movements.length; i += 500) await tx.insert(schema.stockMovements).values(rows.movements.slice(i, i + 500));
+  for (let i = 0; i < rows.movements.length; i += 500)
+    await tx.insert(schema.stockMovements).values(rows.movements.slice(i, i + 500));
   for (const o of rack.filter((x) => preexisting.has(x.id) && x.status !== 'available')) {
-    await tx.update(schema.offcuts).set({ status: o.status, scrapReason: o.scrapReason, updatedAt: o.updatedAt }).where(eq(schema.offcuts.id, o.id));
+    await tx
+      .update(schema.offcuts)
+      .set({ status: o.status, scrapReason: o.scrapReason, updatedAt: o.updatedAt })
+      .where(eq(schema.offcuts.id, o.id));
   }
-  for (const [table, n] of [['jobs', next.job], ['job_items', next.item], ['plans', next.plan], ['offcuts', next.offcut]] as const) {
+  for (const [table, n] of [
+    ['jobs', next.job],
+    ['job_items', next.item],
+    ['plans', next.plan],
+    ['offcuts', next.offcut],
+  ] as const) {
     if (n > 0) await tx.execute(sql.raw(`select setval(pg_get_serial_sequence('${table}', 'id'), ${n})`));
   }
-  for (const [id, count] of onHand) await tx.update(schema.stockLengths).set({ onHand: count }).where(eq(schema.stockLengths.id, id));
+  for (const [id, count] of onHand)
+    await tx.update(schema.stockLengths).set({ onHand: count }).where(eq(schema.stockLengths.id, id));
 }

@@ -117,7 +117,10 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
     }
     await seedDemoFrameSchedules(tx, { sectionIds, userId: users.find((u) => u.role === 'yard_hand')!.id });
     const userId = (role: string) => users.find((u) => u.role === role)!.id;
-    await seedHistory(tx, { now, userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') } });
+    await seedHistory(tx, {
+      now,
+      userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') },
+    });
     return users.find((u) => u.role === 'yard_hand')!.id;
   });
   await seedDemoPlans(db, handId);

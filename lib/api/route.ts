@@ -36,7 +36,10 @@ export function errorResponse(error: unknown): Response {
     );
   }
   console.error('Unhandled error in a route handler', error);
-  return NextResponse.json({ error: 'Something went wrong on our side. Nothing was changed.' }, { status: 500 });
+  return NextResponse.json(
+    { error: 'Something went wrong on our side. Nothing was changed.' },
+    { status: 500 },
+  );
 }
 
 /** Parses a JSON body with a schema: 400 for a body that is not JSON, 422 for one that does not fit. */

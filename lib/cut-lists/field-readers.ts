@@ -13,7 +13,10 @@ export function readLengthCell(text: string, maxLengthMm: number | null, column 
   if (!parsed.ok) return fail(column, parsed.message);
   if (parsed.mm <= 0) return fail(column, 'Length must be more than 0.');
   if (maxLengthMm !== null && parsed.mm > maxLengthMm) {
-    return fail(column, `Length ${formatMillimetres(parsed.mm)} mm is longer than any stock length or offcut of this section (longest ${formatMillimetres(maxLengthMm)} mm).`);
+    return fail(
+      column,
+      `Length ${formatMillimetres(parsed.mm)} mm is longer than any stock length or offcut of this section (longest ${formatMillimetres(maxLengthMm)} mm).`,
+    );
   }
   return { ok: true, value: parsed.mm };
 }
@@ -26,15 +29,28 @@ export function readQuantityCell(text: string, column = 'quantity'): Read<number
   const value = Number(trimmed);
   if (!Number.isInteger(value)) return fail(column, `Quantity must be a whole number, not ${trimmed}.`);
   if (value <= 0) return fail(column, 'Quantity must be at least 1.');
-  if (value > MAX_QUANTITY) return fail(column, `Quantity must be at most ${formatMillimetres(MAX_QUANTITY)}.`);
+  if (value > MAX_QUANTITY)
+    return fail(column, `Quantity must be at most ${formatMillimetres(MAX_QUANTITY)}.`);
   return { ok: true, value };
 }
 
 /** Free text, trimmed; blank becomes null. */
-export function readTextCell(text: string, column: string, maxChars: number, required = false): Read<string | null> {
+export function readTextCell(
+  text: string,
+  column: string,
+  maxChars: number,
+  required = false,
+): Read<string | null> {
   const trimmed = text.trim();
-  if (trimmed === '') return required ? fail(column, `${column[0].toUpperCase()}${column.slice(1)} is missing.`) : { ok: true, value: null };
-  if (trimmed.length > maxChars) return fail(column, `${column[0].toUpperCase()}${column.slice(1)} is longer than ${maxChars} characters.`);
+  if (trimmed === '')
+    return required
+      ? fail(column, `${column[0].toUpperCase()}${column.slice(1)} is missing.`)
+      : { ok: true, value: null };
+  if (trimmed.length > maxChars)
+    return fail(
+      column,
+      `${column[0].toUpperCase()}${column.slice(1)} is longer than ${maxChars} characters.`,
+    );
   return { ok: true, value: trimmed };
 }
 

@@ -19,7 +19,12 @@ type ImportRowsInput<T> = {
  * The shared machinery of every CSV import: split rows, match the header, read each row, and
  * return all items or every problem found, in line order.
  */
-export function importRows<T>({ csvText, columns, itemName, readRow }: ImportRowsInput<T>): ImportResult<T & { line: number }> {
+export function importRows<T>({
+  csvText,
+  columns,
+  itemName,
+  readRow,
+}: ImportRowsInput<T>): ImportResult<T & { line: number }> {
   if (typeof csvText !== 'string' || csvText.trim() === '') {
     return { ok: false, errors: [{ line: 1, column: null, message: 'The file is empty.' }] };
   }
@@ -29,16 +34,34 @@ export function importRows<T>({ csvText, columns, itemName, readRow }: ImportRow
   if (!header) return { ok: false, errors: [{ line: 1, column: null, message: 'The file is empty.' }] };
   const { indexes, errors: headerErrors } = matchColumns(header.cells, columns, header.line);
   if (headerErrors.length > 0) return { ok: false, errors: [...headerErrors, ...errors] };
-  if (body.length === 0) errors.push({ line: header.line, column: null, message: `The file has a header but no ${itemName} rows.` });
+  if (body.length === 0)
+    errors.push({
+      line: header.line,
+      column: null,
+      message: `The file has a header but no ${itemName} rows.`,
+    });
   if (body.length > MAX_ROWS) {
-    return { ok: false, errors: [{ line: body[MAX_ROWS].line, column: null, message: `The file has more than ${MAX_ROWS} rows; split it.` }] };
+    return {
+      ok: false,
+      errors: [
+        {
+          line: body[MAX_ROWS].line,
+          column: null,
+          message: `The file has more than ${MAX_ROWS} rows; split it.`,
+        },
+      ],
+    };
   }
 
   const width = Math.max(...Object.values(indexes).map((index) => (index ?? 0) + 1), header.cells.length);
   const items: Array<T & { line: number }> = [];
   for (const row of body) {
     if (row.cells.slice(width).some((cell) => cell.trim() !== '')) {
-      errors.push({ line: row.line, column: null, message: 'This row has more cells than the header; put text that contains commas in double quotes.' });
+      errors.push({
+        line: row.line,
+        column: null,
+        message: 'This row has more cells than the header; put text that contains commas in double quotes.',
+      });
       continue;
     }
     const cell: RowCells = (key) => {

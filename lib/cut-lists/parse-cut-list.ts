@@ -16,7 +16,11 @@ export type CutListItem = {
 };
 
 export const CUT_LIST_COLUMNS: ColumnSpec[] = [
-  { key: 'section', synonyms: ['section name', 'section code', 'timber', 'material', 'product'], required: true },
+  {
+    key: 'section',
+    synonyms: ['section name', 'section code', 'timber', 'material', 'product'],
+    required: true,
+  },
   { key: 'length', synonyms: ['len', 'size', 'cut length', 'length mm'], required: true },
   { key: 'quantity', synonyms: ['qty', 'count', 'pieces', 'pcs', 'number', 'no'], required: true },
   { key: 'label', synonyms: ['name', 'mark', 'part', 'piece'], required: false },
@@ -44,7 +48,16 @@ export function parseCutList(csvText: string, options: ImportOptions): ImportRes
       const label = fields.take(readTextCell(cell('label'), 'label', 100));
       const note = fields.take(readTextCell(cell('note'), 'note', 500));
       if (!section.ok || fields.errors.length > 0) return { ok: false, errors: fields.errors };
-      return { ok: true, value: { sectionId: section.id, length: length!, quantity: quantity!, label: label ?? null, note: note ?? null } };
+      return {
+        ok: true,
+        value: {
+          sectionId: section.id,
+          length: length!,
+          quantity: quantity!,
+          label: label ?? null,
+          note: note ?? null,
+        },
+      };
     },
   });
 }

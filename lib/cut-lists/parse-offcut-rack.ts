@@ -15,7 +15,11 @@ export type OffcutRackItem = {
 };
 
 export const OFFCUT_RACK_COLUMNS: ColumnSpec[] = [
-  { key: 'section', synonyms: ['section name', 'section code', 'timber', 'material', 'product'], required: true },
+  {
+    key: 'section',
+    synonyms: ['section name', 'section code', 'timber', 'material', 'product'],
+    required: true,
+  },
   { key: 'length', synonyms: ['len', 'size', 'length mm'], required: true },
   { key: 'location', synonyms: ['loc', 'rack', 'bay', 'shelf', 'position', 'place'], required: true },
   { key: 'tag', synonyms: ['tag code', 'code', 'id'], required: false },
@@ -38,17 +42,30 @@ export function parseOffcutRack(csvText: string, options: ImportOptions): Import
       const fields = createFieldCollector();
       const section = findSection(cell('section'));
       if (!section.ok) fields.errors.push({ column: 'section', message: section.message });
-      const length = fields.take(readLengthCell(cell('length'), section.ok ? options.maxLengthMm(section.id) : null));
+      const length = fields.take(
+        readLengthCell(cell('length'), section.ok ? options.maxLengthMm(section.id) : null),
+      );
       const location = fields.take(readTextCell(cell('location'), 'location', 60, true));
       const tag = fields.take(readTextCell(cell('tag'), 'tag', 32));
       if (tag) {
         const key = tag.toUpperCase();
-        if (!TAG_PATTERN.test(tag)) fields.errors.push({ column: 'tag', message: `Tag "${tag}" may use only letters, digits, dots, dashes and underscores.` });
-        else if (tagLines.has(key)) fields.errors.push({ column: 'tag', message: `Tag "${tag}" is already used on line ${tagLines.get(key)}.` });
+        if (!TAG_PATTERN.test(tag))
+          fields.errors.push({
+            column: 'tag',
+            message: `Tag "${tag}" may use only letters, digits, dots, dashes and underscores.`,
+          });
+        else if (tagLines.has(key))
+          fields.errors.push({
+            column: 'tag',
+            message: `Tag "${tag}" is already used on line ${tagLines.get(key)}.`,
+          });
         else tagLines.set(key, line);
       }
       if (!section.ok || fields.errors.length > 0) return { ok: false, errors: fields.errors };
-      return { ok: true, value: { sectionId: section.id, length: length!, location: location!, tag: tag ?? null } };
+      return {
+        ok: true,
+        value: { sectionId: section.id, length: length!, location: location!, tag: tag ?? null },
+      };
     },
   });
 }

@@ -41,7 +41,10 @@ export function readCsvRows(text: string): { rows: CsvRow[]; problems: CsvProble
   }
   const problems = parsed.errors.map((error) => ({
     line: lineOfRow[error.row ?? 0] ?? 1,
-    message: error.code === 'MissingQuotes' ? 'A quoted cell is never closed: check the double quotes.' : error.message,
+    message:
+      error.code === 'MissingQuotes'
+        ? 'A quoted cell is never closed: check the double quotes.'
+        : error.message,
   }));
   return { rows, problems };
 }

@@ -2,7 +2,11 @@ import type { SectionRef } from './import-types';
 
 /** "47 × 100  C24" and "47x100 c24" are the same section. */
 function normaliseSectionText(text: string): string {
-  return text.trim().toLowerCase().replace(/\s+/g, ' ').replace(/(\d)\s*[x×*]\s*(\d)/g, '$1x$2');
+  return text
+    .trim()
+    .toLowerCase()
+    .replace(/\s+/g, ' ')
+    .replace(/(\d)\s*[x×*]\s*(\d)/g, '$1x$2');
 }
 
 export type SectionLookup = (text: string) => { ok: true; id: string } | { ok: false; message: string };
@@ -21,8 +25,13 @@ export function createSectionLookup(sections: SectionRef[]): SectionLookup {
     const trimmed = text.trim();
     if (trimmed === '') return { ok: false, message: 'Section is missing.' };
     const found = ids.get(normaliseSectionText(trimmed));
-    if (!found) return { ok: false, message: `Unknown section "${trimmed}". Use a section name or code from the yard's list.` };
-    if (found.size > 1) return { ok: false, message: `"${trimmed}" matches more than one section; use the section code.` };
+    if (!found)
+      return {
+        ok: false,
+        message: `Unknown section "${trimmed}". Use a section name or code from the yard's list.`,
+      };
+    if (found.size > 1)
+      return { ok: false, message: `"${trimmed}" matches more than one section; use the section code.` };
     return { ok: true, id: [...found][0] };
   };
 }

@@ -2,7 +2,12 @@ import { CUT_LIST_TEMPLATE_CSV } from './cut-list-template';
 
 type NamedSection = { name: string; code: string };
 
-const sizeOf = (text: string) => text.replace(/\s+/g, '').replace(/[×*]/g, 'x').toLowerCase().match(/^\d+x\d+/)?.[0];
+const sizeOf = (text: string) =>
+  text
+    .replace(/\s+/g, '')
+    .replace(/[×*]/g, 'x')
+    .toLowerCase()
+    .match(/^\d+x\d+/)?.[0];
 
 /**
  * The cut-list template with each example section swapped for the yard's own section of the same

@@ -32,59 +32,98 @@ export function CutSheetDocument({ plan, job, yardName, offcutTags, format }: Cu
     <Document title={`Cut sheet ${job.reference}`} author={yardName}>
       <Page size="A4" style={s.page}>
         <Text style={s.h1}>Cut sheet · {job.reference}</Text>
-        <Text>{job.customerName}{job.dueDate ? ` · due ${job.dueDate}` : ''}</Text>
+        <Text>
+          {job.customerName}
+          {job.dueDate ? ` · due ${job.dueDate}` : ''}
+        </Text>
         <Text style={s.muted}>
           {yardName} · plan {plan.id} · kerf {plan.settings.kerfMm} mm · end trim {plan.settings.trimMm} mm
         </Text>
         {plan.sections.map((section) => {
           const boards = plan.boards.filter((b) => b.sectionId === section.sectionId);
           const pieces = new Map<string, { label: string; lengthMm: number; count: number }>();
-          for (const b of boards) for (const p of b.pieces) {
-            const key = `${p.lengthMm}|${p.label}`;
-            const e = pieces.get(key) ?? { label: p.label, lengthMm: p.lengthMm, count: 0 };
-            e.count += 1;
-            pieces.set(key, e);
-          }
+          for (const b of boards)
+            for (const p of b.pieces) {
+              const key = `${p.lengthMm}|${p.label}`;
+              const e = pieces.get(key) ?? { label: p.label, lengthMm: p.lengthMm, count: 0 };
+              e.count += 1;
+              pieces.set(key, e);
+            }
           return (
             <View key={section.sectionId}>
               <Text style={s.h2}>{section.sectionName}</Text>
-              {[...pieces.values()].sort((a, b) => b.lengthMm - a.lengthMm).map((p) => (
-                <View key={`${p.lengthMm}|${p.label}`} style={s.row}>
-                  <Text style={s.cell}>{p.label || 'piece'}</Text>
-                  <Text style={s.num}>{format(p.lengthMm)}</Text>
-                  <Text style={s.num}>× {p.count}</Text>
-                </View>
-              ))}
+              {[...pieces.values()]
+                .sort((a, b) => b.lengthMm - a.lengthMm)
+                .map((p) => (
+                  <View key={`${p.lengthMm}|${p.label}`} style={s.row}>
+                    <Text style={s.cell}>{p.label || 'piece'}</Text>
+                    <Text style={s.num}>{format(p.lengthMm)}</Text>
+                    <Text style={s.num}>× {p.count}</Text>
+                  </View>
+                ))}
               <Text style={[s.bold, { marginTop: 8, marginBottom: 4 }]}>Boards</Text>
               {groupIdenticalBoards(boards).map(({ key, boards: same, first }) => (
                 <View key={key} style={s.board} wrap={false}>
                   <Text>
-                    {same.length} × {first.source === 'offcut' ? `offcut ${first.offcutId ? (offcutTags[first.offcutId] ?? '') : ''}` : 'new'} {format(first.lengthMm)}: {first.pieces.map((p) => format(p.lengthMm)).join(' + ')} · {first.keepRemainder ? 'keep' : 'scrap'} {format(first.remainderMm)}
+                    {same.length} ×{' '}
+                    {first.source === 'offcut'
+                      ? `offcut ${first.offcutId ? (offcutTags[first.offcutId] ?? '') : ''}`
+                      : 'new'}{' '}
+                    {format(first.lengthMm)}: {first.pieces.map((p) => format(p.lengthMm)).join(' + ')} ·{' '}
+                    {first.keepRemainder ? 'keep' : 'scrap'} {format(first.remainderMm)}
                   </Text>
-                  <PdfBoard format={format} board={{ lengthMm: first.lengthMm, trimMm: first.trimMm, kerfMm: plan.settings.kerfMm, pieces: first.pieces, remainderMm: first.remainderMm, keepRemainder: first.keepRemainder }} />
+                  <PdfBoard
+                    format={format}
+                    board={{
+                      lengthMm: first.lengthMm,
+                      trimMm: first.trimMm,
+                      kerfMm: plan.settings.kerfMm,
+                      pieces: first.pieces,
+                      remainderMm: first.remainderMm,
+                      keepRemainder: first.keepRemainder,
+                    }}
+                  />
                 </View>
               ))}
             </View>
           );
         })}
-        <Text style={s.muted}>Green: pieces · black: saw kerf · dotted amber: kept remainder · hatched red: scrap or end trim.</Text>
+        <Text style={s.muted}>
+          Green: pieces · black: saw kerf · dotted amber: kept remainder · hatched red: scrap or end trim.
+        </Text>
         {plan.price && (
           <View wrap={false}>
             <Text style={s.h2}>Quote</Text>
             {plan.price.lines.map((line, i) => (
               <View key={i} style={s.row}>
                 <Text style={s.cell}>{line.description}</Text>
-                <Text style={s.num}>{line.quantity} × {pounds(line.unitPrice)}</Text>
+                <Text style={s.num}>
+                  {line.quantity} × {pounds(line.unitPrice)}
+                </Text>
                 <Text style={s.num}>{pounds(line.amount)}</Text>
               </View>
             ))}
-            <View style={s.row}><Text style={s.cell}>Timber</Text><Text style={s.num} /><Text style={s.num}>{pounds(plan.price.materials)}</Text></View>
-            <View style={s.row}><Text style={s.cell}>Cutting</Text><Text style={s.num} /><Text style={s.num}>{pounds(plan.price.cutting)}</Text></View>
-            <View style={s.row}><Text style={[s.cell, s.bold]}>Total</Text><Text style={s.num} /><Text style={[s.num, s.bold]}>{pounds(plan.price.total)}</Text></View>
+            <View style={s.row}>
+              <Text style={s.cell}>Timber</Text>
+              <Text style={s.num} />
+              <Text style={s.num}>{pounds(plan.price.materials)}</Text>
+            </View>
+            <View style={s.row}>
+              <Text style={s.cell}>Cutting</Text>
+              <Text style={s.num} />
+              <Text style={s.num}>{pounds(plan.price.cutting)}</Text>
+            </View>
+            <View style={s.row}>
+              <Text style={[s.cell, s.bold]}>Total</Text>
+              <Text style={s.num} />
+              <Text style={[s.num, s.bold]}>{pounds(plan.price.total)}</Text>
+            </View>
           </View>
         )}
         <Text style={s.caution}>
-          Kerfwise counts and cuts timber; it does not size structure. Check sizes and spans against local building rules or an engineer. Cutting treated timber: wear a dust mask and gloves, wash before eating, never burn offcuts.
+          Kerfwise counts and cuts timber; it does not size structure. Check sizes and spans against local
+          building rules or an engineer. Cutting treated timber: wear a dust mask and gloves, wash before
+          eating, never burn offcuts.
         </Text>
       </Page>
     </Document>

@@ -7,13 +7,30 @@ const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.char
 const pounds = (n: number) => `£${n.toFixed(2)}`;
 
 /** E-mails a plan's cut sheet (PDF attached) and its quote to the customer. */
-export async function emailCutSheet({ planId, to, message }: { planId: number; to?: string; message?: string }) {
+export async function emailCutSheet({
+  planId,
+  to,
+  message,
+}: {
+  planId: number;
+  to?: string;
+  message?: string;
+}) {
   const { pdf, plan, job, yard, fileName } = await renderCutSheet({ planId });
   const address = to || job.customerEmail;
-  if (!address) throw new AppError('invalid', `Job ${job.reference} has no customer e-mail; enter an address to send to.`);
+  if (!address)
+    throw new AppError(
+      'invalid',
+      `Job ${job.reference} has no customer e-mail; enter an address to send to.`,
+    );
   const subject = `Cut sheet and quote for ${job.reference} from ${yard.yardName}`;
   const quote = plan.price
-    ? [...plan.price.lines.map((l) => `${l.description}: ${l.quantity} × ${pounds(l.unitPrice)} = ${pounds(l.amount)}`), `Total: ${pounds(plan.price.total)}`]
+    ? [
+        ...plan.price.lines.map(
+          (l) => `${l.description}: ${l.quantity} × ${pounds(l.unitPrice)} = ${pounds(l.amount)}`,
+        ),
+        `Total: ${pounds(plan.price.total)}`,
+      ]
     : [];
   const lines = [
     `Hello ${job.customerName},`,

@@ -11,14 +11,26 @@ function hatch(x0: number, x1: number, key: string) {
     const a = Math.max(x0, start);
     const b = Math.min(x1, start + H);
     if (b <= a) continue;
-    lines.push(<Line key={`${key}-${start}`} x1={a} y1={H - (a - start)} x2={b} y2={H - (b - start)} stroke="#a3271f" strokeWidth={1.2} />);
+    lines.push(
+      <Line
+        key={`${key}-${start}`}
+        x1={a}
+        y1={H - (a - start)}
+        x2={b}
+        y2={H - (b - start)}
+        stroke="#a3271f"
+        strokeWidth={1.2}
+      />,
+    );
   }
   return lines;
 }
 
 function dots(x0: number, x1: number, key: string) {
   const out = [];
-  for (let x = x0 + 4; x < x1 - 2; x += 8) for (const y of [8, 16, 24]) out.push(<Circle key={`${key}-${x}-${y}`} cx={x} cy={y} r={1.4} fill="#b86a12" />);
+  for (let x = x0 + 4; x < x1 - 2; x += 8)
+    for (const y of [8, 16, 24])
+      out.push(<Circle key={`${key}-${x}-${y}`} cx={x} cy={y} r={1.4} fill="#b86a12" />);
   return out;
 }
 
@@ -30,11 +42,20 @@ export function PdfBoard({ board, format }: { board: BoardInput; format: (mm: nu
       {layOutBoard(board).map((part, i) => {
         const x = part.startMm * scale;
         const w = part.lengthMm * scale;
-        if (part.kind === 'kerf') return <Rect key={i} x={x} y={0} width={Math.max(w, 0.8)} height={H} fill="#231a12" />;
+        if (part.kind === 'kerf')
+          return <Rect key={i} x={x} y={0} width={Math.max(w, 0.8)} height={H} fill="#231a12" />;
         if (part.kind === 'piece') {
           return (
             <G key={i}>
-              <Rect x={x} y={0} width={w} height={H} fill={part.index % 2 ? '#b9d6ca' : '#d7e8e1'} stroke="#1d5545" strokeWidth={0.6} />
+              <Rect
+                x={x}
+                y={0}
+                width={w}
+                height={H}
+                fill={part.index % 2 ? '#b9d6ca' : '#d7e8e1'}
+                stroke="#1d5545"
+                strokeWidth={0.6}
+              />
               {w > 28 && (
                 <Text x={x + w / 2} y={H / 2 + 3} textAnchor="middle" style={{ fontSize: 8 }} fill="#231a12">
                   {format(part.lengthMm)}

@@ -13,9 +13,14 @@ const plainQuotes = (text: string) => text.replace(/′/g, "'").replace(/″/g, 
 
 /** The cut sheet of a plan as PDF bytes, with what an e-mail needs to go with it. */
 export async function renderCutSheet({ planId }: { planId: number }) {
-  const [plan, context, yard] = await Promise.all([getPlanById({ planId }), getPlanContext({ planId }), getYardSettings()]);
+  const [plan, context, yard] = await Promise.all([
+    getPlanById({ planId }),
+    getPlanContext({ planId }),
+    getYardSettings(),
+  ]);
   const { job } = await getJobById({ jobId: plan.jobId });
-  const format = (mm: number) => plainQuotes(formatLength(mm, yard.displayUnit)) + (yard.displayUnit === 'mm' ? ' mm' : '');
+  const format = (mm: number) =>
+    plainQuotes(formatLength(mm, yard.displayUnit)) + (yard.displayUnit === 'mm' ? ' mm' : '');
   const pdf = await renderToBuffer(
     <CutSheetDocument
       plan={JSON.parse(JSON.stringify(plan)) as PlanViewData}

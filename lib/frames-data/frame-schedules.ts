@@ -31,7 +31,12 @@ export async function listFrameSchedules() {
     ? await db
         .select({ id: jobs.id, reference: jobs.reference, frameScheduleId: jobs.frameScheduleId })
         .from(jobs)
-        .where(inArray(jobs.frameScheduleId, rows.map((r) => r.id)))
+        .where(
+          inArray(
+            jobs.frameScheduleId,
+            rows.map((r) => r.id),
+          ),
+        )
     : [];
   return rows.map((r) => ({
     id: r.id,
@@ -44,7 +49,13 @@ export async function listFrameSchedules() {
   }));
 }
 
-export async function getFrameScheduleById({ id, db }: { id: number; db?: DbOrTx }): Promise<FrameScheduleRecord> {
+export async function getFrameScheduleById({
+  id,
+  db,
+}: {
+  id: number;
+  db?: DbOrTx;
+}): Promise<FrameScheduleRecord> {
   const conn = db ?? (await getDb());
   const [row] = await conn.select().from(frameSchedules).where(eq(frameSchedules.id, id));
   if (!row) throw notFound(SCHEDULE);
@@ -68,7 +79,13 @@ export async function createFrameSchedule({ body, userId }: { body: SaveFrameSch
   const db = await getDb();
   const [row] = await db
     .insert(frameSchedules)
-    .values({ name: body.name, customerName: body.customerName, unit: body.unit, panels: body.panels, createdBy: userId })
+    .values({
+      name: body.name,
+      customerName: body.customerName,
+      unit: body.unit,
+      panels: body.panels,
+      createdBy: userId,
+    })
     .returning({ id: frameSchedules.id });
   return getFrameScheduleById({ id: row.id });
 }
@@ -78,7 +95,13 @@ export async function updateFrameSchedule({ id, body }: { id: number; body: Save
   const db = await getDb();
   const updated = await db
     .update(frameSchedules)
-    .set({ name: body.name, customerName: body.customerName, unit: body.unit, panels: body.panels, updatedAt: new Date() })
+    .set({
+      name: body.name,
+      customerName: body.customerName,
+      unit: body.unit,
+      panels: body.panels,
+      updatedAt: new Date(),
+    })
     .where(eq(frameSchedules.id, id))
     .returning({ id: frameSchedules.id });
   if (updated.length === 0) throw notFound(SCHEDULE);
@@ -92,7 +115,10 @@ export async function deleteFrameSchedule({ id }: { id: number }) {
     const schedule = await getFrameScheduleById({ id, db: tx });
     if (schedule.jobs.length > 0) {
       const refs = schedule.jobs.map((j) => j.reference).join(', ');
-      throw new AppError('conflict', `Job ${refs} came from this schedule, so it is kept. Copy it to start a new design.`);
+      throw new AppError(
+        'conflict',
+        `Job ${refs} came from this schedule, so it is kept. Copy it to start a new design.`,
+      );
     }
     await tx.delete(frameSchedules).where(eq(frameSchedules.id, id));
   });

@@ -25,30 +25,52 @@ async function nextJobReference(tx: Tx): Promise<string> {
  * transaction; the job remembers the schedule. A planned job goes back to draft: its plan no longer
  * covers its items.
  */
-export async function sendScheduleToJob({ scheduleId, body, userId }: { scheduleId: number; body: SendScheduleToJobBody; userId: number }) {
+export async function sendScheduleToJob({
+  scheduleId,
+  body,
+  userId,
+}: {
+  scheduleId: number;
+  body: SendScheduleToJobBody;
+  userId: number;
+}) {
   const db = await getDb();
   const schedule = await getFrameScheduleById({ id: scheduleId, db });
   const { dimensions } = await getYardFrameSections({ db });
   assertKnownSections(schedule.panels, dimensions);
   const lines = toFrameJobLines(generateFrameItems(schedule.panels, { sections: dimensions }).items);
-  if (lines.length === 0) throw new AppError('invalid', 'This schedule has no pieces yet. Add a panel first.');
+  if (lines.length === 0)
+    throw new AppError('invalid', 'This schedule has no pieces yet. Add a panel first.');
 
   return db.transaction(async (tx) => {
     let jobId: number;
     if (body.jobId !== undefined) {
-      const [job] = await tx.select({ id: jobs.id, status: jobs.status, reference: jobs.reference }).from(jobs).where(eq(jobs.id, body.jobId));
+      const [job] = await tx
+        .select({ id: jobs.id, status: jobs.status, reference: jobs.reference })
+        .from(jobs)
+        .where(eq(jobs.id, body.jobId));
       if (!job) throw notFound('That job');
       if (!(OPEN_STATUSES as readonly string[]).includes(job.status))
-        throw new AppError('conflict', `Job ${job.reference} is ${job.status}; only draft or planned jobs take new pieces.`);
+        throw new AppError(
+          'conflict',
+          `Job ${job.reference} is ${job.status}; only draft or planned jobs take new pieces.`,
+        );
       jobId = job.id;
       if (job.status === 'planned')
-        await tx.update(plans).set({ status: 'superseded' }).where(and(eq(plans.jobId, jobId), inArray(plans.status, ['planned'])));
-      await tx.update(jobs).set({ frameScheduleId: scheduleId, status: 'draft', updatedAt: new Date() }).where(eq(jobs.id, jobId));
+        await tx
+          .update(plans)
+          .set({ status: 'superseded' })
+          .where(and(eq(plans.jobId, jobId), inArray(plans.status, ['planned'])));
+      await tx
+        .update(jobs)
+        .set({ frameScheduleId: scheduleId, status: 'draft', updatedAt: new Date() })
+        .where(eq(jobs.id, jobId));
     } else {
       const newJob = body.newJob!; // the body schema allows exactly one of jobId and newJob
       const reference = newJob.reference || (await nextJobReference(tx));
       const [taken] = await tx.select({ id: jobs.id }).from(jobs).where(eq(jobs.reference, reference));
-      if (taken) throw new AppError('conflict', `There is already a job ${reference}; choose another reference.`);
+      if (taken)
+        throw new AppError('conflict', `There is already a job ${reference}; choose another reference.`);
       const [job] = await tx
         .insert(jobs)
         .values({

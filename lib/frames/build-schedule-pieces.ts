@@ -27,8 +27,13 @@ function buildPanel(panels: FrameSchedulePanel[], index: number, ctx: FrameConte
     case 'sloped_wall':
       return buildStudWallFrame(panels, index, ctx);
     case 'opening': {
-      const hasWall = panels.some((p) => (p.kind === 'wall' || p.kind === 'sloped_wall') && p.id === panel.wallId);
-      return { pieces: [], warnings: hasWall ? [] : [`${panel.name}: no wall has the id "${panel.wallId}", opening skipped`] };
+      const hasWall = panels.some(
+        (p) => (p.kind === 'wall' || p.kind === 'sloped_wall') && p.id === panel.wallId,
+      );
+      return {
+        pieces: [],
+        warnings: hasWall ? [] : [`${panel.name}: no wall has the id "${panel.wallId}", opening skipped`],
+      };
     }
     case 'roof':
       return buildRoofFrame(panel, index, ctx);
@@ -40,7 +45,14 @@ function buildPanel(panels: FrameSchedulePanel[], index: number, ctx: FrameConte
       return buildCladding(panel, index, panels, ctx);
     case 'free': {
       const at = { panelIndex: index, drawingPanelIndex: index };
-      const one = { ...at, label: panel.label, sectionId: panel.sectionId, length: panel.length, angle: panel.angle, outline: [] };
+      const one = {
+        ...at,
+        label: panel.label,
+        sectionId: panel.sectionId,
+        length: panel.length,
+        angle: panel.angle,
+        outline: [],
+      };
       return { pieces: Array.from({ length: panel.quantity }, () => piece(one)), warnings: [] };
     }
   }

@@ -30,26 +30,41 @@ export function getJointPositions(run: number, maxLength: number, studCentres?: 
  * Boards of a cover width over a face: ceil(height / cover) courses, each the panel's length
  * (common practice), jointed where longer than stock, plus a waste allowance.
  */
-export function buildCladding(panel: CladdingPanel, index: number, panels: FrameSchedulePanel[], ctx: FrameContext): PanelBuild {
+export function buildCladding(
+  panel: CladdingPanel,
+  index: number,
+  panels: FrameSchedulePanel[],
+  ctx: FrameContext,
+): PanelBuild {
   const board = ctx.sections.get(panel.sectionId);
   const found = panel.wallId !== undefined ? panels.find((p) => p.id === panel.wallId) : undefined;
   const wall: StudWallPanel | undefined = found && isStudWall(found) ? found : undefined;
   const width = wall ? wall.length : panel.width;
-  const height = wall ? (wall.kind === 'wall' ? wall.height : Math.max(wall.lowHeight, wall.highHeight)) : panel.height;
+  const height = wall
+    ? wall.kind === 'wall'
+      ? wall.height
+      : Math.max(wall.lowHeight, wall.highHeight)
+    : panel.height;
   if (!board || width === undefined || height === undefined)
     return { pieces: [], warnings: [`${panel.name}: its wall or section is unknown, panel skipped`] };
   const warnings: string[] = [];
-  if (wall?.kind === 'sloped_wall') warnings.push(`${panel.name}: boards are listed full height; trim them to the slope on site`);
+  if (wall?.kind === 'sloped_wall')
+    warnings.push(`${panel.name}: boards are listed full height; trim them to the slope on site`);
   const horizontal = panel.direction === 'horizontal';
   const run = horizontal ? width : height;
   const across = horizontal ? height : width;
-  const wallStuds = wall && horizontal ? getMemberCentres(wall.length, wall.centres, ctx.sections.get(wall.sectionId)?.thickness ?? 0) : undefined;
+  const wallStuds =
+    wall && horizontal
+      ? getMemberCentres(wall.length, wall.centres, ctx.sections.get(wall.sectionId)?.thickness ?? 0)
+      : undefined;
   const joints = getJointPositions(run, panel.maxStockLength, wallStuds);
   const stops = [0, ...joints, run];
   const courses = Math.ceil(across / panel.cover);
   const at = { panelIndex: index, drawingPanelIndex: index };
   const pieces: FramePiece[] = [];
-  const jointNote = joints.length ? `course jointed at ${joints.map((j) => Math.round(j)).join(', ')} mm` : undefined;
+  const jointNote = joints.length
+    ? `course jointed at ${joints.map((j) => Math.round(j)).join(', ')} mm`
+    : undefined;
   for (let c = 0; c < courses; c++) {
     const a0 = c * panel.cover;
     const a1 = Math.min(across, a0 + panel.cover);
@@ -58,15 +73,36 @@ export function buildCladding(panel: CladdingPanel, index: number, panels: Frame
     for (let k = 0; k + 1 < stops.length; k++) {
       const [r0, r1] = [stops[k], stops[k + 1]];
       const outline = horizontal ? rectangle(r0, a0, r1, a1) : rectangle(a0, r0, a1, r1);
-      pieces.push(piece({ ...at, label: `${panel.name} board`, sectionId: panel.sectionId, length: r1 - r0, note, outline }));
+      pieces.push(
+        piece({
+          ...at,
+          label: `${panel.name} board`,
+          sectionId: panel.sectionId,
+          length: r1 - r0,
+          note,
+          outline,
+        }),
+      );
     }
   }
-  if (joints.length) warnings.push(`${panel.name}: runs longer than ${panel.maxStockLength} mm are jointed at ${joints.map((j) => Math.round(j)).join(', ')} mm`);
+  if (joints.length)
+    warnings.push(
+      `${panel.name}: runs longer than ${panel.maxStockLength} mm are jointed at ${joints.map((j) => Math.round(j)).join(', ')} mm`,
+    );
   const spare = Math.ceil((pieces.length * panel.wastePercent) / 100);
   if (spare > 0) {
     const longest = Math.max(...pieces.map((p) => p.length));
     for (let k = 0; k < spare; k++)
-      pieces.push(piece({ ...at, label: `${panel.name} spare board`, sectionId: panel.sectionId, length: longest, note: `waste allowance ${panel.wastePercent} %`, outline: [] }));
+      pieces.push(
+        piece({
+          ...at,
+          label: `${panel.name} spare board`,
+          sectionId: panel.sectionId,
+          length: longest,
+          note: `waste allowance ${panel.wastePercent} %`,
+          outline: [],
+        }),
+      );
   }
   return { pieces, warnings };
 }

@@ -31,8 +31,15 @@ export type DoorLeafGeometry = {
  * The leaf is the opening less the clearances; braces run from low on the hinge side up to the
  * latch side so they are in compression (common practice).
  */
-export function getDoorLeafGeometry(leaf: DoorLeafPanel, panels: FrameSchedulePanel[], ctx: FrameContext): DoorLeafGeometry | null {
-  const opening = leaf.openingId !== undefined ? panels.find((p) => p.kind === 'opening' && p.id === leaf.openingId) : undefined;
+export function getDoorLeafGeometry(
+  leaf: DoorLeafPanel,
+  panels: FrameSchedulePanel[],
+  ctx: FrameContext,
+): DoorLeafGeometry | null {
+  const opening =
+    leaf.openingId !== undefined
+      ? panels.find((p) => p.kind === 'opening' && p.id === leaf.openingId)
+      : undefined;
   const openingWidth = opening?.kind === 'opening' ? opening.width : leaf.openingWidth;
   const openingHeight = opening?.kind === 'opening' ? opening.height : leaf.openingHeight;
   const ledgeSection = ctx.sections.get(leaf.sectionId);
@@ -52,11 +59,27 @@ export function getDoorLeafGeometry(leaf: DoorLeafPanel, panels: FrameSchedulePa
     if (brace) braces.push(brace);
     else warnings.push(`${leaf.name}: no room for brace ${k + 1} between ledges ${k + 1} and ${k + 2}`);
   }
-  return { openingWidth, openingHeight, leafWidth, leafHeight, boardCount: Math.ceil(leafWidth / leaf.boardCover), ledges, braces, warnings };
+  return {
+    openingWidth,
+    openingHeight,
+    leafWidth,
+    leafHeight,
+    boardCount: Math.ceil(leafWidth / leaf.boardCover),
+    ledges,
+    braces,
+    warnings,
+  };
 }
 
 /** A brace of width w between two ledges, its ends cut level to sit on and under them. */
-function fitBrace(leafWidth: number, inset: number, y1: number, y2: number, w: number, hingeSide: 'left' | 'right'): DoorBrace | null {
+function fitBrace(
+  leafWidth: number,
+  inset: number,
+  y1: number,
+  y2: number,
+  w: number,
+  hingeSide: 'left' | 'right',
+): DoorBrace | null {
   const dx = leafWidth - 2 * inset;
   const dy = y2 - y1;
   if (dy <= 0 || dx <= w) return null;
@@ -86,7 +109,12 @@ function fitBrace(leafWidth: number, inset: number, y1: number, y2: number, w: n
   };
 }
 
-export function buildDoorLeaf(leaf: DoorLeafPanel, index: number, panels: FrameSchedulePanel[], ctx: FrameContext): PanelBuild {
+export function buildDoorLeaf(
+  leaf: DoorLeafPanel,
+  index: number,
+  panels: FrameSchedulePanel[],
+  ctx: FrameContext,
+): PanelBuild {
   const geometry = getDoorLeafGeometry(leaf, panels, ctx);
   if (!geometry || !ctx.sections.has(leaf.boardSectionId))
     return { pieces: [], warnings: [`${leaf.name}: its opening or a section is unknown, panel skipped`] };
@@ -97,11 +125,38 @@ export function buildDoorLeaf(leaf: DoorLeafPanel, index: number, panels: FrameS
     const x0 = i * leaf.boardCover;
     const x1 = Math.min(W, x0 + leaf.boardCover);
     const note = x1 - x0 < leaf.boardCover ? `rip to ${Math.round(x1 - x0)} mm cover` : undefined;
-    pieces.push(piece({ ...at, label: `${leaf.name} board`, sectionId: leaf.boardSectionId, length: H, note, outline: rectangle(x0, 0, x1, H) }));
+    pieces.push(
+      piece({
+        ...at,
+        label: `${leaf.name} board`,
+        sectionId: leaf.boardSectionId,
+        length: H,
+        note,
+        outline: rectangle(x0, 0, x1, H),
+      }),
+    );
   }
   for (const l of geometry.ledges)
-    pieces.push(piece({ ...at, label: `${leaf.name} ledge`, sectionId: leaf.sectionId, length: W, outline: rectangle(0, l.y0, W, l.y1) }));
+    pieces.push(
+      piece({
+        ...at,
+        label: `${leaf.name} ledge`,
+        sectionId: leaf.sectionId,
+        length: W,
+        outline: rectangle(0, l.y0, W, l.y1),
+      }),
+    );
   for (const b of geometry.braces)
-    pieces.push(piece({ ...at, label: `${leaf.name} brace`, sectionId: leaf.sectionId, length: b.length, angle: b.angle, note: 'ends cut parallel', outline: b.outline }));
+    pieces.push(
+      piece({
+        ...at,
+        label: `${leaf.name} brace`,
+        sectionId: leaf.sectionId,
+        length: b.length,
+        angle: b.angle,
+        note: 'ends cut parallel',
+        outline: b.outline,
+      }),
+    );
   return { pieces, warnings: geometry.warnings };
 }

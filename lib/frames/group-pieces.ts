@@ -4,17 +4,26 @@ import type { FrameItem, FramePiece } from './types';
 export function formatNumberRanges(numbers: number[]): string {
   const sorted = [...numbers].sort((a, b) => a - b);
   const parts: string[] = [];
-  for (let i = 0; i < sorted.length; ) {
+  for (let i = 0; i < sorted.length;) {
     let j = i;
     while (j + 1 < sorted.length && sorted[j + 1] === sorted[j] + 1) j++;
-    parts.push(j === i ? `${sorted[i]}` : j === i + 1 ? `${sorted[i]}, ${sorted[j]}` : `${sorted[i]}–${sorted[j]}`);
+    parts.push(
+      j === i ? `${sorted[i]}` : j === i + 1 ? `${sorted[i]}, ${sorted[j]}` : `${sorted[i]}–${sorted[j]}`,
+    );
     i = j + 1;
   }
   return parts.join(', ');
 }
 
 const pieceKey = (p: FramePiece) =>
-  [p.panelIndex, p.label, p.sectionId, Math.round(p.length), p.angle ? p.angle.toFixed(1) : '', p.note ?? ''].join('\u0000');
+  [
+    p.panelIndex,
+    p.label,
+    p.sectionId,
+    Math.round(p.length),
+    p.angle ? p.angle.toFixed(1) : '',
+    p.note ?? '',
+  ].join('\u0000');
 
 /**
  * Identical pieces of a panel become one item with a quantity; lengths round to whole mm.

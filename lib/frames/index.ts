@@ -1,8 +1,17 @@
 export { FRAME_STRUCTURE_NOTICE } from './notice';
 export * from './panel-schemas';
-export { framePreviewBodySchema, frameUnitSchema, type FramePreviewBody, type FramePreviewBodyInput } from './frame-preview-body-schema';
+export {
+  framePreviewBodySchema,
+  frameUnitSchema,
+  type FramePreviewBody,
+  type FramePreviewBodyInput,
+} from './frame-preview-body-schema';
 export { findGeometryIssues, type GeometryIssue } from './find-geometry-issues';
-export { validateFrameSchedule, type FrameValidationError, type FrameValidationResult } from './validate-frame-schedule';
+export {
+  validateFrameSchedule,
+  type FrameValidationError,
+  type FrameValidationResult,
+} from './validate-frame-schedule';
 export { generateFrameItems } from './generate-frame-items';
 export { layoutPanel, type PanelLayout, type LayoutShape, type LayoutDimension } from './layout-panel';
 export { sumItemsBySection, type FrameLineItem } from './sum-items-by-section';
@@ -11,4 +20,11 @@ export { getRoofGeometry, type RoofGeometry } from './roof-frame';
 export { getDoorLeafGeometry, type DoorBrace, type DoorLeafGeometry } from './door-leaf';
 export { getJointPositions } from './cladding';
 export { getWallHeightAt } from './wall-height';
-export type { FrameContext, FrameItem, FrameItemsResult, FramePiece, Point, SectionDimensions } from './types';
+export type {
+  FrameContext,
+  FrameItem,
+  FrameItemsResult,
+  FramePiece,
+  Point,
+  SectionDimensions,
+} from './types';

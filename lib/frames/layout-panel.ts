@@ -42,7 +42,12 @@ export function layoutPanel(
   const { markOf } = groupPieces(pieces);
   const shapes: LayoutShape[] = pieces
     .filter((p) => p.drawingPanelIndex === index && p.outline.length > 0)
-    .map((p) => ({ mark: markOf.get(p) ?? null, label: `${p.label} ${p.number}`, role: 'piece', points: p.outline }));
+    .map((p) => ({
+      mark: markOf.get(p) ?? null,
+      label: `${p.label} ${p.number}`,
+      role: 'piece',
+      points: p.outline,
+    }));
   const dimensions: LayoutDimension[] = [];
   let view: PanelLayout['view'] = 'elevation';
 
@@ -50,21 +55,34 @@ export function layoutPanel(
     const L = panel.length;
     dimensions.push(dimension({ x: 0, y: 0 }, { x: L, y: 0 }, -250));
     dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: getWallHeightAt(panel, 0) }, 250));
-    if (panel.kind === 'sloped_wall') dimensions.push(dimension({ x: L, y: 0 }, { x: L, y: getWallHeightAt(panel, L) }, -250));
+    if (panel.kind === 'sloped_wall')
+      dimensions.push(dimension({ x: L, y: 0 }, { x: L, y: getWallHeightAt(panel, L) }, -250));
     for (const o of panels) {
       if (o.kind !== 'opening' || panel.id === undefined || o.wallId !== panel.id) continue;
       const top = o.sillHeight + o.height;
-      shapes.push({ mark: null, label: o.name, role: 'opening', points: rectangle(o.position, o.sillHeight, o.position + o.width, top) });
+      shapes.push({
+        mark: null,
+        label: o.name,
+        role: 'opening',
+        points: rectangle(o.position, o.sillHeight, o.position + o.width, top),
+      });
       if (o.position > 0) dimensions.push(dimension({ x: 0, y: 0 }, { x: o.position, y: 0 }, -150));
       dimensions.push(dimension({ x: o.position, y: top }, { x: o.position + o.width, y: top }, 100));
-      dimensions.push(dimension({ x: o.position + o.width, y: o.sillHeight }, { x: o.position + o.width, y: top }, 100));
+      dimensions.push(
+        dimension({ x: o.position + o.width, y: o.sillHeight }, { x: o.position + o.width, y: top }, 100),
+      );
     }
   } else if (panel.kind === 'roof') {
     view = 'plan';
     const { run } = getRoofGeometry(panel);
-    dimensions.push(dimension({ x: 0, y: -panel.eavesOverhang }, { x: panel.length, y: -panel.eavesOverhang }, -250));
+    dimensions.push(
+      dimension({ x: 0, y: -panel.eavesOverhang }, { x: panel.length, y: -panel.eavesOverhang }, -250),
+    );
     dimensions.push(dimension({ x: -panel.sideOverhang, y: 0 }, { x: -panel.sideOverhang, y: run }, 250));
-    if (panel.eavesOverhang > 0) dimensions.push(dimension({ x: -panel.sideOverhang, y: -panel.eavesOverhang }, { x: -panel.sideOverhang, y: 0 }, 250));
+    if (panel.eavesOverhang > 0)
+      dimensions.push(
+        dimension({ x: -panel.sideOverhang, y: -panel.eavesOverhang }, { x: -panel.sideOverhang, y: 0 }, 250),
+      );
   } else if (panel.kind === 'base') {
     view = 'plan';
     dimensions.push(dimension({ x: 0, y: 0 }, { x: panel.length, y: 0 }, -250));
@@ -90,5 +108,13 @@ export function layoutPanel(
       }
     : { minX: 0, minY: 0, maxX: 0, maxY: 0 };
   const ownWarnings = warnings.filter((w) => w.startsWith(`${panel.name}`));
-  return { view, title: panel.name, bounds, shapes, dimensions, warnings: ownWarnings, notice: FRAME_STRUCTURE_NOTICE };
+  return {
+    view,
+    title: panel.name,
+    bounds,
+    shapes,
+    dimensions,
+    warnings: ownWarnings,
+    notice: FRAME_STRUCTURE_NOTICE,
+  };
 }

@@ -59,7 +59,9 @@ export const slopedWallPanelSchema = z.object({
 export const openingPanelSchema = z.object({
   kind: z.literal('opening'),
   ...panelBase,
-  wallId: z.string({ error: 'Choose the wall this opening is in' }).min(1, { error: 'Choose the wall this opening is in' }),
+  wallId: z
+    .string({ error: 'Choose the wall this opening is in' })
+    .min(1, { error: 'Choose the wall this opening is in' }),
   /** Trimmers, cripples and sill; the wall's section when absent. */
   sectionId: sectionIdSchema().optional(),
   /** Head piece, laid on edge; the opening's section when absent. */
@@ -132,7 +134,9 @@ export const claddingPanelSchema = z.object({
   width: mm('Cladding width').optional(),
   height: mm('Cladding height', 1, 10_000).optional(),
   cover: mm('Board cover width', 20, 400),
-  direction: z.enum(['horizontal', 'vertical'], { error: 'Boards run horizontal or vertical' }).default('horizontal'),
+  direction: z
+    .enum(['horizontal', 'vertical'], { error: 'Boards run horizontal or vertical' })
+    .default('horizontal'),
   maxStockLength: mm('Longest stock length', 600, 12_000).default(4800),
   wastePercent: z
     .number({ error: 'Waste allowance must be a percentage' })

@@ -13,11 +13,16 @@ type OpeningZone = { opening: OpeningPanel; clearBottom: number; framedTop: numb
  * king studs, trimmers, head, cripples (and a sill below a window), then noggin rows.
  * Heights are measured from the underside of the wall (the floor); x from the wall's start.
  */
-export function buildStudWallFrame(panels: FrameSchedulePanel[], wallIndex: number, ctx: FrameContext): PanelBuild {
+export function buildStudWallFrame(
+  panels: FrameSchedulePanel[],
+  wallIndex: number,
+  ctx: FrameContext,
+): PanelBuild {
   const wall = panels[wallIndex] as StudWallPanel;
   const warnings: string[] = [];
   const section = ctx.sections.get(wall.sectionId);
-  if (!section) return { pieces: [], warnings: [`${wall.name}: section ${wall.sectionId} is unknown, panel skipped`] };
+  if (!section)
+    return { pieces: [], warnings: [`${wall.name}: section ${wall.sectionId} is unknown, panel skipped`] };
   const t = section.thickness;
   const L = wall.length;
   const rise = getWallHeightAt(wall, L) - getWallHeightAt(wall, 0);
@@ -33,12 +38,25 @@ export function buildStudWallFrame(panels: FrameSchedulePanel[], wallIndex: numb
   const own = { panelIndex: wallIndex, drawingPanelIndex: wallIndex };
 
   // A vertical member from y0 up to the underside of the top plate; listed at its long point.
-  const addToPlate = (at: typeof own, label: string, sectionId: number, x0: number, x1: number, y0: number, topGap = 0) => {
+  const addToPlate = (
+    at: typeof own,
+    label: string,
+    sectionId: number,
+    x0: number,
+    x1: number,
+    y0: number,
+    topGap = 0,
+  ) => {
     const top0 = underPlate(x0) - topGap;
     const top1 = underPlate(x1) - topGap;
     const length = Math.max(top0, top1) - y0;
     if (length <= 0) return false;
-    const outline: Point[] = [{ x: x0, y: y0 }, { x: x1, y: y0 }, { x: x1, y: top1 }, { x: x0, y: top0 }];
+    const outline: Point[] = [
+      { x: x0, y: y0 },
+      { x: x1, y: y0 },
+      { x: x1, y: top1 },
+      { x: x0, y: top0 },
+    ];
     pieces.push(piece({ ...at, label, sectionId, length, angle: topAngle, outline }));
     verticals.push({ x0, x1, y0, minTop: Math.min(top0, top1) });
     return true;
@@ -46,17 +64,32 @@ export function buildStudWallFrame(panels: FrameSchedulePanel[], wallIndex: numb
 
   const openings = panels
     .map((panel, index) => ({ panel, index }))
-    .filter((o): o is { panel: OpeningPanel; index: number } =>
-      o.panel.kind === 'opening' && wall.id !== undefined && o.panel.wallId === wall.id,
+    .filter(
+      (o): o is { panel: OpeningPanel; index: number } =>
+        o.panel.kind === 'opening' && wall.id !== undefined && o.panel.wallId === wall.id,
     );
 
   // Plates: the bottom plate is left out across a door's clear width.
   if (wall.bottomPlate) {
-    const doors = openings.filter((o) => o.panel.sillHeight === 0).map((o) => o.panel).sort((a, b) => a.position - b.position);
+    const doors = openings
+      .filter((o) => o.panel.sillHeight === 0)
+      .map((o) => o.panel)
+      .sort((a, b) => a.position - b.position);
     let from = 0;
-    for (const gap of [...doors.map((d) => ({ start: d.position, end: d.position + d.width })), { start: L, end: L }]) {
+    for (const gap of [
+      ...doors.map((d) => ({ start: d.position, end: d.position + d.width })),
+      { start: L, end: L },
+    ]) {
       if (gap.start > from)
-        pieces.push(piece({ ...own, label: `${wall.name} bottom plate`, sectionId: wall.sectionId, length: gap.start - from, outline: rectangle(from, 0, gap.start, t) }));
+        pieces.push(
+          piece({
+            ...own,
+            label: `${wall.name} bottom plate`,
+            sectionId: wall.sectionId,
+            length: gap.start - from,
+            outline: rectangle(from, 0, gap.start, t),
+          }),
+        );
       from = Math.max(from, gap.end);
     }
   }
@@ -68,7 +101,16 @@ export function buildStudWallFrame(panels: FrameSchedulePanel[], wallIndex: numb
       { x: 0, y: heightAt(0) - i * plateDepth },
     ];
     const length = Math.hypot(L, rise);
-    pieces.push(piece({ ...own, label: `${wall.name} top plate`, sectionId: wall.sectionId, length, angle: topAngle, outline }));
+    pieces.push(
+      piece({
+        ...own,
+        label: `${wall.name} top plate`,
+        sectionId: wall.sectionId,
+        length,
+        angle: topAngle,
+        outline,
+      }),
+    );
   }
 
   // Studs at centres, except those in the way of an opening's framing.
@@ -94,42 +136,79 @@ export function buildStudWallFrame(panels: FrameSchedulePanel[], wallIndex: numb
     const ot = ctx.sections.get(sectionId)?.thickness;
     const headDepth = ctx.sections.get(headSectionId)?.width;
     if (ot === undefined || headDepth === undefined) {
-      warnings.push(`${o.name}: section ${ot === undefined ? sectionId : headSectionId} is unknown, opening framing skipped`);
+      warnings.push(
+        `${o.name}: section ${ot === undefined ? sectionId : headSectionId} is unknown, opening framing skipped`,
+      );
       continue;
     }
     const left = o.position;
     const right = o.position + o.width;
     const top = o.sillHeight + o.height;
     if (left - ot < t || right + ot > L - t)
-      warnings.push(`${o.name}: too close to the end of ${wall.name} for its trimmers; the end stud is shared`);
+      warnings.push(
+        `${o.name}: too close to the end of ${wall.name} for its trimmers; the end stud is shared`,
+      );
 
     for (const kx of [left - ot - t, right + ot]) {
       if (kx >= t && kx + t <= L - t) addToPlate(at, `${o.name} king stud`, wall.sectionId, kx, kx + t, base);
     }
     for (const tx of [left - ot, right]) {
       if (tx >= 0 && tx + ot <= L) {
-        pieces.push(piece({ ...at, label: `${o.name} trimmer`, sectionId, length: top - base, outline: rectangle(tx, base, tx + ot, top) }));
+        pieces.push(
+          piece({
+            ...at,
+            label: `${o.name} trimmer`,
+            sectionId,
+            length: top - base,
+            outline: rectangle(tx, base, tx + ot, top),
+          }),
+        );
         verticals.push({ x0: tx, x1: tx + ot, y0: base, minTop: top });
       }
     }
     const headLeft = Math.max(0, left - ot);
     const headRight = Math.min(L, right + ot);
-    pieces.push(piece({ ...at, label: `${o.name} head`, sectionId: headSectionId, length: headRight - headLeft, outline: rectangle(headLeft, top, headRight, top + headDepth) }));
+    pieces.push(
+      piece({
+        ...at,
+        label: `${o.name} head`,
+        sectionId: headSectionId,
+        length: headRight - headLeft,
+        outline: rectangle(headLeft, top, headRight, top + headDepth),
+      }),
+    );
     if (top + headDepth > Math.min(underPlate(headLeft), underPlate(headRight)) + 0.5)
       warnings.push(`${o.name}: no room for the head below the top plate of ${wall.name}; lower the opening`);
 
     const cripplesAt = centres.filter((c) => c - ot / 2 >= left && c + ot / 2 <= right);
-    for (const c of cripplesAt) addToPlate(at, `${o.name} cripple above head`, sectionId, c - ot / 2, c + ot / 2, top + headDepth);
+    for (const c of cripplesAt)
+      addToPlate(at, `${o.name} cripple above head`, sectionId, c - ot / 2, c + ot / 2, top + headDepth);
 
     let clearBottom = 0;
     if (o.sillHeight > 0) {
       const sillBottom = o.sillHeight - ot;
       clearBottom = sillBottom;
-      pieces.push(piece({ ...at, label: `${o.name} sill`, sectionId, length: o.width, outline: rectangle(left, sillBottom, right, o.sillHeight) }));
+      pieces.push(
+        piece({
+          ...at,
+          label: `${o.name} sill`,
+          sectionId,
+          length: o.width,
+          outline: rectangle(left, sillBottom, right, o.sillHeight),
+        }),
+      );
       if (sillBottom < base) warnings.push(`${o.name}: the sill is too low to fit above the bottom plate`);
       for (const c of cripplesAt) {
         if (sillBottom - base <= 0) break;
-        pieces.push(piece({ ...at, label: `${o.name} cripple below sill`, sectionId, length: sillBottom - base, outline: rectangle(c - ot / 2, base, c + ot / 2, sillBottom) }));
+        pieces.push(
+          piece({
+            ...at,
+            label: `${o.name} cripple below sill`,
+            sectionId,
+            length: sillBottom - base,
+            outline: rectangle(c - ot / 2, base, c + ot / 2, sillBottom),
+          }),
+        );
         verticals.push({ x0: c - ot / 2, x1: c + ot / 2, y0: base, minTop: sillBottom });
       }
     }
@@ -162,10 +241,22 @@ function addNoggins(
       if (x1 - x0 < 1) continue;
       const mid = (x0 + x1) / 2;
       const inOpening = zones.some(
-        (z) => mid > z.opening.position && mid < z.opening.position + z.opening.width && y > z.clearBottom && y < z.framedTop,
+        (z) =>
+          mid > z.opening.position &&
+          mid < z.opening.position + z.opening.width &&
+          y > z.clearBottom &&
+          y < z.framedTop,
       );
       if (inOpening) continue;
-      pieces.push(piece({ ...own, label: `${wall.name} noggin`, sectionId: wall.sectionId, length: x1 - x0, outline: rectangle(x0, y - t / 2, x1, y + t / 2) }));
+      pieces.push(
+        piece({
+          ...own,
+          label: `${wall.name} noggin`,
+          sectionId: wall.sectionId,
+          length: x1 - x0,
+          outline: rectangle(x0, y - t / 2, x1, y + t / 2),
+        }),
+      );
     }
   }
 }

@@ -1,6 +1,12 @@
 import { FRAME_STRUCTURE_NOTICE } from './notice';
 
-export type FrameLineItem = { sectionId: number; length: number; label: string; quantity: number; note?: string };
+export type FrameLineItem = {
+  sectionId: number;
+  length: number;
+  label: string;
+  quantity: number;
+  note?: string;
+};
 
 /**
  * Line items for a job: quantities summed where section, length and label agree, so the same
@@ -16,8 +22,16 @@ export function sumItemsBySection(
     const found = sums.get(key);
     if (found) {
       found.quantity += item.quantity;
-      if (item.note && !(found.note ?? '').split('; ').includes(item.note)) found.note = found.note ? `${found.note}; ${item.note}` : item.note;
-    } else sums.set(key, { sectionId: item.sectionId, length, label: item.label, quantity: item.quantity, ...(item.note ? { note: item.note } : {}) });
+      if (item.note && !(found.note ?? '').split('; ').includes(item.note))
+        found.note = found.note ? `${found.note}; ${item.note}` : item.note;
+    } else
+      sums.set(key, {
+        sectionId: item.sectionId,
+        length,
+        label: item.label,
+        quantity: item.quantity,
+        ...(item.note ? { note: item.note } : {}),
+      });
   }
   const lineItems = [...sums.values()].sort(
     (a, b) => a.sectionId - b.sectionId || b.length - a.length || a.label.localeCompare(b.label),

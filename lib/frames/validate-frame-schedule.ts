@@ -8,7 +8,13 @@ export type FrameValidationResult =
   | { ok: true; value: FramePreviewBody; errors: []; notice: string }
   | { ok: false; errors: FrameValidationError[]; notice: string };
 
-const SECTION_FIELDS = ['sectionId', 'headSectionId', 'bearerSectionId', 'fasciaSectionId', 'boardSectionId'] as const;
+const SECTION_FIELDS = [
+  'sectionId',
+  'headSectionId',
+  'bearerSectionId',
+  'fasciaSectionId',
+  'boardSectionId',
+] as const;
 
 /**
  * Validates a frame schedule and flattens errors to `{ path: "panels.2.highHeight", message }`.
@@ -20,7 +26,10 @@ export function validateFrameSchedule(
 ): FrameValidationResult {
   const parsed = framePreviewBodySchema.safeParse(input);
   if (!parsed.success) {
-    const errors = parsed.error.issues.map((issue) => ({ path: issue.path.map(String).join('.'), message: issue.message }));
+    const errors = parsed.error.issues.map((issue) => ({
+      path: issue.path.map(String).join('.'),
+      message: issue.message,
+    }));
     return { ok: false, errors, notice: FRAME_STRUCTURE_NOTICE };
   }
   const errors: FrameValidationError[] = [];
@@ -29,7 +38,10 @@ export function validateFrameSchedule(
       for (const field of SECTION_FIELDS) {
         const id = (panel as Record<string, unknown>)[field];
         if (typeof id === 'number' && !options.sections!.has(id))
-          errors.push({ path: `panels.${index}.${field}`, message: `Section ${id} is not in the yard's section list` });
+          errors.push({
+            path: `panels.${index}.${field}`,
+            message: `Section ${id} is not in the yard's section list`,
+          });
       }
     });
   }

@@ -11,15 +11,31 @@ import { getSectionLimits } from './section-limits';
 
 type ItemFields = Partial<z.output<typeof jobItemBodySchema>>;
 
-async function checkItemFits(tx: Parameters<typeof getSectionLimits>[0], sectionId: number, lengthMm: number) {
+async function checkItemFits(
+  tx: Parameters<typeof getSectionLimits>[0],
+  sectionId: number,
+  lengthMm: number,
+) {
   const limits = await getSectionLimits(tx);
   const section = limits.sections.find((s) => s.id === sectionId);
-  if (!section) throw new AppError('invalid', 'That section is not sold here.', { issues: [{ path: 'sectionId', message: 'Choose a section the yard sells.' }] });
+  if (!section)
+    throw new AppError('invalid', 'That section is not sold here.', {
+      issues: [{ path: 'sectionId', message: 'Choose a section the yard sells.' }],
+    });
   const longest = limits.longestMm(sectionId);
   if (lengthMm > longest) {
-    throw new AppError('invalid', `Length ${formatMillimetres(lengthMm)} mm is longer than any stock length or offcut of ${section.name} (longest ${formatMillimetres(longest)} mm).`, {
-      issues: [{ path: 'length', message: `Longer than the longest ${section.name} (${formatMillimetres(longest)} mm).` }],
-    });
+    throw new AppError(
+      'invalid',
+      `Length ${formatMillimetres(lengthMm)} mm is longer than any stock length or offcut of ${section.name} (longest ${formatMillimetres(longest)} mm).`,
+      {
+        issues: [
+          {
+            path: 'length',
+            message: `Longer than the longest ${section.name} (${formatMillimetres(longest)} mm).`,
+          },
+        ],
+      },
+    );
   }
 }
 
@@ -35,18 +51,37 @@ export async function addJobItem({ jobId, item }: { jobId: number; item: Require
       .where(eq(jobItems.jobId, jobId));
     const [row] = await tx
       .insert(jobItems)
-      .values({ jobId, sectionId: item.sectionId, lengthMm: item.length, quantity: item.quantity, label: item.label, note: item.note, position: next })
+      .values({
+        jobId,
+        sectionId: item.sectionId,
+        lengthMm: item.length,
+        quantity: item.quantity,
+        label: item.label,
+        note: item.note,
+        position: next,
+      })
       .returning();
     return row;
   });
 }
 
 /** Changes fields of one line item. */
-export async function updateJobItem({ jobId, itemId, changes }: { jobId: number; itemId: number; changes: ItemFields }) {
+export async function updateJobItem({
+  jobId,
+  itemId,
+  changes,
+}: {
+  jobId: number;
+  itemId: number;
+  changes: ItemFields;
+}) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     await openJobForItemEdits(tx, jobId);
-    const [item] = await tx.select().from(jobItems).where(and(eq(jobItems.id, itemId), eq(jobItems.jobId, jobId)));
+    const [item] = await tx
+      .select()
+      .from(jobItems)
+      .where(and(eq(jobItems.id, itemId), eq(jobItems.jobId, jobId)));
     if (!item) throw notFound('That line item');
     const set: Partial<NewJobItem> = {};
     if (changes.sectionId !== undefined) set.sectionId = changes.sectionId;
@@ -65,7 +100,10 @@ export async function deleteJobItem({ jobId, itemId }: { jobId: number; itemId: 
   const db = await getDb();
   return db.transaction(async (tx) => {
     await openJobForItemEdits(tx, jobId);
-    const deleted = await tx.delete(jobItems).where(and(eq(jobItems.id, itemId), eq(jobItems.jobId, jobId))).returning({ id: jobItems.id });
+    const deleted = await tx
+      .delete(jobItems)
+      .where(and(eq(jobItems.id, itemId), eq(jobItems.jobId, jobId)))
+      .returning({ id: jobItems.id });
     if (!deleted.length) throw notFound('That line item');
     return { deleted: itemId };
   });

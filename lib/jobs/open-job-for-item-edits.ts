@@ -11,12 +11,19 @@ import { AppError, notFound } from '@/lib/errors';
 export async function openJobForItemEdits(tx: Tx, jobId: number) {
   const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId));
   if (!job) throw notFound('That job');
-  if (job.status === 'cancelled') throw new AppError('conflict', `Job ${job.reference} is cancelled; reopen it to change its cut list.`);
+  if (job.status === 'cancelled')
+    throw new AppError('conflict', `Job ${job.reference} is cancelled; reopen it to change its cut list.`);
   if (job.status !== 'draft' && job.status !== 'planned') {
-    throw new AppError('conflict', `Job ${job.reference} is ${job.status}; take its plan back from the saw before changing the cut list.`);
+    throw new AppError(
+      'conflict',
+      `Job ${job.reference} is ${job.status}; take its plan back from the saw before changing the cut list.`,
+    );
   }
   if (job.status === 'planned') {
-    await tx.update(plans).set({ status: 'superseded' }).where(and(eq(plans.jobId, jobId), eq(plans.status, 'planned')));
+    await tx
+      .update(plans)
+      .set({ status: 'superseded' })
+      .where(and(eq(plans.jobId, jobId), eq(plans.status, 'planned')));
     await tx.update(jobs).set({ status: 'draft', updatedAt: new Date() }).where(eq(jobs.id, jobId));
   }
   return job;

@@ -6,7 +6,10 @@ import { offcuts, sections, stockLengths } from '@/db/schema';
 /** Per active section: the longest active stock length or available offcut, in mm. */
 export async function getSectionLimits(db: DbOrTx) {
   const [sectionRows, stock, rack] = await Promise.all([
-    db.select({ id: sections.id, name: sections.name, code: sections.code }).from(sections).where(eq(sections.active, true)),
+    db
+      .select({ id: sections.id, name: sections.name, code: sections.code })
+      .from(sections)
+      .where(eq(sections.active, true)),
     db
       .select({ sectionId: stockLengths.sectionId, longest: max(stockLengths.lengthMm) })
       .from(stockLengths)

@@ -26,13 +26,23 @@ export async function updateJob({ jobId, body }: { jobId: number; body: UpdateJo
     }
     if (body.status === 'cancelled' && job.status !== 'cancelled') {
       if (job.status !== 'draft' && job.status !== 'planned') {
-        throw new AppError('conflict', `Job ${job.reference} is ${job.status}; take its plan back from the saw before cancelling.`);
+        throw new AppError(
+          'conflict',
+          `Job ${job.reference} is ${job.status}; take its plan back from the saw before cancelling.`,
+        );
       }
       changes.status = 'cancelled';
-      await tx.update(plans).set({ status: 'superseded' }).where(and(eq(plans.jobId, jobId), eq(plans.status, 'planned')));
+      await tx
+        .update(plans)
+        .set({ status: 'superseded' })
+        .where(and(eq(plans.jobId, jobId), eq(plans.status, 'planned')));
     }
     if (body.status === 'draft' && job.status !== 'draft') {
-      if (job.status !== 'cancelled') throw new AppError('conflict', `Only a cancelled job can be reopened; job ${job.reference} is ${job.status}.`);
+      if (job.status !== 'cancelled')
+        throw new AppError(
+          'conflict',
+          `Only a cancelled job can be reopened; job ${job.reference} is ${job.status}.`,
+        );
       changes.status = 'draft';
     }
     const [updated] = await tx.update(jobs).set(changes).where(eq(jobs.id, jobId)).returning();

@@ -9,7 +9,16 @@ import type { CaughtMail } from './mail-catcher';
 export async function listSentMail({ limit = 200 }: { limit?: number } = {}) {
   const db = await getDb();
   return db
-    .select({ id: sentMail.id, to: sentMail.to, subject: sentMail.subject, status: sentMail.status, error: sentMail.error, createdAt: sentMail.createdAt, jobId: sentMail.jobId, jobReference: jobs.reference })
+    .select({
+      id: sentMail.id,
+      to: sentMail.to,
+      subject: sentMail.subject,
+      status: sentMail.status,
+      error: sentMail.error,
+      createdAt: sentMail.createdAt,
+      jobId: sentMail.jobId,
+      jobReference: jobs.reference,
+    })
     .from(sentMail)
     .leftJoin(jobs, eq(jobs.id, sentMail.jobId))
     .orderBy(desc(sentMail.id))
@@ -21,7 +30,10 @@ export async function listCaughtMail(): Promise<CaughtMail[] | null> {
   const url = getEnv().KERFWISE_MAIL_CATCHER_URL;
   if (!url) return null;
   try {
-    const response = await fetch(`${url}/messages`, { signal: AbortSignal.timeout(2_000), cache: 'no-store' });
+    const response = await fetch(`${url}/messages`, {
+      signal: AbortSignal.timeout(2_000),
+      cache: 'no-store',
+    });
     const body = (await response.json()) as { messages: CaughtMail[] };
     return [...body.messages].reverse();
   } catch {

@@ -17,7 +17,17 @@ export type CaughtMail = {
   attachments: { filename: string; contentType: string; size: number }[];
 };
 
-export async function startMailCatcher({ smtpPort, httpPort, host = '127.0.0.1', dir }: { smtpPort: number; httpPort?: number; host?: string; dir?: string }) {
+export async function startMailCatcher({
+  smtpPort,
+  httpPort,
+  host = '127.0.0.1',
+  dir,
+}: {
+  smtpPort: number;
+  httpPort?: number;
+  host?: string;
+  dir?: string;
+}) {
   const caught: CaughtMail[] = [];
   if (dir) mkdirSync(dir, { recursive: true });
   const smtp = new SMTPServer({
@@ -34,10 +44,18 @@ export async function startMailCatcher({ smtpPort, httpPort, host = '127.0.0.1',
             to: session.envelope.rcptTo.map((r) => r.address),
             subject: mail.subject ?? '',
             text: mail.text ?? '',
-            attachments: mail.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, size: a.size })),
+            attachments: mail.attachments.map((a) => ({
+              filename: a.filename ?? '',
+              contentType: a.contentType,
+              size: a.size,
+            })),
           };
           caught.push(entry);
-          if (dir) writeFileSync(path.join(dir, `${String(entry.id).padStart(5, '0')}.json`), JSON.stringify(entry, null, 2));
+          if (dir)
+            writeFileSync(
+              path.join(dir, `${String(entry.id).padStart(5, '0')}.json`),
+              JSON.stringify(entry, null, 2),
+            );
           callback();
         })
         .catch((error: Error) => callback(error));

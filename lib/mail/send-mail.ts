@@ -6,7 +6,14 @@ import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 
 type Attachment = { filename: string; content: Buffer; contentType: string };
-type Outgoing = { jobId: number | null; to: string; subject: string; text: string; html: string; attachments: Attachment[] };
+type Outgoing = {
+  jobId: number | null;
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  attachments: Attachment[];
+};
 
 /**
  * Sends one message over SMTP and records it in sent_mail, sent or failed. A failure is a 503
@@ -25,13 +32,27 @@ export async function sendMail(mail: Outgoing) {
   });
   const db = await getDb();
   try {
-    const info = await transport.sendMail({ from: env.KERFWISE_MAIL_FROM, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html, attachments: mail.attachments });
-    await db.insert(sentMail).values({ jobId: mail.jobId, to: mail.to, subject: mail.subject, status: 'sent' });
+    const info = await transport.sendMail({
+      from: env.KERFWISE_MAIL_FROM,
+      to: mail.to,
+      subject: mail.subject,
+      text: mail.text,
+      html: mail.html,
+      attachments: mail.attachments,
+    });
+    await db
+      .insert(sentMail)
+      .values({ jobId: mail.jobId, to: mail.to, subject: mail.subject, status: 'sent' });
     return { messageId: info.messageId };
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
-    await db.insert(sentMail).values({ jobId: mail.jobId, to: mail.to, subject: mail.subject, status: 'failed', error: reason });
-    throw new AppError('unavailable', `The e-mail was not sent: the mail server did not take it (${reason}). The job is unchanged; try again later.`);
+    await db
+      .insert(sentMail)
+      .values({ jobId: mail.jobId, to: mail.to, subject: mail.subject, status: 'failed', error: reason });
+    throw new AppError(
+      'unavailable',
+      `The e-mail was not sent: the mail server did not take it (${reason}). The job is unchanged; try again later.`,
+    );
   } finally {
     transport.close();
   }

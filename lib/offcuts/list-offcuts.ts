@@ -14,10 +14,18 @@ function filtersOf(q: Omit<OffcutListQuery, 'sort' | 'dir' | 'page' | 'pageSize'
   if (q.minLengthMm !== undefined) where.push(gte(offcuts.lengthMm, q.minLengthMm));
   if (q.maxLengthMm !== undefined) where.push(lte(offcuts.lengthMm, q.maxLengthMm));
   if (q.location) where.push(eq(offcuts.location, q.location));
-  if (q.minAgeDays !== undefined) where.push(lte(offcuts.createdAt, new Date(now.getTime() - q.minAgeDays * 86_400_000)));
+  if (q.minAgeDays !== undefined)
+    where.push(lte(offcuts.createdAt, new Date(now.getTime() - q.minAgeDays * 86_400_000)));
   if (q.q) {
     const like = `%${escapeLike(q.q)}%`;
-    where.push(or(ilike(offcuts.tag, like), ilike(offcuts.location, like), ilike(offcuts.origin, like), ilike(sections.name, like))!);
+    where.push(
+      or(
+        ilike(offcuts.tag, like),
+        ilike(offcuts.location, like),
+        ilike(offcuts.origin, like),
+        ilike(sections.name, like),
+      )!,
+    );
   }
   return where;
 }
@@ -57,17 +65,42 @@ export async function listOffcuts({ query, now = new Date() }: { query: OffcutLi
       .orderBy(ascending ? asc(column) : desc(column), asc(offcuts.id))
       .limit(query.pageSize)
       .offset((query.page - 1) * query.pageSize),
-    db.select({ total: sql<number>`count(*)::int` }).from(offcuts).innerJoin(sections, eq(sections.id, offcuts.sectionId)).where(where),
+    db
+      .select({ total: sql<number>`count(*)::int` })
+      .from(offcuts)
+      .innerJoin(sections, eq(sections.id, offcuts.sectionId))
+      .where(where),
     db.selectDistinct({ location: offcuts.location }).from(offcuts).orderBy(asc(offcuts.location)),
   ]);
-  return { offcuts: rows, total, page: query.page, pageSize: query.pageSize, locations: locations.map((l) => l.location).filter(Boolean) };
+  return {
+    offcuts: rows,
+    total,
+    page: query.page,
+    pageSize: query.pageSize,
+    locations: locations.map((l) => l.location).filter(Boolean),
+  };
 }
 
 /** Every offcut matching the filters (no paging), for the CSV export. */
-export async function listOffcutsForExport({ query, now = new Date() }: { query: OffcutListQuery; now?: Date }) {
+export async function listOffcutsForExport({
+  query,
+  now = new Date(),
+}: {
+  query: OffcutListQuery;
+  now?: Date;
+}) {
   const db = await getDb();
   return db
-    .select({ tag: offcuts.tag, sectionName: sections.name, sectionCode: sections.code, lengthMm: offcuts.lengthMm, location: offcuts.location, status: offcuts.status, origin: offcuts.origin, createdAt: offcuts.createdAt })
+    .select({
+      tag: offcuts.tag,
+      sectionName: sections.name,
+      sectionCode: sections.code,
+      lengthMm: offcuts.lengthMm,
+      location: offcuts.location,
+      status: offcuts.status,
+      origin: offcuts.origin,
+      createdAt: offcuts.createdAt,
+    })
     .from(offcuts)
     .innerJoin(sections, eq(sections.id, offcuts.sectionId))
     .where(and(...filtersOf(query, now)))

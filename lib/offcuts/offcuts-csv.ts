@@ -14,6 +14,14 @@ export type ExportedOffcut = {
 export function offcutsToCsv(rows: ExportedOffcut[]): string {
   return Papa.unparse({
     fields: ['section', 'length', 'location', 'tag', 'status', 'origin', 'made'],
-    data: rows.map((o) => [o.sectionName, o.lengthMm, o.location, o.tag, o.status, o.origin, o.createdAt.toISOString().slice(0, 10)]),
+    data: rows.map((o) => [
+      o.sectionName,
+      o.lengthMm,
+      o.location,
+      o.tag,
+      o.status,
+      o.origin,
+      o.createdAt.toISOString().slice(0, 10),
+    ]),
   });
 }

@@ -19,16 +19,28 @@ export async function scrapOffcuts({ body, userId }: { body: ScrapOffcutsBody; u
     if (missing.length > 0) throw new AppError('not_found', `No offcut with id ${missing.join(', ')}.`);
     const blocked = rows.filter((r) => r.status !== 'available');
     if (blocked.length > 0) {
-      throw new AppError('conflict', `Only available offcuts can be scrapped: ${blocked.map((r) => `${r.tag} is ${r.status}`).join(', ')}.`);
+      throw new AppError(
+        'conflict',
+        `Only available offcuts can be scrapped: ${blocked.map((r) => `${r.tag} is ${r.status}`).join(', ')}.`,
+      );
     }
     // Scrap is valued at the section's cheapest price per metre, as in the reports.
     const perMetre = await getSectionPencePerMetre(tx);
     const now = new Date();
-    await tx.update(offcuts).set({ status: 'scrapped', scrapReason: body.reason, updatedAt: now }).where(inArray(offcuts.id, ids));
+    await tx
+      .update(offcuts)
+      .set({ status: 'scrapped', scrapReason: body.reason, updatedAt: now })
+      .where(inArray(offcuts.id, ids));
     await tx.insert(stockMovements).values(
       rows.map((o) => ({
-        at: now, kind: 'offcut_scrapped' as const, userId, sectionId: o.sectionId, offcutId: o.id, lengthMm: o.lengthMm,
-        valuePence: Math.round((o.lengthMm * (perMetre.get(o.sectionId) ?? 0)) / 1000), reason: body.reason,
+        at: now,
+        kind: 'offcut_scrapped' as const,
+        userId,
+        sectionId: o.sectionId,
+        offcutId: o.id,
+        lengthMm: o.lengthMm,
+        valuePence: Math.round((o.lengthMm * (perMetre.get(o.sectionId) ?? 0)) / 1000),
+        reason: body.reason,
       })),
     );
     return { scrapped: rows.length };

@@ -3,7 +3,13 @@ import type { SolveInput } from '@/solver';
 import { offcutSourceId, pieceIdFor, stockSourceId, type PlanSettings } from './plan-shapes';
 
 export type PlanningItem = { id: number; lengthMm: number; quantity: number };
-export type PlanningStock = { id: number; lengthMm: number; pricePence: number; onHand: number | null; active: boolean };
+export type PlanningStock = {
+  id: number;
+  lengthMm: number;
+  pricePence: number;
+  onHand: number | null;
+  active: boolean;
+};
 export type PlanningOffcut = { id: number; lengthMm: number };
 
 export function buildSolverInput({
@@ -32,7 +38,9 @@ export function buildSolverInput({
         // Plans stay within what is on hand (null: the yard treats the length as always available).
         available: s.onHand === null ? null : Math.max(0, s.onHand),
       })),
-    offcuts: settings.useOffcuts ? offcuts.map((o) => ({ id: offcutSourceId(o.id), length: o.lengthMm })) : [],
+    offcuts: settings.useOffcuts
+      ? offcuts.map((o) => ({ id: offcutSourceId(o.id), length: o.lengthMm }))
+      : [],
     pieces: items
       .filter((i) => i.quantity > 0)
       .map((i) => ({ id: pieceIdFor(i.id), length: i.lengthMm, quantity: i.quantity })),

@@ -2,7 +2,12 @@
 // price and the saw's board list. No database access, so the demo seed can use it too.
 import type { SolveInput, SolvePlan } from '@/solver';
 import { priceCuttingPlan } from '@/lib/pricing';
-import { buildSolverInput, type PlanningItem, type PlanningOffcut, type PlanningStock } from './build-solver-input';
+import {
+  buildSolverInput,
+  type PlanningItem,
+  type PlanningOffcut,
+  type PlanningStock,
+} from './build-solver-input';
 import type { PlanSection, PlanSettings } from './plan-shapes';
 import { planBoardRows, summarisePlan } from './summarise-plan';
 
@@ -32,13 +37,23 @@ export async function composePlan({
       offcuts: data.offcuts.filter((o) => o.sectionId === section.id),
       settings,
     });
-    planSections.push({ sectionId: section.id, sectionName: section.name, input, output: await solve(input) });
+    planSections.push({
+      sectionId: section.id,
+      sectionName: section.name,
+      input,
+      output: await solve(input),
+    });
   }
   const price = priceCuttingPlan({
     perCutCharge: perCutChargePence / 100,
     sections: planSections.map((s) => ({
       sectionName: s.sectionName,
-      boards: s.output.boards.map((b) => ({ source: b.source, length: b.length, cost: b.cost, cuts: b.pieces.length })),
+      boards: s.output.boards.map((b) => ({
+        source: b.source,
+        length: b.length,
+        cost: b.cost,
+        cuts: b.pieces.length,
+      })),
     })),
   });
   const labels = new Map(data.items.map((i) => [i.id, i.label]));

@@ -13,11 +13,22 @@ import { runSolver } from './run-solver';
 const DEFAULT_TIME_LIMIT_MS = 2_000;
 
 /** Plans a job section by section with the solver and stores the plan with its saw board list. */
-export async function createPlan({ jobId, overrides, userId }: { jobId: number; overrides: CreatePlanBody; userId: number }) {
+export async function createPlan({
+  jobId,
+  overrides,
+  userId,
+}: {
+  jobId: number;
+  overrides: CreatePlanBody;
+  userId: number;
+}) {
   const db = await getDb();
   const data = await loadPlanningData(db, jobId);
   if (['released', 'cutting', 'done', 'cancelled'].includes(data.job.status)) {
-    throw new AppError('conflict', `Job ${data.job.reference} is ${data.job.status}; only draft or planned jobs can be planned.`);
+    throw new AppError(
+      'conflict',
+      `Job ${data.job.reference} is ${data.job.status}; only draft or planned jobs can be planned.`,
+    );
   }
   if (data.items.length === 0) throw new AppError('invalid', 'The job has no line items to plan yet.');
   const yard = await getYardSettings(db);
@@ -30,7 +41,12 @@ export async function createPlan({ jobId, overrides, userId }: { jobId: number; 
     timeLimitMs: overrides.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS,
   };
 
-  const plan = await composePlan({ data, settings, perCutChargePence: yard.perCutChargePence, solve: runSolver });
+  const plan = await composePlan({
+    data,
+    settings,
+    perCutChargePence: yard.perCutChargePence,
+    solve: runSolver,
+  });
   const planId = await insertPlan(db, { jobId, settings, plan, userId });
   return getPlanById({ planId });
 }

@@ -11,7 +11,11 @@ export async function getPlanById({ planId }: { planId: number }) {
   const db = await getDb();
   const [plan] = await db.select().from(plans).where(eq(plans.id, planId));
   if (!plan) throw notFound('That plan');
-  const boards = await db.select().from(planBoards).where(eq(planBoards.planId, planId)).orderBy(asc(planBoards.boardNo));
+  const boards = await db
+    .select()
+    .from(planBoards)
+    .where(eq(planBoards.planId, planId))
+    .orderBy(asc(planBoards.boardNo));
   return {
     id: plan.id,
     jobId: plan.jobId,

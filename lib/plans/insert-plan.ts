@@ -10,7 +10,13 @@ type ComposedPlan = Awaited<ReturnType<typeof composePlan>>;
 
 export async function insertPlan(
   db: PgliteDatabase<typeof schema>,
-  { jobId, settings, plan, userId, createdAt }: { jobId: number; settings: PlanSettings; plan: ComposedPlan; userId: number; createdAt?: Date },
+  {
+    jobId,
+    settings,
+    plan,
+    userId,
+    createdAt,
+  }: { jobId: number; settings: PlanSettings; plan: ComposedPlan; userId: number; createdAt?: Date },
 ): Promise<number> {
   return db.transaction(async (tx) => {
     const [row] = await tx
@@ -30,7 +36,10 @@ export async function insertPlan(
     if (plan.boards.length) {
       await tx.insert(schema.planBoards).values(plan.boards.map((b) => ({ ...b, planId: row.id })));
     }
-    await tx.update(schema.jobs).set({ status: 'planned', updatedAt: new Date() }).where(eq(schema.jobs.id, jobId));
+    await tx
+      .update(schema.jobs)
+      .set({ status: 'planned', updatedAt: new Date() })
+      .where(eq(schema.jobs.id, jobId));
     return row.id;
   });
 }

@@ -7,7 +7,11 @@ import { notFound } from '@/lib/errors';
 export async function loadPlanningData(db: DbOrTx, jobId: number) {
   const [job] = await db.select().from(jobs).where(eq(jobs.id, jobId));
   if (!job) throw notFound('That job');
-  const items = await db.select().from(jobItems).where(eq(jobItems.jobId, jobId)).orderBy(asc(jobItems.position));
+  const items = await db
+    .select()
+    .from(jobItems)
+    .where(eq(jobItems.jobId, jobId))
+    .orderBy(asc(jobItems.position));
   const sectionIds = [...new Set(items.map((i) => i.sectionId))];
   if (sectionIds.length === 0) return { job, items, sections: [], stock: [], offcuts: [] };
   const [sectionRows, stockRows, offcutRows] = await Promise.all([

@@ -27,7 +27,9 @@ export function longestFirstBaseline(input: SolveInput): BaselineResult {
       capacity: usableOf(s.length) + kerf,
     }))
     .sort((a, b) => b.length - a.length);
-  const pieces = input.pieces.flatMap((p) => Array.from({ length: p.quantity }, () => p.length)).sort((a, b) => b - a);
+  const pieces = input.pieces
+    .flatMap((p) => Array.from({ length: p.quantity }, () => p.length))
+    .sort((a, b) => b - a);
 
   const boards: Board[] = [];
   for (const length of pieces) {
@@ -51,7 +53,9 @@ export function longestFirstBaseline(input: SolveInput): BaselineResult {
     board.source.left++;
     const chosen = stock
       .filter((s) => s.left > 0 && s.capacity >= board.load)
-      .reduce((best, s) => (s.cost < best.cost || (s.cost === best.cost && s.length < best.length) ? s : best));
+      .reduce((best, s) =>
+        s.cost < best.cost || (s.cost === best.cost && s.length < best.length) ? s : best,
+      );
     chosen.left--;
     cost += chosen.cost;
     // Cut pieces from one end: each is followed by a kerf unless it ends at (or the kerf runs off) the end.

@@ -44,7 +44,13 @@ export type PlanTotals = {
 };
 
 /** One piece of a board in cut order; markMm is where the cut falls, from the squared end. */
-export type BoardPiece = { pieceId: string; jobItemId: number; label: string; lengthMm: number; markMm: number };
+export type BoardPiece = {
+  pieceId: string;
+  jobItemId: number;
+  label: string;
+  lengthMm: number;
+  markMm: number;
+};
 
 /** Solver source ids: stock lengths and offcuts are told apart by prefix. */
 export const stockSourceId = (stockLengthId: number) => `S${stockLengthId}`;

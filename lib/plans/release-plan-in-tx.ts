@@ -9,7 +9,10 @@ export async function releasePlanInTx(tx: Tx, { planId, userId }: { planId: numb
   if (!plan) throw notFound('That plan');
   const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId));
   if (plan.status !== 'planned' || !['draft', 'planned'].includes(job.status)) {
-    throw new AppError('conflict', `This plan is ${plan.status} and job ${job.reference} is ${job.status}: it cannot be released.`);
+    throw new AppError(
+      'conflict',
+      `This plan is ${plan.status} and job ${job.reference} is ${job.status}: it cannot be released.`,
+    );
   }
   const boards = await tx.select().from(planBoards).where(eq(planBoards.planId, planId));
   const offcutIds = boards.flatMap((b) => (b.offcutId ? [b.offcutId] : []));

@@ -28,13 +28,15 @@ function priceOffcuts(sectionName: string, boards: PricedBoard[], perMetrePence:
   if (boards.length === 0) return [];
   const totalMm = boards.reduce((sum, board) => sum + board.length, 0);
   const pieces = `${boards.length} ${boards.length === 1 ? 'piece' : 'pieces'}`;
-  return [{
-    description: `${sectionName}, offcuts from the rack (${pieces})${perMetrePence === 0 ? ', no charge' : ''}`,
-    quantity: totalMm / 1000,
-    unit: 'metre',
-    unitPence: perMetrePence,
-    amountPence: Math.round((totalMm * perMetrePence) / 1000),
-  }];
+  return [
+    {
+      description: `${sectionName}, offcuts from the rack (${pieces})${perMetrePence === 0 ? ', no charge' : ''}`,
+      quantity: totalMm / 1000,
+      unit: 'metre',
+      unitPence: perMetrePence,
+      amountPence: Math.round((totalMm * perMetrePence) / 1000),
+    },
+  ];
 }
 
 function checkBoard(board: PricedBoard): void {
@@ -49,7 +51,11 @@ function checkBoard(board: PricedBoard): void {
  * (free when none is set), and a charge for every saw cut. Prices are before any tax; all sums are
  * made in whole pence and returned in pounds.
  */
-export function priceCuttingPlan({ sections, perCutCharge, offcutPricePerMetre }: PriceCuttingPlanInput): CuttingPlanPrice {
+export function priceCuttingPlan({
+  sections,
+  perCutCharge,
+  offcutPricePerMetre,
+}: PriceCuttingPlanInput): CuttingPlanPrice {
   const perCutPence = toPence(perCutCharge);
   const perMetrePence = offcutPricePerMetre == null ? 0 : toPence(offcutPricePerMetre);
   if (perCutPence < 0 || perMetrePence < 0) throw new RangeError('Charges cannot be negative.');
@@ -58,16 +64,38 @@ export function priceCuttingPlan({ sections, perCutCharge, offcutPricePerMetre }
   let cuts = 0;
   for (const { sectionName, boards } of sections) {
     boards.forEach(checkBoard);
-    lines.push(...priceStockBoards(sectionName, boards.filter((board) => board.source === 'stock')));
-    lines.push(...priceOffcuts(sectionName, boards.filter((board) => board.source === 'offcut'), perMetrePence));
+    lines.push(
+      ...priceStockBoards(
+        sectionName,
+        boards.filter((board) => board.source === 'stock'),
+      ),
+    );
+    lines.push(
+      ...priceOffcuts(
+        sectionName,
+        boards.filter((board) => board.source === 'offcut'),
+        perMetrePence,
+      ),
+    );
     cuts += boards.reduce((sum, board) => sum + board.cuts, 0);
   }
   const materialsPence = lines.reduce((sum, line) => sum + line.amountPence, 0);
   const cuttingPence = cuts * perCutPence;
-  if (cuts > 0) lines.push({ description: 'Cutting to length', quantity: cuts, unit: 'cut', unitPence: perCutPence, amountPence: cuttingPence });
+  if (cuts > 0)
+    lines.push({
+      description: 'Cutting to length',
+      quantity: cuts,
+      unit: 'cut',
+      unitPence: perCutPence,
+      amountPence: cuttingPence,
+    });
 
   return {
-    lines: lines.map(({ unitPence, amountPence, ...line }) => ({ ...line, unitPrice: toPounds(unitPence), amount: toPounds(amountPence) })),
+    lines: lines.map(({ unitPence, amountPence, ...line }) => ({
+      ...line,
+      unitPrice: toPounds(unitPence),
+      amount: toPounds(amountPence),
+    })),
     materials: toPounds(materialsPence),
     cutting: toPounds(cuttingPence),
     total: toPounds(materialsPence + cuttingPence),

@@ -12,9 +12,21 @@ export type FrameScheduleDto = {
   updatedAt: string;
   jobs: { id: number; reference: string; status: string }[];
 };
-export type FramePreviewDto = { unit: FrameUnit; panels: FrameSchedulePanel[]; items: FrameItem[]; warnings: string[]; notice: string };
-export type SaveFrameScheduleRequest = { name: string; customerName: string; unit: FrameUnit; panels: FrameSchedulePanelInput[] };
-export type SendToJobRequest = { jobId: number } | { newJob: { customerName: string; reference?: string; dueDate?: string } };
+export type FramePreviewDto = {
+  unit: FrameUnit;
+  panels: FrameSchedulePanel[];
+  items: FrameItem[];
+  warnings: string[];
+  notice: string;
+};
+export type SaveFrameScheduleRequest = {
+  name: string;
+  customerName: string;
+  unit: FrameUnit;
+  panels: FrameSchedulePanelInput[];
+};
+export type SendToJobRequest =
+  { jobId: number } | { newJob: { customerName: string; reference?: string; dueDate?: string } };
 
 export const frameScheduleQuery = (id: number) =>
   queryOptions({
@@ -26,15 +38,27 @@ export const previewFramesRequest = (body: { unit: FrameUnit; panels: FrameSched
   fetchJson<FramePreviewDto>('/api/frames/preview', { method: 'POST', body: JSON.stringify(body) });
 
 export const createFrameScheduleRequest = (body: Partial<SaveFrameScheduleRequest> & { name: string }) =>
-  fetchJson<{ schedule: FrameScheduleDto }>('/api/frames', { method: 'POST', body: JSON.stringify(body) }).then((r) => r.schedule);
+  fetchJson<{ schedule: FrameScheduleDto }>('/api/frames', {
+    method: 'POST',
+    body: JSON.stringify(body),
+  }).then((r) => r.schedule);
 
 export const saveFrameScheduleRequest = (id: number, body: SaveFrameScheduleRequest) =>
-  fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}`, { method: 'PUT', body: JSON.stringify(body) }).then((r) => r.schedule);
+  fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}`, {
+    method: 'PUT',
+    body: JSON.stringify(body),
+  }).then((r) => r.schedule);
 
 export const copyFrameScheduleRequest = (id: number) =>
-  fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}/copy`, { method: 'POST' }).then((r) => r.schedule);
+  fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}/copy`, { method: 'POST' }).then(
+    (r) => r.schedule,
+  );
 
-export const deleteFrameScheduleRequest = (id: number) => fetchJson<null>(`/api/frames/${id}`, { method: 'DELETE' });
+export const deleteFrameScheduleRequest = (id: number) =>
+  fetchJson<null>(`/api/frames/${id}`, { method: 'DELETE' });
 
 export const sendScheduleToJobRequest = (id: number, body: SendToJobRequest) =>
-  fetchJson<{ jobId: number; lineCount: number }>(`/api/frames/${id}/send-to-job`, { method: 'POST', body: JSON.stringify(body) });
+  fetchJson<{ jobId: number; lineCount: number }>(`/api/frames/${id}/send-to-job`, {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });

@@ -16,7 +16,11 @@ export type JobListRow = {
   pieceCount: number;
 };
 
-export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount'> & { notes: string; createdAt: string; updatedAt: string };
+export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount'> & {
+  notes: string;
+  createdAt: string;
+  updatedAt: string;
+};
 
 export type JobItemRow = {
   id: number;
@@ -54,7 +58,14 @@ export const jobsQuery = (filters: JobFilters) =>
 export const jobQuery = (jobId: number) =>
   queryOptions({ queryKey: ['job', jobId], queryFn: () => fetchJson<JobDetail>(`/api/jobs/${jobId}`) });
 
-export type JobDetailsBody = { customer?: string; reference?: string; dueDate?: string | null; customerEmail?: string; notes?: string; status?: 'cancelled' | 'draft' };
+export type JobDetailsBody = {
+  customer?: string;
+  reference?: string;
+  dueDate?: string | null;
+  customerEmail?: string;
+  notes?: string;
+  status?: 'cancelled' | 'draft';
+};
 
 export const createJobRequest = (body: JobDetailsBody) =>
   fetchJson<{ job: JobRecord }>('/api/jobs', { method: 'POST', body: JSON.stringify(body) });
@@ -62,7 +73,13 @@ export const createJobRequest = (body: JobDetailsBody) =>
 export const updateJobRequest = (jobId: number, body: JobDetailsBody) =>
   fetchJson<{ job: JobRecord }>(`/api/jobs/${jobId}`, { method: 'PATCH', body: JSON.stringify(body) });
 
-export type ItemBody = { sectionId?: number; length?: number | string; quantity?: number; label?: string; note?: string };
+export type ItemBody = {
+  sectionId?: number;
+  length?: number | string;
+  quantity?: number;
+  label?: string;
+  note?: string;
+};
 
 export const addItemRequest = (jobId: number, body: ItemBody) =>
   fetchJson(`/api/jobs/${jobId}/items`, { method: 'POST', body: JSON.stringify(body) });

@@ -3,15 +3,43 @@ import type { OffcutStatus } from '@/db/enums';
 import { fetchJson } from './fetch-json';
 
 export type OffcutRow = {
-  id: number; tag: string; sectionId: number; sectionName: string; lengthMm: number; location: string;
-  status: OffcutStatus; origin: string; scrapReason: string | null; createdAt: string;
+  id: number;
+  tag: string;
+  sectionId: number;
+  sectionName: string;
+  lengthMm: number;
+  location: string;
+  status: OffcutStatus;
+  origin: string;
+  scrapReason: string | null;
+  createdAt: string;
 };
-export type OffcutPage = { offcuts: OffcutRow[]; total: number; page: number; pageSize: number; locations: string[] };
+export type OffcutPage = {
+  offcuts: OffcutRow[];
+  total: number;
+  page: number;
+  pageSize: number;
+  locations: string[];
+};
 /** Filters as they sit in the URL: every value a string, empty meaning "any". */
-export type RackFilters = Record<'q' | 'sectionId' | 'minLengthMm' | 'maxLengthMm' | 'location' | 'minAgeDays' | 'status' | 'sort' | 'dir' | 'page', string>;
+export type RackFilters = Record<
+  | 'q'
+  | 'sectionId'
+  | 'minLengthMm'
+  | 'maxLengthMm'
+  | 'location'
+  | 'minAgeDays'
+  | 'status'
+  | 'sort'
+  | 'dir'
+  | 'page',
+  string
+>;
 
 export const rackQueryString = (filters: Partial<RackFilters>) =>
-  new URLSearchParams(Object.entries(filters).filter(([, v]) => v !== undefined && v !== '') as [string, string][]).toString();
+  new URLSearchParams(
+    Object.entries(filters).filter(([, v]) => v !== undefined && v !== '') as [string, string][],
+  ).toString();
 
 export const offcutsQuery = (filters: Partial<RackFilters>) =>
   queryOptions({
@@ -24,7 +52,13 @@ export const moveOffcutRequest = (offcutId: number, location: string) =>
   fetchJson(`/api/offcuts/${offcutId}`, { method: 'PATCH', body: JSON.stringify({ location }) });
 
 export const scrapOffcutsRequest = (ids: number[], reason: string) =>
-  fetchJson<{ scrapped: number }>('/api/offcuts/scrap', { method: 'POST', body: JSON.stringify({ ids, reason }) });
+  fetchJson<{ scrapped: number }>('/api/offcuts/scrap', {
+    method: 'POST',
+    body: JSON.stringify({ ids, reason }),
+  });
 
 export const importOffcutsRequest = (csv: string) =>
-  fetchJson<{ imported: number; tags: string[] }>('/api/offcuts/import', { method: 'POST', body: JSON.stringify({ csv }) });
+  fetchJson<{ imported: number; tags: string[] }>('/api/offcuts/import', {
+    method: 'POST',
+    body: JSON.stringify({ csv }),
+  });

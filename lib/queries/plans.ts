@@ -34,15 +34,23 @@ export type PlanViewData = {
 };
 
 export const planQuery = (planId: number) =>
-  queryOptions({ queryKey: ['plan', planId], queryFn: () => fetchJson<PlanViewData>(`/api/plans/${planId}`) });
+  queryOptions({
+    queryKey: ['plan', planId],
+    queryFn: () => fetchJson<PlanViewData>(`/api/plans/${planId}`),
+  });
 
 export type PlanOverrides = Partial<PlanSettings>;
 
 export const createPlanRequest = (jobId: number, overrides: PlanOverrides = {}) =>
   fetchJson<PlanViewData>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: JSON.stringify(overrides) });
 
-export const releasePlanRequest = (planId: number) => fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, { method: 'POST' });
-export const unreleasePlanRequest = (planId: number) => fetchJson<{ planId: number }>(`/api/plans/${planId}/unrelease`, { method: 'POST' });
+export const releasePlanRequest = (planId: number) =>
+  fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, { method: 'POST' });
+export const unreleasePlanRequest = (planId: number) =>
+  fetchJson<{ planId: number }>(`/api/plans/${planId}/unrelease`, { method: 'POST' });
 
 export const emailPlanRequest = (planId: number, body: { to?: string; message?: string }) =>
-  fetchJson<{ sent: boolean; to: string }>(`/api/plans/${planId}/email`, { method: 'POST', body: JSON.stringify(body) });
+  fetchJson<{ sent: boolean; to: string }>(`/api/plans/${planId}/email`, {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });

@@ -59,7 +59,10 @@ export type DefectAnswer = {
 };
 
 export const reportDefectRequest = (planId: number, boardNo: number, body: ReportDefectBody) =>
-  fetchJson<DefectAnswer>(`/api/plans/${planId}/boards/${boardNo}/defect`, { method: 'POST', body: JSON.stringify(body) });
+  fetchJson<DefectAnswer>(`/api/plans/${planId}/boards/${boardNo}/defect`, {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });
 
 export const findOffcutRequest = (tag: string) =>
   fetchJson<{ offcut: OffcutBrief }>(`/api/saw/offcuts?tag=${encodeURIComponent(tag)}`).then((r) => r.offcut);

@@ -22,7 +22,12 @@ export const sectionsQuery = () =>
       fetchJson<{ sections: CatalogueSection[] }>('/api/sections').then((r) =>
         r.sections
           .filter((s) => s.active)
-          .map((s) => ({ id: s.id, code: s.code, name: s.name, stockLengths: s.lengths.filter((l) => l.active) })),
+          .map((s) => ({
+            id: s.id,
+            code: s.code,
+            name: s.name,
+            stockLengths: s.lengths.filter((l) => l.active),
+          })),
       ),
     staleTime: 5 * 60_000,
   });

@@ -1,27 +1,63 @@
 import { queryOptions } from '@tanstack/react-query';
 import { fetchJson } from './fetch-json';
 
-export type StockLengthRow = { id: number; lengthMm: number; pricePence: number; onHand: number | null; active: boolean };
+export type StockLengthRow = {
+  id: number;
+  lengthMm: number;
+  pricePence: number;
+  onHand: number | null;
+  active: boolean;
+};
 export type SectionRow = {
-  id: number; code: string; name: string; thicknessMm: number; widthMm: number; species: string; grade: string; treatment: string; active: boolean;
+  id: number;
+  code: string;
+  name: string;
+  thicknessMm: number;
+  widthMm: number;
+  species: string;
+  grade: string;
+  treatment: string;
+  active: boolean;
   lengths: StockLengthRow[];
 };
-export type MovementRow = { id: number; at: string; kind: string; sectionName: string; lengthMm: number; quantityDelta: number; reason: string; userName: string | null };
+export type MovementRow = {
+  id: number;
+  at: string;
+  kind: string;
+  sectionName: string;
+  lengthMm: number;
+  quantityDelta: number;
+  reason: string;
+  userName: string | null;
+};
 export type SectionInput = Omit<SectionRow, 'id' | 'lengths'> & {
   lengths: { id?: number; lengthMm: number; pricePence: number; unlimited: boolean; active: boolean }[];
 };
 
 export const sectionsQuery = () =>
-  queryOptions({ queryKey: ['sections'], queryFn: () => fetchJson<{ sections: SectionRow[] }>('/api/sections').then((r) => r.sections) });
+  queryOptions({
+    queryKey: ['sections'],
+    queryFn: () => fetchJson<{ sections: SectionRow[] }>('/api/sections').then((r) => r.sections),
+  });
 
 export const stockMovementsQuery = () =>
-  queryOptions({ queryKey: ['stock-movements'], queryFn: () => fetchJson<{ movements: MovementRow[] }>('/api/stock/movements').then((r) => r.movements) });
+  queryOptions({
+    queryKey: ['stock-movements'],
+    queryFn: () => fetchJson<{ movements: MovementRow[] }>('/api/stock/movements').then((r) => r.movements),
+  });
 
-export const receiveStockRequest = (body: { reference: string; lines: { stockLengthId: number; quantity: number }[] }) =>
-  fetchJson('/api/stock/receipts', { method: 'POST', body: JSON.stringify(body) });
+export const receiveStockRequest = (body: {
+  reference: string;
+  lines: { stockLengthId: number; quantity: number }[];
+}) => fetchJson('/api/stock/receipts', { method: 'POST', body: JSON.stringify(body) });
 
-export const stocktakeRequest = (body: { reason: string; counts: { stockLengthId: number; counted: number }[] }) =>
-  fetchJson('/api/stock/stocktakes', { method: 'POST', body: JSON.stringify(body) });
+export const stocktakeRequest = (body: {
+  reason: string;
+  counts: { stockLengthId: number; counted: number }[];
+}) => fetchJson('/api/stock/stocktakes', { method: 'POST', body: JSON.stringify(body) });
 
 export const saveSectionRequest = (sectionId: number | null, body: SectionInput) =>
-  fetchJson(sectionId ? `/api/sections/${sectionId}` : '/api/sections', { method: sectionId ? 'PATCH' : 'POST', body: JSON.stringify(body) });
+  fetchJson(sectionId ? `/api/sections/${sectionId}` : '/api/sections', {
+    method: sectionId ? 'PATCH' : 'POST',
+    body: JSON.stringify(body),
+  });

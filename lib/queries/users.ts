@@ -11,7 +11,10 @@ export const usersQuery = () =>
   });
 
 export function updateUserRequest(userId: number, changes: Partial<UserRow> & { password?: string }) {
-  return fetchJson<{ user: UserRow }>(`/api/users/${userId}`, { method: 'PATCH', body: JSON.stringify(changes) });
+  return fetchJson<{ user: UserRow }>(`/api/users/${userId}`, {
+    method: 'PATCH',
+    body: JSON.stringify(changes),
+  });
 }
 
 export function createUserRequest(body: { email: string; name: string; role: Role; password: string }) {

@@ -2,7 +2,16 @@
 import 'server-only';
 import { and, eq, gte, inArray, lt, ne } from 'drizzle-orm';
 import { getDb } from '@/db';
-import { jobs, offcuts, planBoards, plans, sections, stockLengths, stockMovements, yardSettings } from '@/db/schema';
+import {
+  jobs,
+  offcuts,
+  planBoards,
+  plans,
+  sections,
+  stockLengths,
+  stockMovements,
+  yardSettings,
+} from '@/db/schema';
 import type { BoardPiece, PlanTotals } from '@/lib/plans/plan-shapes';
 import { getSectionPencePerMetre } from '@/lib/stock/section-prices';
 import { computeOffcutReport, type OffcutMovementRow } from './offcut-report';
@@ -16,14 +25,34 @@ export async function getWasteReport(range: ReportRange) {
   const { start, end } = rangeBounds(range);
   const [boardRows, movements, perMetre] = await Promise.all([
     db
-      .select({ doneAt: planBoards.doneAt, sectionId: planBoards.sectionId, sectionName: sections.name, lengthMm: planBoards.lengthMm, pieces: planBoards.pieces, remainderMm: planBoards.remainderMm, keepRemainder: planBoards.keepRemainder })
+      .select({
+        doneAt: planBoards.doneAt,
+        sectionId: planBoards.sectionId,
+        sectionName: sections.name,
+        lengthMm: planBoards.lengthMm,
+        pieces: planBoards.pieces,
+        remainderMm: planBoards.remainderMm,
+        keepRemainder: planBoards.keepRemainder,
+      })
       .from(planBoards)
       .innerJoin(sections, eq(sections.id, planBoards.sectionId))
       .where(and(eq(planBoards.status, 'done'), gte(planBoards.doneAt, start), lt(planBoards.doneAt, end))),
     db
-      .select({ at: stockMovements.at, kind: stockMovements.kind, quantityDelta: stockMovements.quantityDelta, lengthMm: stockMovements.lengthMm, valuePence: stockMovements.valuePence })
+      .select({
+        at: stockMovements.at,
+        kind: stockMovements.kind,
+        quantityDelta: stockMovements.quantityDelta,
+        lengthMm: stockMovements.lengthMm,
+        valuePence: stockMovements.valuePence,
+      })
       .from(stockMovements)
-      .where(and(inArray(stockMovements.kind, ['receipt', 'stock_cut']), gte(stockMovements.at, start), lt(stockMovements.at, end))),
+      .where(
+        and(
+          inArray(stockMovements.kind, ['receipt', 'stock_cut']),
+          gte(stockMovements.at, start),
+          lt(stockMovements.at, end),
+        ),
+      ),
     getSectionPencePerMetre(db),
   ]);
   const boards = boardRows.map((b) => ({
@@ -45,9 +74,23 @@ export async function getOffcutReport(range: ReportRange, now = new Date()) {
     db
       .select({ at: stockMovements.at, kind: stockMovements.kind, lengthMm: stockMovements.lengthMm })
       .from(stockMovements)
-      .where(and(inArray(stockMovements.kind, ['offcut_made', 'offcut_used', 'offcut_scrapped']), gte(stockMovements.at, start), lt(stockMovements.at, end))),
+      .where(
+        and(
+          inArray(stockMovements.kind, ['offcut_made', 'offcut_used', 'offcut_scrapped']),
+          gte(stockMovements.at, start),
+          lt(stockMovements.at, end),
+        ),
+      ),
     db
-      .select({ id: offcuts.id, tag: offcuts.tag, sectionId: offcuts.sectionId, sectionName: sections.name, lengthMm: offcuts.lengthMm, location: offcuts.location, createdAt: offcuts.createdAt })
+      .select({
+        id: offcuts.id,
+        tag: offcuts.tag,
+        sectionId: offcuts.sectionId,
+        sectionName: sections.name,
+        lengthMm: offcuts.lengthMm,
+        location: offcuts.location,
+        createdAt: offcuts.createdAt,
+      })
       .from(offcuts)
       .innerJoin(sections, eq(sections.id, offcuts.sectionId))
       .where(inArray(offcuts.status, ['available', 'reserved'])),
@@ -55,22 +98,41 @@ export async function getOffcutReport(range: ReportRange, now = new Date()) {
     db.select({ days: yardSettings.clearOffcutsAfterDays }).from(yardSettings),
   ]);
   const rack = rackRows.map((o) => ({ ...o, pencePerMetre: perMetre.get(o.sectionId) ?? 0 }));
-  return computeOffcutReport({ movements: movements as OffcutMovementRow[], rack, start, end, now, clearAfterDays: settings?.days ?? 90 });
+  return computeOffcutReport({
+    movements: movements as OffcutMovementRow[],
+    rack,
+    start,
+    end,
+    now,
+    clearAfterDays: settings?.days ?? 90,
+  });
 }
 
 export async function getSavingsReport(range: ReportRange) {
   const db = await getDb();
   const { start, end } = rangeBounds(range);
   const rows = await db
-    .select({ planId: plans.id, plannedAt: plans.createdAt, totals: plans.totals, jobReference: jobs.reference, customerName: jobs.customerName })
+    .select({
+      planId: plans.id,
+      plannedAt: plans.createdAt,
+      totals: plans.totals,
+      jobReference: jobs.reference,
+      customerName: jobs.customerName,
+    })
     .from(plans)
     .innerJoin(jobs, eq(jobs.id, plans.jobId))
     .where(and(ne(plans.status, 'superseded'), gte(plans.createdAt, start), lt(plans.createdAt, end)));
   const planRows = rows.map((r) => {
     const t = r.totals as PlanTotals;
     return {
-      planId: r.planId, jobReference: r.jobReference, customerName: r.customerName, plannedAt: r.plannedAt,
-      stockBoards: t.stockBoards, stockCostPence: t.stockCostPence, baselineBoards: t.baseline.boards, baselineCostPence: t.baseline.stockCostPence,
+      planId: r.planId,
+      jobReference: r.jobReference,
+      customerName: r.customerName,
+      plannedAt: r.plannedAt,
+      stockBoards: t.stockBoards,
+      stockCostPence: t.stockCostPence,
+      baselineBoards: t.baseline.boards,
+      baselineCostPence: t.baseline.stockCostPence,
     };
   });
   return computeSavingsReport({ plans: planRows, start, end });
@@ -81,13 +143,26 @@ export async function getStockReport(range: ReportRange) {
   const { start, end } = rangeBounds(range);
   const [lengths, cuts] = await Promise.all([
     db
-      .select({ stockLengthId: stockLengths.id, sectionName: sections.name, lengthMm: stockLengths.lengthMm, onHand: stockLengths.onHand, active: stockLengths.active })
+      .select({
+        stockLengthId: stockLengths.id,
+        sectionName: sections.name,
+        lengthMm: stockLengths.lengthMm,
+        onHand: stockLengths.onHand,
+        active: stockLengths.active,
+      })
       .from(stockLengths)
       .innerJoin(sections, eq(sections.id, stockLengths.sectionId)),
     db
       .select({ at: stockMovements.at, stockLengthId: stockMovements.stockLengthId })
       .from(stockMovements)
-      .where(and(eq(stockMovements.kind, 'stock_cut'), gte(stockMovements.at, start), lt(stockMovements.at, end))),
+      .where(
+        and(eq(stockMovements.kind, 'stock_cut'), gte(stockMovements.at, start), lt(stockMovements.at, end)),
+      ),
   ]);
-  return computeStockReport({ lengths, cuts: cuts.filter((c) => c.stockLengthId !== null) as { at: Date; stockLengthId: number }[], start, end });
+  return computeStockReport({
+    lengths,
+    cuts: cuts.filter((c) => c.stockLengthId !== null) as { at: Date; stockLengthId: number }[],
+    start,
+    end,
+  });
 }

@@ -1,7 +1,11 @@
 // The offcut rack over time: made versus used each week, what lies on the rack now, and how old it is.
 import { daysBetween, weekStartOf, weekStartsBetween } from './week';
 
-export type OffcutMovementRow = { at: Date; kind: 'offcut_made' | 'offcut_used' | 'offcut_scrapped'; lengthMm: number };
+export type OffcutMovementRow = {
+  at: Date;
+  kind: 'offcut_made' | 'offcut_used' | 'offcut_scrapped';
+  lengthMm: number;
+};
 
 /** An offcut on the rack now (available or reserved). */
 export type RackOffcutRow = {
@@ -14,17 +18,39 @@ export type RackOffcutRow = {
   pencePerMetre: number;
 };
 
-export type OffcutWeek = { week: string; madeCount: number; madeMm: number; usedCount: number; usedMm: number; scrappedCount: number };
+export type OffcutWeek = {
+  week: string;
+  madeCount: number;
+  madeMm: number;
+  usedCount: number;
+  usedMm: number;
+  scrappedCount: number;
+};
 export type RackSection = { sectionName: string; count: number; lengthMm: number; valuePence: number };
 export type AgeBucket = { label: string; count: number; lengthMm: number };
-export type OldOffcut = { id: number; tag: string; sectionName: string; lengthMm: number; location: string; ageDays: number; clearSuggested: boolean };
+export type OldOffcut = {
+  id: number;
+  tag: string;
+  sectionName: string;
+  lengthMm: number;
+  location: string;
+  ageDays: number;
+  clearSuggested: boolean;
+};
 
 export type OffcutReport = {
   weekly: OffcutWeek[];
   rackBySection: RackSection[];
   ageHistogram: AgeBucket[];
   oldest: OldOffcut[];
-  totals: { made: number; used: number; scrapped: number; rackCount: number; rackMm: number; rackValuePence: number };
+  totals: {
+    made: number;
+    used: number;
+    scrapped: number;
+    rackCount: number;
+    rackMm: number;
+    rackValuePence: number;
+  };
 };
 
 export const AGE_BUCKETS: { label: string; maxDays: number }[] = [
@@ -73,7 +99,13 @@ export function computeOffcutReport({
   const sections = new Map<string, RackSection & { exact: number }>();
   const buckets = AGE_BUCKETS.map((b) => ({ label: b.label, count: 0, lengthMm: 0 }));
   for (const o of rack) {
-    const s = sections.get(o.sectionName) ?? { sectionName: o.sectionName, count: 0, lengthMm: 0, valuePence: 0, exact: 0 };
+    const s = sections.get(o.sectionName) ?? {
+      sectionName: o.sectionName,
+      count: 0,
+      lengthMm: 0,
+      valuePence: 0,
+      exact: 0,
+    };
     s.count++;
     s.lengthMm += o.lengthMm;
     s.exact += (o.lengthMm * o.pencePerMetre) / 1000;
@@ -92,7 +124,15 @@ export function computeOffcutReport({
     .slice(0, oldestCount)
     .map((o) => {
       const ageDays = daysBetween(o.createdAt, now);
-      return { id: o.id, tag: o.tag, sectionName: o.sectionName, lengthMm: o.lengthMm, location: o.location, ageDays, clearSuggested: ageDays >= clearAfterDays };
+      return {
+        id: o.id,
+        tag: o.tag,
+        sectionName: o.sectionName,
+        lengthMm: o.lengthMm,
+        location: o.location,
+        ageDays,
+        clearSuggested: ageDays >= clearAfterDays,
+      };
     });
 
   const weekly = [...weeks.values()];

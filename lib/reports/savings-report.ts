@@ -10,14 +10,34 @@ export type PlannedJobRow = {
   baselineCostPence: number;
 };
 
-export type SavingsLine = PlannedJobRow & { savedBoards: number; savedPence: number; runningSavedPence: number };
+export type SavingsLine = PlannedJobRow & {
+  savedBoards: number;
+  savedPence: number;
+  runningSavedPence: number;
+};
 
 export type SavingsReport = {
   jobs: SavingsLine[];
-  totals: { jobs: number; stockBoards: number; baselineBoards: number; savedBoards: number; stockCostPence: number; baselineCostPence: number; savedPence: number };
+  totals: {
+    jobs: number;
+    stockBoards: number;
+    baselineBoards: number;
+    savedBoards: number;
+    stockCostPence: number;
+    baselineCostPence: number;
+    savedPence: number;
+  };
 };
 
-export function computeSavingsReport({ plans, start, end }: { plans: PlannedJobRow[]; start: Date; end: Date }): SavingsReport {
+export function computeSavingsReport({
+  plans,
+  start,
+  end,
+}: {
+  plans: PlannedJobRow[];
+  start: Date;
+  end: Date;
+}): SavingsReport {
   let running = 0;
   const jobs = plans
     .filter((p) => p.plannedAt >= start && p.plannedAt < end)
@@ -27,8 +47,15 @@ export function computeSavingsReport({ plans, start, end }: { plans: PlannedJobR
       running += savedPence;
       return { ...p, savedBoards: p.baselineBoards - p.stockBoards, savedPence, runningSavedPence: running };
     });
-  const sum = (key: 'stockBoards' | 'baselineBoards' | 'savedBoards' | 'stockCostPence' | 'baselineCostPence' | 'savedPence') =>
-    jobs.reduce((n, j) => n + j[key], 0);
+  const sum = (
+    key:
+      | 'stockBoards'
+      | 'baselineBoards'
+      | 'savedBoards'
+      | 'stockCostPence'
+      | 'baselineCostPence'
+      | 'savedPence',
+  ) => jobs.reduce((n, j) => n + j[key], 0);
   return {
     jobs,
     totals: {

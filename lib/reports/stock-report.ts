@@ -1,5 +1,11 @@
 // Stock on hand against how fast the saw uses it, and the lengths that will run short.
-export type StockLengthRow = { stockLengthId: number; sectionName: string; lengthMm: number; onHand: number | null; active: boolean };
+export type StockLengthRow = {
+  stockLengthId: number;
+  sectionName: string;
+  lengthMm: number;
+  onHand: number | null;
+  active: boolean;
+};
 export type StockCutRow = { at: Date; stockLengthId: number };
 
 export type StockLine = StockLengthRow & {
@@ -15,7 +21,17 @@ export type StockReport = { lines: StockLine[]; short: StockLine[]; weeks: numbe
 /** A counted length with less than this many weeks of cover is flagged (yard rule of thumb, our default). */
 export const SHORT_COVER_WEEKS = 3;
 
-export function computeStockReport({ lengths, cuts, start, end }: { lengths: StockLengthRow[]; cuts: StockCutRow[]; start: Date; end: Date }): StockReport {
+export function computeStockReport({
+  lengths,
+  cuts,
+  start,
+  end,
+}: {
+  lengths: StockLengthRow[];
+  cuts: StockCutRow[];
+  start: Date;
+  end: Date;
+}): StockReport {
   const weeks = Math.max(1, (end.getTime() - start.getTime()) / (7 * 86_400_000));
   const used = new Map<number, number>();
   for (const c of cuts) {
@@ -26,8 +42,10 @@ export function computeStockReport({ lengths, cuts, start, end }: { lengths: Sto
     .map((l) => {
       const n = used.get(l.stockLengthId) ?? 0;
       const usedPerWeek = Math.round((n / weeks) * 10) / 10;
-      const weeksOfCover = l.onHand === null || n === 0 ? null : Math.round((l.onHand / (n / weeks)) * 10) / 10;
-      const short = l.onHand !== null && (l.onHand === 0 || (weeksOfCover !== null && weeksOfCover < SHORT_COVER_WEEKS));
+      const weeksOfCover =
+        l.onHand === null || n === 0 ? null : Math.round((l.onHand / (n / weeks)) * 10) / 10;
+      const short =
+        l.onHand !== null && (l.onHand === 0 || (weeksOfCover !== null && weeksOfCover < SHORT_COVER_WEEKS));
       return { ...l, used: n, usedPerWeek, weeksOfCover, short };
     })
     .sort((a, b) => a.sectionName.localeCompare(b.sectionName) || a.lengthMm - b.lengthMm);

@@ -33,7 +33,13 @@ export type WasteFigures = {
   yieldPercent: number;
 };
 
-export type CutVersusBought = { week: string; cutMm: number; cutPence: number; boughtMm: number; boughtPence: number };
+export type CutVersusBought = {
+  week: string;
+  cutMm: number;
+  cutPence: number;
+  boughtMm: number;
+  boughtPence: number;
+};
 
 export type WasteReport = {
   weekly: (WasteFigures & { week: string })[];
@@ -43,7 +49,9 @@ export type WasteReport = {
 };
 
 /** Waste on a board = trim + kerfs + a remainder too short to keep = length − pieces − kept remainder. */
-export function boardWasteMm(b: Pick<DoneBoardRow, 'lengthMm' | 'pieceMm' | 'remainderMm' | 'keepRemainder'>): number {
+export function boardWasteMm(
+  b: Pick<DoneBoardRow, 'lengthMm' | 'pieceMm' | 'remainderMm' | 'keepRemainder'>,
+): number {
   return b.lengthMm - b.pieceMm - (b.keepRemainder ? b.remainderMm : 0);
 }
 
@@ -53,8 +61,22 @@ export function yieldPercent(pieceMm: number, materialMm: number, keptMm: number
   return used > 0 ? Math.round((1000 * pieceMm) / used) / 10 : 0;
 }
 
-type Sum = { boards: number; materialMm: number; pieceMm: number; keptMm: number; wasteMm: number; wastePenceExact: number };
-const emptySum = (): Sum => ({ boards: 0, materialMm: 0, pieceMm: 0, keptMm: 0, wasteMm: 0, wastePenceExact: 0 });
+type Sum = {
+  boards: number;
+  materialMm: number;
+  pieceMm: number;
+  keptMm: number;
+  wasteMm: number;
+  wastePenceExact: number;
+};
+const emptySum = (): Sum => ({
+  boards: 0,
+  materialMm: 0,
+  pieceMm: 0,
+  keptMm: 0,
+  wasteMm: 0,
+  wastePenceExact: 0,
+});
 
 function add(sum: Sum, b: DoneBoardRow): void {
   const waste = boardWasteMm(b);
@@ -68,7 +90,11 @@ function add(sum: Sum, b: DoneBoardRow): void {
 
 function figures(sum: Sum): WasteFigures {
   const { wastePenceExact, ...rest } = sum;
-  return { ...rest, wastePence: Math.round(wastePenceExact), yieldPercent: yieldPercent(sum.pieceMm, sum.materialMm, sum.keptMm) };
+  return {
+    ...rest,
+    wastePence: Math.round(wastePenceExact),
+    yieldPercent: yieldPercent(sum.pieceMm, sum.materialMm, sum.keptMm),
+  };
 }
 
 export function computeWasteReport({
@@ -96,7 +122,9 @@ export function computeWasteReport({
     add(total, b);
   }
 
-  const flows = new Map(weeks.map((week) => [week, { week, cutMm: 0, cutPence: 0, boughtMm: 0, boughtPence: 0 }]));
+  const flows = new Map(
+    weeks.map((week) => [week, { week, cutMm: 0, cutPence: 0, boughtMm: 0, boughtPence: 0 }]),
+  );
   for (const m of movements) {
     if (!inRange(m.at)) continue;
     const flow = flows.get(weekStartOf(m.at))!;

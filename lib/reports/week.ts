@@ -18,4 +18,5 @@ export function weekStartsBetween(from: Date, to: Date): string[] {
   return weeks;
 }
 
-export const daysBetween = (earlier: Date, later: Date) => Math.floor((later.getTime() - earlier.getTime()) / DAY_MS);
+export const daysBetween = (earlier: Date, later: Date) =>
+  Math.floor((later.getTime() - earlier.getTime()) / DAY_MS);

@@ -29,16 +29,32 @@ export async function confirmBoard({
     const { plan, job, board } = await loadBoardForSaw(tx, { planId, boardNo });
     if (board.status === 'done') {
       const progress = await planProgress(tx, planId);
-      const [made] = board.newOffcutId ? await tx.select().from(offcuts).where(eq(offcuts.id, board.newOffcutId)) : [];
-      return { boardNo, alreadyDone: true, newOffcut: made ? { id: made.id, tag: made.tag } : null, ...progress };
+      const [made] = board.newOffcutId
+        ? await tx.select().from(offcuts).where(eq(offcuts.id, board.newOffcutId))
+        : [];
+      return {
+        boardNo,
+        alreadyDone: true,
+        newOffcut: made ? { id: made.id, tag: made.tag } : null,
+        ...progress,
+      };
     }
-    if (board.status === 'defective') throw new AppError('conflict', `Board ${boardNo} was reported defective; it cannot be confirmed.`);
+    if (board.status === 'defective')
+      throw new AppError('conflict', `Board ${boardNo} was reported defective; it cannot be confirmed.`);
     assertAtSaw(plan, job);
 
     const at = new Date();
     const where = `job ${job.reference}, board ${boardNo}`;
     if (board.source === 'stock' && board.stockLengthId) {
-      await recordStockCut(tx, { stockLengthId: board.stockLengthId, sectionId: board.sectionId, planId, jobId: job.id, userId, at, reason: `Cut for ${where}` });
+      await recordStockCut(tx, {
+        stockLengthId: board.stockLengthId,
+        sectionId: board.sectionId,
+        planId,
+        jobId: job.id,
+        userId,
+        at,
+        reason: `Cut for ${where}`,
+      });
     }
     if (board.source === 'offcut' && board.offcutId) {
       const [used] = await tx
@@ -46,7 +62,11 @@ export async function confirmBoard({
         .set({ status: 'used', reservedByPlanId: null, updatedAt: at })
         .where(and(eq(offcuts.id, board.offcutId), eq(offcuts.reservedByPlanId, planId)))
         .returning();
-      if (!used) throw new AppError('conflict', `The offcut for board ${boardNo} is no longer reserved for this plan.`);
+      if (!used)
+        throw new AppError(
+          'conflict',
+          `The offcut for board ${boardNo} is no longer reserved for this plan.`,
+        );
       await tx.insert(stockMovements).values({
         at,
         kind: 'offcut_used',
@@ -77,6 +97,11 @@ export async function confirmBoard({
       .set({ status: 'done', doneAt: at, doneBy: userId, newOffcutId: made?.id ?? null })
       .where(eq(planBoards.id, board.id));
     const progress = await settlePlanStatus(tx, { planId, jobId: job.id });
-    return { boardNo, alreadyDone: false, newOffcut: made ? { id: made.id, tag: made.tag } : null, ...progress };
+    return {
+      boardNo,
+      alreadyDone: false,
+      newOffcut: made ? { id: made.id, tag: made.tag } : null,
+      ...progress,
+    };
   });
 }

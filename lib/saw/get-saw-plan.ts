@@ -13,13 +13,21 @@ export async function getSawPlan({ planId }: { planId: number }) {
   const [plan] = await db.select().from(plans).where(eq(plans.id, planId));
   if (!plan) throw notFound('That plan');
   const [job] = await db.select().from(jobs).where(eq(jobs.id, plan.jobId));
-  const boards = await db.select().from(planBoards).where(eq(planBoards.planId, planId)).orderBy(asc(planBoards.boardNo));
+  const boards = await db
+    .select()
+    .from(planBoards)
+    .where(eq(planBoards.planId, planId))
+    .orderBy(asc(planBoards.boardNo));
   const sectionIds = [...new Set(boards.map((b) => b.sectionId))];
-  const offcutIds = boards.flatMap((b) => [b.offcutId, b.newOffcutId]).filter((id): id is number => id !== null);
+  const offcutIds = boards
+    .flatMap((b) => [b.offcutId, b.newOffcutId])
+    .filter((id): id is number => id !== null);
   const [sectionRows, offcutRows, stockRows, yard] = await Promise.all([
     sectionIds.length ? db.select().from(sections).where(inArray(sections.id, sectionIds)) : [],
     offcutIds.length ? db.select().from(offcuts).where(inArray(offcuts.id, offcutIds)) : [],
-    sectionIds.length ? db.select().from(stockLengths).where(inArray(stockLengths.sectionId, sectionIds)) : [],
+    sectionIds.length
+      ? db.select().from(stockLengths).where(inArray(stockLengths.sectionId, sectionIds))
+      : [],
     getYardSettings(db),
   ]);
   const offcutBrief = (id: number | null) => {
@@ -32,13 +40,24 @@ export async function getSawPlan({ planId }: { planId: number }) {
     status: plan.status,
     kerfMm: settings.kerfMm,
     displayUnit: yard.displayUnit,
-    job: { id: job.id, reference: job.reference, customerName: job.customerName, dueDate: job.dueDate, status: job.status, officeFlag: job.officeFlag },
+    job: {
+      id: job.id,
+      reference: job.reference,
+      customerName: job.customerName,
+      dueDate: job.dueDate,
+      status: job.status,
+      officeFlag: job.officeFlag,
+    },
     progress: await planProgress(db, planId),
     boards: boards.map((b) => {
       const section = sectionRows.find((s) => s.id === b.sectionId)!;
       return {
         boardNo: b.boardNo,
-        section: { id: section.id, name: section.name, treated: /treat/i.test(section.treatment) && !/untreated/i.test(section.treatment) },
+        section: {
+          id: section.id,
+          name: section.name,
+          treated: /treat/i.test(section.treatment) && !/untreated/i.test(section.treatment),
+        },
         source: b.source,
         stockLengthMm: stockRows.find((s) => s.id === b.stockLengthId)?.lengthMm ?? null,
         offcut: offcutBrief(b.offcutId),

@@ -31,7 +31,12 @@ export async function getSawQueue() {
           done: sql<number>`count(*) filter (where ${planBoards.status} <> 'pending')::int`,
         })
         .from(planBoards)
-        .where(inArray(planBoards.planId, rows.map((r) => r.planId)))
+        .where(
+          inArray(
+            planBoards.planId,
+            rows.map((r) => r.planId),
+          ),
+        )
         .groupBy(planBoards.planId)
     : [];
   return rows.map(({ sections, ...r }) => {

@@ -24,6 +24,9 @@ export async function loadBoardForSaw(tx: Tx, { planId, boardNo }: { planId: num
 /** Only a plan at the saw (released, or done for a repeated confirmation) can have boards cut. */
 export function assertAtSaw(plan: { status: string }, job: { reference: string; status: string }) {
   if (plan.status !== 'released') {
-    throw new AppError('conflict', `This plan is ${plan.status}, not at the saw. Job ${job.reference} is ${job.status}.`);
+    throw new AppError(
+      'conflict',
+      `This plan is ${plan.status}, not at the saw. Job ${job.reference} is ${job.status}.`,
+    );
   }
 }

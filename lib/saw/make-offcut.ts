@@ -8,7 +8,16 @@ export const DEFAULT_OFFCUT_LOCATION = 'Rack intake';
 
 export async function makeOffcut(
   tx: Tx,
-  o: { sectionId: number; lengthMm: number; location?: string; origin: string; planId: number; jobId: number; userId: number; at: Date },
+  o: {
+    sectionId: number;
+    lengthMm: number;
+    location?: string;
+    origin: string;
+    planId: number;
+    jobId: number;
+    userId: number;
+    at: Date;
+  },
 ) {
   const tag = await nextOffcutTag(tx);
   const [offcut] = await tx

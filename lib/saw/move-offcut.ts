@@ -5,13 +5,24 @@ import { offcuts, stockMovements } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
 
 /** Records where an offcut was racked (an 'offcut_moved' movement). */
-export async function moveOffcut({ offcutId, location, userId }: { offcutId: number; location: string; userId: number }) {
+export async function moveOffcut({
+  offcutId,
+  location,
+  userId,
+}: {
+  offcutId: number;
+  location: string;
+  userId: number;
+}) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [offcut] = await tx.select().from(offcuts).where(eq(offcuts.id, offcutId));
     if (!offcut) throw notFound('That offcut');
     if (offcut.status === 'used' || offcut.status === 'scrapped') {
-      throw new AppError('conflict', `Offcut ${offcut.tag} is ${offcut.status}; it is no longer on the rack.`);
+      throw new AppError(
+        'conflict',
+        `Offcut ${offcut.tag} is ${offcut.status}; it is no longer on the rack.`,
+      );
     }
     if (offcut.location === location) return { id: offcut.id, tag: offcut.tag, location };
     await tx.update(offcuts).set({ location, updatedAt: new Date() }).where(eq(offcuts.id, offcutId));

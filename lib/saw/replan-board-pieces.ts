@@ -1,7 +1,16 @@
 // Re-plans the pieces of a bad board at once, from the stock and the rack offcuts still free.
 import { and, asc, eq, inArray, max } from 'drizzle-orm';
 import type { Tx } from '@/db';
-import { jobs, offcuts, planBoards, sections, stockLengths, stockMovements, type Job, type PlanBoard } from '@/db/schema';
+import {
+  jobs,
+  offcuts,
+  planBoards,
+  sections,
+  stockLengths,
+  stockMovements,
+  type Job,
+  type PlanBoard,
+} from '@/db/schema';
 import { buildSolverInput, type PlanningItem } from '@/lib/plans/build-solver-input';
 import { parseSourceId, type BoardPiece, type PlanSettings } from '@/lib/plans/plan-shapes';
 import { runSolver } from '@/lib/plans/run-solver';
@@ -12,12 +21,24 @@ const REPLAN_TIME_LIMIT_MS = 1_000;
 
 export async function replanBoardPieces(
   tx: Tx,
-  { planId, settings, job, board, userId, at }: { planId: number; settings: PlanSettings; job: Job; board: PlanBoard; userId: number; at: Date },
+  {
+    planId,
+    settings,
+    job,
+    board,
+    userId,
+    at,
+  }: { planId: number; settings: PlanSettings; job: Job; board: PlanBoard; userId: number; at: Date },
 ) {
   const pieces = board.pieces as BoardPiece[];
   const items = new Map<number, PlanningItem & { label: string }>();
   for (const p of pieces) {
-    const item = items.get(p.jobItemId) ?? { id: p.jobItemId, lengthMm: p.lengthMm, quantity: 0, label: p.label };
+    const item = items.get(p.jobItemId) ?? {
+      id: p.jobItemId,
+      lengthMm: p.lengthMm,
+      quantity: 0,
+      label: p.label,
+    };
     item.quantity += 1;
     items.set(p.jobItemId, item);
   }
@@ -38,15 +59,23 @@ export async function replanBoardPieces(
   const output = await runSolver(input);
 
   const labels = new Map([...items.values()].map((i) => [i.id, i.label]));
-  const [{ top }] = await tx.select({ top: max(planBoards.boardNo) }).from(planBoards).where(eq(planBoards.planId, planId));
-  const rows = planBoardRows([{ sectionId: board.sectionId, sectionName: section.name, input, output }], labels).map((r, i) => ({
+  const [{ top }] = await tx
+    .select({ top: max(planBoards.boardNo) })
+    .from(planBoards)
+    .where(eq(planBoards.planId, planId));
+  const rows = planBoardRows(
+    [{ sectionId: board.sectionId, sectionName: section.name, input, output }],
+    labels,
+  ).map((r, i) => ({
     ...r,
     planId,
     boardNo: (top ?? 0) + i + 1,
   }));
   if (rows.length) await tx.insert(planBoards).values(rows);
 
-  const offcutIds = output.boards.filter((b) => b.source === 'offcut').map((b) => parseSourceId(b.sourceId).id);
+  const offcutIds = output.boards
+    .filter((b) => b.source === 'offcut')
+    .map((b) => parseSourceId(b.sourceId).id);
   if (offcutIds.length) {
     const reserved = await tx
       .update(offcuts)

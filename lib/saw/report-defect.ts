@@ -28,20 +28,33 @@ export async function reportDefect({
   return db.transaction(async (tx) => {
     const { plan, job, board } = await loadBoardForSaw(tx, { planId, boardNo });
     if (board.status === 'defective') {
-      return { boardNo, alreadyReported: true, newOffcut: null, replan: null, ...(await planProgress(tx, planId)) };
+      return {
+        boardNo,
+        alreadyReported: true,
+        newOffcut: null,
+        replan: null,
+        ...(await planProgress(tx, planId)),
+      };
     }
-    if (board.status === 'done') throw new AppError('conflict', `Board ${boardNo} is already confirmed cut. Undo it first.`);
+    if (board.status === 'done')
+      throw new AppError('conflict', `Board ${boardNo} is already confirmed cut. Undo it first.`);
     assertAtSaw(plan, job);
     if (usableMm !== undefined && usableMm >= board.lengthMm) {
-      throw new AppError('invalid', `The usable part must be shorter than the board (${board.lengthMm} mm).`, {
-        issues: [{ path: 'usableMm', message: `Must be less than ${board.lengthMm} mm.` }],
-      });
+      throw new AppError(
+        'invalid',
+        `The usable part must be shorter than the board (${board.lengthMm} mm).`,
+        {
+          issues: [{ path: 'usableMm', message: `Must be less than ${board.lengthMm} mm.` }],
+        },
+      );
     }
     const settings = plan.settings as PlanSettings;
     const at = new Date();
     const where = `board ${boardNo} of job ${job.reference}`;
     const why = `${reason[0].toUpperCase()}${reason.slice(1)}${note ? ` (${note})` : ''}`;
-    const [stock] = board.stockLengthId ? await tx.select().from(stockLengths).where(eq(stockLengths.id, board.stockLengthId)) : [];
+    const [stock] = board.stockLengthId
+      ? await tx.select().from(stockLengths).where(eq(stockLengths.id, board.stockLengthId))
+      : [];
     await tx.insert(stockMovements).values({
       at,
       kind: 'defect',
@@ -56,7 +69,15 @@ export async function reportDefect({
       reason: `${why}: ${where}`,
     });
     if (board.source === 'stock' && board.stockLengthId) {
-      await recordStockCut(tx, { stockLengthId: board.stockLengthId, sectionId: board.sectionId, planId, jobId: job.id, userId, at, reason: `Bad board (${reason}) for ${where}` });
+      await recordStockCut(tx, {
+        stockLengthId: board.stockLengthId,
+        sectionId: board.sectionId,
+        planId,
+        jobId: job.id,
+        userId,
+        at,
+        reason: `Bad board (${reason}) for ${where}`,
+      });
     }
     if (board.source === 'offcut' && board.offcutId) {
       const [bad] = await tx
@@ -78,15 +99,35 @@ export async function reportDefect({
     }
     const sound =
       usableMm !== undefined && usableMm >= settings.minOffcutMm
-        ? await makeOffcut(tx, { sectionId: board.sectionId, lengthMm: usableMm, origin: `Sound part of bad ${where}`, planId, jobId: job.id, userId, at })
+        ? await makeOffcut(tx, {
+            sectionId: board.sectionId,
+            lengthMm: usableMm,
+            origin: `Sound part of bad ${where}`,
+            planId,
+            jobId: job.id,
+            userId,
+            at,
+          })
         : null;
     await tx
       .update(planBoards)
-      .set({ status: 'defective', defectReason: why, doneAt: at, doneBy: userId, newOffcutId: sound?.id ?? null })
+      .set({
+        status: 'defective',
+        defectReason: why,
+        doneAt: at,
+        doneBy: userId,
+        newOffcutId: sound?.id ?? null,
+      })
       .where(eq(planBoards.id, board.id));
 
     const replan = await replanBoardPieces(tx, { planId, settings, job, board, userId, at });
     const progress = await settlePlanStatus(tx, { planId, jobId: job.id });
-    return { boardNo, alreadyReported: false, newOffcut: sound ? { id: sound.id, tag: sound.tag } : null, replan, ...progress };
+    return {
+      boardNo,
+      alreadyReported: false,
+      newOffcut: sound ? { id: sound.id, tag: sound.tag } : null,
+      replan,
+      ...progress,
+    };
   });
 }

@@ -5,14 +5,18 @@ import { jobs, planBoards, plans } from '@/db/schema';
 
 /** How far the saw has got with a plan, and the statuses that follow from it. Reads only. */
 export async function planProgress(db: DbOrTx, planId: number) {
-  const boards = await db.select({ status: planBoards.status }).from(planBoards).where(eq(planBoards.planId, planId));
+  const boards = await db
+    .select({ status: planBoards.status })
+    .from(planBoards)
+    .where(eq(planBoards.planId, planId));
   const pending = boards.filter((b) => b.status === 'pending').length;
   const boardsDone = boards.length - pending;
   return {
     boards: boards.length,
     boardsDone,
     planStatus: pending === 0 ? ('done' as const) : ('released' as const),
-    jobStatus: pending === 0 ? ('done' as const) : boardsDone > 0 ? ('cutting' as const) : ('released' as const),
+    jobStatus:
+      pending === 0 ? ('done' as const) : boardsDone > 0 ? ('cutting' as const) : ('released' as const),
   };
 }
 

@@ -17,19 +17,24 @@ export async function undoLastBoard({ planId }: { planId: number }) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const { plan, job } = await loadPlanForSaw(tx, planId);
-    if (plan.status !== 'released' && plan.status !== 'done') throw new AppError('conflict', `This plan is ${plan.status}, not at the saw.`);
+    if (plan.status !== 'released' && plan.status !== 'done')
+      throw new AppError('conflict', `This plan is ${plan.status}, not at the saw.`);
     const [board] = await tx
       .select()
       .from(planBoards)
       .where(and(eq(planBoards.planId, planId), eq(planBoards.status, 'done')))
       .orderBy(desc(planBoards.doneAt), desc(planBoards.boardNo))
       .limit(1);
-    if (!board || !board.doneAt) throw new AppError('conflict', 'No board of this plan has been confirmed yet.');
+    if (!board || !board.doneAt)
+      throw new AppError('conflict', 'No board of this plan has been confirmed yet.');
 
     if (board.newOffcutId) {
       const [made] = await tx.select().from(offcuts).where(eq(offcuts.id, board.newOffcutId));
       if (made && made.status !== 'available') {
-        throw new AppError('conflict', `Offcut ${made.tag} from board ${board.boardNo} is already ${made.status}; it cannot be taken back.`);
+        throw new AppError(
+          'conflict',
+          `Offcut ${made.tag} from board ${board.boardNo} is already ${made.status}; it cannot be taken back.`,
+        );
       }
     }
     const rows = await tx
@@ -43,7 +48,9 @@ export async function undoLastBoard({ planId }: { planId: number }) {
       )
       .returning();
     // Give back to on hand exactly what the deleted rows took (a "counted short" pair nets to 0).
-    const delta = rows.filter((r) => r.stockLengthId === board.stockLengthId).reduce((n, r) => n + r.quantityDelta, 0);
+    const delta = rows
+      .filter((r) => r.stockLengthId === board.stockLengthId)
+      .reduce((n, r) => n + r.quantityDelta, 0);
     if (board.stockLengthId && delta !== 0) {
       await tx
         .update(stockLengths)

@@ -11,7 +11,16 @@ import { AppError, notFound } from '@/lib/errors';
  */
 export async function applyStockMovement(
   tx: Tx,
-  m: { kind: MovementKind; stockLengthId: number; quantityDelta: number; userId: number | null; reason: string; at?: Date; planId?: number | null; jobId?: number | null },
+  m: {
+    kind: MovementKind;
+    stockLengthId: number;
+    quantityDelta: number;
+    userId: number | null;
+    reason: string;
+    at?: Date;
+    planId?: number | null;
+    jobId?: number | null;
+  },
 ) {
   const [length] = await tx.select().from(stockLengths).where(eq(stockLengths.id, m.stockLengthId));
   if (!length) throw notFound(`Stock length ${m.stockLengthId}`);
@@ -22,7 +31,10 @@ export async function applyStockMovement(
       .where(and(eq(stockLengths.id, m.stockLengthId), sql`${stockLengths.onHand} + ${m.quantityDelta} >= 0`))
       .returning({ onHand: stockLengths.onHand });
     if (updated.length === 0) {
-      throw new AppError('conflict', `Only ${length.onHand} of the ${length.lengthMm} mm length are on hand; on-hand stock cannot go below zero.`);
+      throw new AppError(
+        'conflict',
+        `Only ${length.onHand} of the ${length.lengthMm} mm length are on hand; on-hand stock cannot go below zero.`,
+      );
     }
   }
   const [movement] = await tx

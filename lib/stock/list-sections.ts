@@ -24,6 +24,12 @@ export async function listSections() {
     active: s.active,
     lengths: lengthRows
       .filter((l) => l.sectionId === s.id)
-      .map((l) => ({ id: l.id, lengthMm: l.lengthMm, pricePence: l.pricePence, onHand: l.onHand, active: l.active })),
+      .map((l) => ({
+        id: l.id,
+        lengthMm: l.lengthMm,
+        pricePence: l.pricePence,
+        onHand: l.onHand,
+        active: l.active,
+      })),
   }));
 }

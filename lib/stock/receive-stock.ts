@@ -11,7 +11,14 @@ export async function receiveStock({ body, userId }: { body: ReceiptBody; userId
     const movements = [];
     for (const line of body.lines) {
       movements.push(
-        await applyStockMovement(tx, { kind: 'receipt', stockLengthId: line.stockLengthId, quantityDelta: line.quantity, userId, reason: body.reference, at }),
+        await applyStockMovement(tx, {
+          kind: 'receipt',
+          stockLengthId: line.stockLengthId,
+          quantityDelta: line.quantity,
+          userId,
+          reason: body.reference,
+          at,
+        }),
       );
     }
     return movements;

@@ -6,7 +6,10 @@ import { stockLengths } from '@/db/schema';
 /** What a metre of each section costs the yard: its cheapest stock length per metre. Values offcuts and waste. */
 export async function getSectionPencePerMetre(db: DbOrTx): Promise<Map<number, number>> {
   const rows = await db
-    .select({ sectionId: stockLengths.sectionId, perMetre: sql<number>`min(${stockLengths.pricePence} * 1000.0 / ${stockLengths.lengthMm})::float8` })
+    .select({
+      sectionId: stockLengths.sectionId,
+      perMetre: sql<number>`min(${stockLengths.pricePence} * 1000.0 / ${stockLengths.lengthMm})::float8`,
+    })
     .from(stockLengths)
     .groupBy(stockLengths.sectionId);
   return new Map(rows.map((r) => [r.sectionId, Number(r.perMetre)]));

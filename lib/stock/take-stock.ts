@@ -23,10 +23,20 @@ export async function takeStock({ body, userId }: { body: StocktakeBody; userId:
         .select({ total: sql<number>`coalesce(sum(${stockMovements.quantityDelta}), 0)::int` })
         .from(stockMovements)
         .where(eq(stockMovements.stockLengthId, stockLengthId));
-      if (length.onHand === null) await tx.update(stockLengths).set({ onHand: total }).where(eq(stockLengths.id, stockLengthId));
+      if (length.onHand === null)
+        await tx.update(stockLengths).set({ onHand: total }).where(eq(stockLengths.id, stockLengthId));
       const delta = counted - total;
       if (delta === 0 && length.onHand !== null) continue;
-      movements.push(await applyStockMovement(tx, { kind: 'stocktake', stockLengthId, quantityDelta: delta, userId, reason: body.reason, at }));
+      movements.push(
+        await applyStockMovement(tx, {
+          kind: 'stocktake',
+          stockLengthId,
+          quantityDelta: delta,
+          userId,
+          reason: body.reason,
+          at,
+        }),
+      );
     }
     return movements;
   });

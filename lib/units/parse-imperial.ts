@@ -1,4 +1,11 @@
-import { addFractions, readDecimal, roundFraction, scaleFraction, ZERO, type Fraction } from './exact-fraction';
+import {
+  addFractions,
+  readDecimal,
+  roundFraction,
+  scaleFraction,
+  ZERO,
+  type Fraction,
+} from './exact-fraction';
 import { INCHES_PER_FOOT, TENTHS_OF_MM_PER_INCH } from './length-constants';
 
 // Feet then inches, either part optional: 7' 8 5/8", 7'-8 5/8", 7ft 8in, 8', 8ft, 92-5/8", 92 5/8",
@@ -9,7 +16,8 @@ const INCHES_MIXED = /^(\d+)(?: | ?- ?)(\d+)\/(\d+)$/;
 const INCHES_FRACTION = /^(\d+)\/(\d+)$/;
 const INCHES_DECIMAL = /^\d*\.?\d+$/;
 
-export type ImperialParse = { kind: 'mm'; mm: bigint } | { kind: 'error'; message: string } | { kind: 'no-match' };
+export type ImperialParse =
+  { kind: 'mm'; mm: bigint } | { kind: 'error'; message: string } | { kind: 'no-match' };
 
 function readInches(text: string): Fraction | string | null {
   const mixed = INCHES_MIXED.exec(text);

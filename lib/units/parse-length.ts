@@ -23,7 +23,8 @@ export function parseLength(input: unknown): ParseLengthResult {
   if (text === '') return lengthError('Length is missing.');
   if (text.startsWith('-')) return lengthError('Length cannot be negative.');
   if (/\d,\d/.test(text)) return lengthError('Leave out the comma: write 2400 or 2.4 m, not 2,400 or 2,4.');
-  if (/\dcm$|\d cm$|centimet/.test(text)) return lengthError('Write millimetres or metres, not centimetres (240 cm is 2400 mm).');
+  if (/\dcm$|\d cm$|centimet/.test(text))
+    return lengthError('Write millimetres or metres, not centimetres (240 cm is 2400 mm).');
 
   let mm = parseMetric(text);
   if (mm === null) {

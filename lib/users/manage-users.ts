@@ -49,9 +49,14 @@ export async function updateUser({ userId, changes }: { userId: number; changes:
     const [user] = await tx.select().from(users).where(eq(users.id, userId));
     if (!user) throw notFound('That user');
     const losesOwner =
-      user.role === 'owner' && !user.disabled && ((changes.role && changes.role !== 'owner') || changes.disabled);
+      user.role === 'owner' &&
+      !user.disabled &&
+      ((changes.role && changes.role !== 'owner') || changes.disabled);
     if (losesOwner && (await otherActiveOwners(tx, userId)) === 0) {
-      throw new AppError('conflict', 'The yard needs at least one active owner: make someone else owner first.');
+      throw new AppError(
+        'conflict',
+        'The yard needs at least one active owner: make someone else owner first.',
+      );
     }
     const [updated] = await tx
       .update(users)

@@ -3,11 +3,7 @@ import { eq } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { users, type Role } from '@/db/schema';
 import { verifyPassword } from '@/lib/auth/password';
-import {
-  recordFailedSignIn,
-  recordSuccessfulSignIn,
-  waitBeforeNextTry,
-} from '@/lib/auth/sign-in-throttle';
+import { recordFailedSignIn, recordSuccessfulSignIn, waitBeforeNextTry } from '@/lib/auth/sign-in-throttle';
 
 export type SignedInUser = { id: string; email: string; name: string; role: Role };
 

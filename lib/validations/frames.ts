@@ -9,7 +9,11 @@ export const saveFrameScheduleBodySchema = z
       .trim()
       .min(1, { error: 'Give the schedule a name, e.g. "lean-to for the Marsh garden"' })
       .max(120, { error: 'Schedule name must be at most 120 characters' }),
-    customerName: z.string().trim().max(120, { error: 'Customer name must be at most 120 characters' }).default(''),
+    customerName: z
+      .string()
+      .trim()
+      .max(120, { error: 'Customer name must be at most 120 characters' })
+      .default(''),
     unit: frameUnitSchema.default('mm'),
     panels: z
       .array(frameSchedulePanelSchema, { error: 'Panels must be a list' })
@@ -17,7 +21,8 @@ export const saveFrameScheduleBodySchema = z
       .default([]),
   })
   .superRefine((body, ctx) => {
-    for (const issue of findGeometryIssues(body.panels)) ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
+    for (const issue of findGeometryIssues(body.panels))
+      ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
   });
 export type SaveFrameScheduleBody = z.output<typeof saveFrameScheduleBodySchema>;
 
@@ -26,7 +31,11 @@ const dueDateSchema = z.iso.date({ error: 'Due date must be a date like 2026-12-
 /** Send a schedule's cut list to an existing draft or planned job ({ jobId }), or to a new job ({ newJob }). */
 export const sendScheduleToJobBodySchema = z
   .object({
-    jobId: z.number({ error: 'Choose a job' }).int({ error: 'Choose a job' }).positive({ error: 'Choose a job' }).optional(),
+    jobId: z
+      .number({ error: 'Choose a job' })
+      .int({ error: 'Choose a job' })
+      .positive({ error: 'Choose a job' })
+      .optional(),
     newJob: z
       .object({
         customerName: z

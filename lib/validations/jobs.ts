@@ -2,9 +2,7 @@ import { z } from 'zod';
 import { JOB_STATUSES } from '@/db/enums';
 import { lengthInputSchema } from '@/lib/units/length-input-schema';
 
-const dueDate = z
-  .string()
-  .refine(isCalendarDate, 'Use a real date like 2026-12-24.');
+const dueDate = z.string().refine(isCalendarDate, 'Use a real date like 2026-12-24.');
 
 /** "2026-02-30" is refused: the date must exist, not only look right. */
 function isCalendarDate(text: string): boolean {
@@ -12,12 +10,20 @@ function isCalendarDate(text: string): boolean {
   const time = Date.parse(`${text}T00:00:00Z`);
   return !Number.isNaN(time) && new Date(time).toISOString().startsWith(text);
 }
-const email = z.union([z.literal(''), z.string().trim().toLowerCase().email('Enter a valid e-mail address.')]);
+const email = z.union([
+  z.literal(''),
+  z.string().trim().toLowerCase().email('Enter a valid e-mail address.'),
+]);
 
 /** POST /api/jobs. The reference is generated (next J-number) when left out. */
 export const createJobBodySchema = z.object({
   customer: z.string().trim().min(1, 'Enter the customer.').max(120),
-  reference: z.string().trim().max(40).optional().transform((v) => v || undefined),
+  reference: z
+    .string()
+    .trim()
+    .max(40)
+    .optional()
+    .transform((v) => v || undefined),
   dueDate: dueDate.nullable().optional(),
   customerEmail: email.optional(),
   notes: z.string().max(2000).optional(),

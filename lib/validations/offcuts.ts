@@ -1,7 +1,10 @@
 import { z } from 'zod';
 import { OFFCUT_STATUSES } from '@/db/enums';
 
-const optionalInt = z.preprocess((v) => (v === '' || v === null ? undefined : v), z.coerce.number().int().min(0).optional());
+const optionalInt = z.preprocess(
+  (v) => (v === '' || v === null ? undefined : v),
+  z.coerce.number().int().min(0).optional(),
+);
 
 export const OFFCUT_SORTS = ['age', 'length', 'section', 'location', 'tag'] as const;
 

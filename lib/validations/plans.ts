@@ -9,7 +9,10 @@ export const createPlanBodySchema = z
     trimMm: mm(200),
     minOffcutMm: mm(6000),
     useOffcuts: z.boolean(),
-    stockLengthIds: z.array(z.number().int().positive()).min(1, 'Allow at least one stock length.').nullable(),
+    stockLengthIds: z
+      .array(z.number().int().positive())
+      .min(1, 'Allow at least one stock length.')
+      .nullable(),
     timeLimitMs: z.number().int().min(200).max(20_000),
   })
   .partial()

@@ -14,7 +14,9 @@ export type ConfirmBoardBody = z.infer<typeof confirmBoardBodySchema>;
 
 export const reportDefectBodySchema = z
   .object({
-    reason: z.enum(DEFECT_REASONS, { error: 'Choose a reason: split, shake, wane, rot, twist, short or other.' }),
+    reason: z.enum(DEFECT_REASONS, {
+      error: 'Choose a reason: split, shake, wane, rot, twist, short or other.',
+    }),
     note: z.string().trim().max(200).optional(),
     /** How much of the board is still sound, in whole millimetres (kept as an offcut when long enough). */
     usableMm: z.number().int('Whole millimetres only.').min(0, 'Cannot be negative.').max(20_000).optional(),
@@ -27,7 +29,12 @@ export const moveOffcutBodySchema = z
   .strict();
 
 export const findOffcutQuerySchema = z.object({
-  tag: z.string().trim().min(1, 'Type or scan a tag.').max(40).transform((t) => t.toUpperCase()),
+  tag: z
+    .string()
+    .trim()
+    .min(1, 'Type or scan a tag.')
+    .max(40)
+    .transform((t) => t.toUpperCase()),
 });
 
 export const offcutIdsQuerySchema = z

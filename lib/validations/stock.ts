@@ -1,8 +1,16 @@
 import { z } from 'zod';
 
 const wholeMm = (what: string, max = 12_000) =>
-  z.number({ message: `Enter the ${what} in whole millimetres.` }).int(`Enter the ${what} in whole millimetres.`).min(1, `The ${what} must be more than 0.`).max(max, `The ${what} may be at most ${max} mm.`);
-const pence = z.number({ message: 'Enter a price.' }).int('Prices are whole pence.').min(0, 'A price cannot be negative.').max(10_000_000);
+  z
+    .number({ message: `Enter the ${what} in whole millimetres.` })
+    .int(`Enter the ${what} in whole millimetres.`)
+    .min(1, `The ${what} must be more than 0.`)
+    .max(max, `The ${what} may be at most ${max} mm.`);
+const pence = z
+  .number({ message: 'Enter a price.' })
+  .int('Prices are whole pence.')
+  .min(0, 'A price cannot be negative.')
+  .max(10_000_000);
 const text = (max: number) => z.string().trim().max(max, `At most ${max} characters.`);
 
 export const stockLengthInputSchema = z.object({
@@ -17,7 +25,9 @@ export const stockLengthInputSchema = z.object({
 export type StockLengthInput = z.infer<typeof stockLengthInputSchema>;
 
 export const sectionBodySchema = z.object({
-  code: text(20).min(1, 'Enter a short code.').regex(/^[A-Za-z0-9_-]+$/, 'Codes use letters, digits, dashes and underscores.'),
+  code: text(20)
+    .min(1, 'Enter a short code.')
+    .regex(/^[A-Za-z0-9_-]+$/, 'Codes use letters, digits, dashes and underscores.'),
   name: text(80).min(1, 'Enter a name.'),
   thicknessMm: wholeMm('thickness', 500),
   widthMm: wholeMm('width', 1000),
@@ -28,14 +38,22 @@ export const sectionBodySchema = z.object({
   lengths: z
     .array(stockLengthInputSchema)
     .max(30)
-    .refine((ls) => new Set(ls.map((l) => l.lengthMm)).size === ls.length, 'Each stock length may appear once.'),
+    .refine(
+      (ls) => new Set(ls.map((l) => l.lengthMm)).size === ls.length,
+      'Each stock length may appear once.',
+    ),
 });
 export type SectionBody = z.infer<typeof sectionBodySchema>;
 
 export const receiptBodySchema = z.object({
   reference: text(80).min(1, 'Enter the delivery note or supplier reference.'),
   lines: z
-    .array(z.object({ stockLengthId: z.number().int().positive(), quantity: z.number().int('Count whole boards.').min(1, 'Receive at least one board.').max(10_000) }))
+    .array(
+      z.object({
+        stockLengthId: z.number().int().positive(),
+        quantity: z.number().int('Count whole boards.').min(1, 'Receive at least one board.').max(10_000),
+      }),
+    )
     .min(1, 'Add at least one line.')
     .max(100),
 });
@@ -44,7 +62,12 @@ export type ReceiptBody = z.infer<typeof receiptBodySchema>;
 export const stocktakeBodySchema = z.object({
   reason: text(200).min(1, 'Say why the count changed (e.g. monthly count, damaged boards).'),
   counts: z
-    .array(z.object({ stockLengthId: z.number().int().positive(), counted: z.number().int('Count whole boards.').min(0, 'A count cannot be negative.').max(100_000) }))
+    .array(
+      z.object({
+        stockLengthId: z.number().int().positive(),
+        counted: z.number().int('Count whole boards.').min(0, 'A count cannot be negative.').max(100_000),
+      }),
+    )
     .min(1, 'Count at least one stock length.')
     .max(500),
 });

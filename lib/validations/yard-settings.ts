@@ -2,7 +2,11 @@ import { z } from 'zod';
 import { DISPLAY_UNITS } from '@/db/enums';
 
 const mm = (what: string, max: number, min = 0) =>
-  z.number({ message: `Enter the ${what} in whole millimetres.` }).int(`Enter the ${what} in whole millimetres.`).min(min, `The ${what} must be at least ${min} mm.`).max(max, `The ${what} may be at most ${max} mm.`);
+  z
+    .number({ message: `Enter the ${what} in whole millimetres.` })
+    .int(`Enter the ${what} in whole millimetres.`)
+    .min(min, `The ${what} must be at least ${min} mm.`)
+    .max(max, `The ${what} may be at most ${max} mm.`);
 
 export const yardSettingsBodySchema = z.object({
   yardName: z.string().trim().min(1, 'Enter the yard name.').max(80),

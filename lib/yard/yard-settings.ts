@@ -14,7 +14,11 @@ export async function getYardSettings() {
 
 export async function updateYardSettings({ body }: { body: YardSettingsBody }) {
   const db = await getDb();
-  const [settings] = await db.update(yardSettings).set({ ...body, updatedAt: new Date() }).where(eq(yardSettings.id, 1)).returning();
+  const [settings] = await db
+    .update(yardSettings)
+    .set({ ...body, updatedAt: new Date() })
+    .where(eq(yardSettings.id, 1))
+    .returning();
   if (!settings) throw notFound('The yard settings');
   return settings;
 }

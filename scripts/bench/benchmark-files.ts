@@ -4,7 +4,10 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { SolveInput } from '@/solver/types';
 
-export const BENCHMARK_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../shared/benchmarks');
+export const BENCHMARK_DIR = path.resolve(
+  path.dirname(fileURLToPath(import.meta.url)),
+  '../../../shared/benchmarks',
+);
 
 export interface BenchmarkInstance {
   set: string;
@@ -20,13 +23,24 @@ export interface BenchmarkInstance {
 export function readOptima(): BenchmarkInstance[] {
   const lines = readFileSync(path.join(BENCHMARK_DIR, 'optima.csv'), 'utf8').trim().split(/\r?\n/).slice(1);
   const lp = new Map<string, number>();
-  for (const l of readFileSync(path.join(BENCHMARK_DIR, 'lp_bounds.csv'), 'utf8').trim().split(/\r?\n/).slice(1)) {
+  for (const l of readFileSync(path.join(BENCHMARK_DIR, 'lp_bounds.csv'), 'utf8')
+    .trim()
+    .split(/\r?\n/)
+    .slice(1)) {
     const f = l.split(',');
     lp.set(f[1], Number(f[3]));
   }
   return lines.map((line) => {
     const [set, name, capacity, items, optimum] = line.split(',');
-    return { set, name, capacity: Number(capacity), items: Number(items), optimum: Number(optimum), ceilLp: lp.get(name) ?? 0, lengths: [] };
+    return {
+      set,
+      name,
+      capacity: Number(capacity),
+      items: Number(items),
+      optimum: Number(optimum),
+      ceilLp: lp.get(name) ?? 0,
+      lengths: [],
+    };
   });
 }
 

@@ -13,7 +13,9 @@ export interface RunResult {
 export function firstFitDecreasingBoards(job: SolveInput): { boards: number; cost: number } {
   const pieces = job.pieces.flatMap((p) => Array<number>(p.quantity).fill(p.length)).sort((a, b) => b - a);
   const open: { free: number; cost: number; isStock: boolean }[] = [];
-  const offcuts = [...job.offcuts].sort((a, b) => a.length - b.length).map((o) => ({ free: o.length + job.kerf, used: false }));
+  const offcuts = [...job.offcuts]
+    .sort((a, b) => a.length - b.length)
+    .map((o) => ({ free: o.length + job.kerf, used: false }));
   const stock = [...job.stock].sort((a, b) => b.length - a.length);
   const usedStock = new Map<string, number>();
   for (const len of pieces) {

@@ -24,12 +24,22 @@ export function generateYardJob(seed: number, timeLimitMs = 2000): SolveInput {
     cost: Math.round(length * (2.1 + length / 20000)) / 1000,
     available: length === 5400 ? int(10, 30) : null,
   }));
-  const offcuts = Array.from({ length: 60 }, (_, k) => ({ id: `K-${String(k + 1).padStart(4, '0')}`, length: int(300, 2600) }));
+  const offcuts = Array.from({ length: 60 }, (_, k) => ({
+    id: `K-${String(k + 1).padStart(4, '0')}`,
+    length: int(300, 2600),
+  }));
   const pieces: SolveInput['pieces'] = [];
   let left = 500;
   for (let line = 0; left > 0; line++) {
     const kind = rnd();
-    const length = kind < 0.3 ? int(2200, 2500) : kind < 0.55 ? int(350, 650) : kind < 0.8 ? int(900, 1800) : int(2600, 4600);
+    const length =
+      kind < 0.3
+        ? int(2200, 2500)
+        : kind < 0.55
+          ? int(350, 650)
+          : kind < 0.8
+            ? int(900, 1800)
+            : int(2600, 4600);
     const quantity = Math.min(left, int(1, 24));
     pieces.push({ id: `L${line + 1}`, length, quantity });
     left -= quantity;

@@ -17,7 +17,8 @@ afterEach(() => t.close());
 afterAll(closeTemplate);
 
 const url = (query: string) => `http://test.local/api/offcuts?${query}`;
-const available = async () => t.db.select().from(schema.offcuts).where(eq(schema.offcuts.status, 'available')).orderBy(schema.offcuts.id);
+const available = async () =>
+  t.db.select().from(schema.offcuts).where(eq(schema.offcuts.status, 'available')).orderBy(schema.offcuts.id);
 
 describe('role checks on every offcut endpoint', () => {
   it('reading is for everyone signed in; changes are for the owner and yard hand', async () => {
@@ -25,8 +26,27 @@ describe('role checks on every offcut endpoint', () => {
     const cases: [string, () => Promise<{ status: number }>, (number | null)[], (number | null)[]][] = [
       ['GET offcuts', () => call(listOffcuts, { url: url('') }), [AS.owner, AS.hand, AS.saw], []],
       ['GET export', () => call(exportRack, { url: url('') }), [AS.owner, AS.hand, AS.saw], []],
-      ['PATCH offcut', () => call(patchOffcut, { method: 'PATCH', params: { offcutId: String(o.id) }, body: { location: 'Rack C2' } }), [AS.owner, AS.hand], [AS.saw]],
-      ['POST import', () => call(importRack, { method: 'POST', body: { csv: 'section,length,location\nT47100,900,Rack C1\n' } }), [AS.owner, AS.hand], [AS.saw]],
+      [
+        'PATCH offcut',
+        () =>
+          call(patchOffcut, {
+            method: 'PATCH',
+            params: { offcutId: String(o.id) },
+            body: { location: 'Rack C2' },
+          }),
+        [AS.owner, AS.hand],
+        [AS.saw],
+      ],
+      [
+        'POST import',
+        () =>
+          call(importRack, {
+            method: 'POST',
+            body: { csv: 'section,length,location\nT47100,900,Rack C1\n' },
+          }),
+        [AS.owner, AS.hand],
+        [AS.saw],
+      ],
     ];
     for (const [name, run, allowed, refused] of cases) {
       actAs(AS.nobody);
@@ -52,7 +72,11 @@ describe('GET /api/offcuts', () => {
     actAs(AS.hand);
     const rack = await available();
     const sectionId = rack[0].sectionId;
-    const res = await call(listOffcuts, { url: url(`sectionId=${sectionId}&minLengthMm=500&maxLengthMm=2000&sort=length&dir=asc&pageSize=5&status=available`) });
+    const res = await call(listOffcuts, {
+      url: url(
+        `sectionId=${sectionId}&minLengthMm=500&maxLengthMm=2000&sort=length&dir=asc&pageSize=5&status=available`,
+      ),
+    });
     expect(res.status).toBe(200);
     const expected = rack.filter((o) => o.sectionId === sectionId && o.lengthMm >= 500 && o.lengthMm <= 2000);
     expect(res.json.total).toBe(expected.length);
@@ -71,12 +95,27 @@ describe('changing the rack', () => {
   it('moves an offcut and records the move', async () => {
     const [o] = await available();
     actAs(AS.hand);
-    const res = await call(patchOffcut, { method: 'PATCH', params: { offcutId: String(o.id) }, body: { location: 'Rack C2' } });
+    const res = await call(patchOffcut, {
+      method: 'PATCH',
+      params: { offcutId: String(o.id) },
+      body: { location: 'Rack C2' },
+    });
     expect(res.status).toBe(200);
     expect(res.json.offcut.location).toBe('Rack C2');
-    const moves = await t.db.select().from(schema.stockMovements).where(eq(schema.stockMovements.offcutId, o.id));
+    const moves = await t.db
+      .select()
+      .from(schema.stockMovements)
+      .where(eq(schema.stockMovements.offcutId, o.id));
     expect(moves.some((m) => m.kind === 'offcut_moved')).toBe(true);
-    expect((await call(patchOffcut, { method: 'PATCH', params: { offcutId: String(o.id) }, body: { location: '' } })).status).toBe(422);
+    expect(
+      (
+        await call(patchOffcut, {
+          method: 'PATCH',
+          params: { offcutId: String(o.id) },
+          body: { location: '' },
+        })
+      ).status,
+    ).toBe(422);
   });
 
   it('scraps several offcuts with a reason, all or nothing', async () => {
@@ -85,8 +124,14 @@ describe('changing the rack', () => {
     const res = await call(scrap, { method: 'POST', body: { ids: [a.id, b.id], reason: 'Split ends' } });
     expect(res.status).toBe(200);
     expect(res.json.scrapped).toBe(2);
-    const rows = await t.db.select().from(schema.offcuts).where(inArray(schema.offcuts.id, [a.id, b.id]));
-    expect(rows.map((r) => [r.status, r.scrapReason])).toEqual([['scrapped', 'Split ends'], ['scrapped', 'Split ends']]);
+    const rows = await t.db
+      .select()
+      .from(schema.offcuts)
+      .where(inArray(schema.offcuts.id, [a.id, b.id]));
+    expect(rows.map((r) => [r.status, r.scrapReason])).toEqual([
+      ['scrapped', 'Split ends'],
+      ['scrapped', 'Split ends'],
+    ]);
     const [c] = await available();
     const again = await call(scrap, { method: 'POST', body: { ids: [c.id, a.id], reason: 'again' } });
     expect(again.status).toBe(409);
@@ -96,14 +141,27 @@ describe('changing the rack', () => {
 
   it('imports a rack CSV all or nothing, listing bad rows by line', async () => {
     actAs(AS.hand);
-    const bad = await call(importRack, { method: 'POST', body: { csv: 'section,length,location,tag\nT47100,900,Rack C1,\nNo such timber,abc,Rack C1,\nT47100,1200,Rack C1,R-0001\n' } });
+    const bad = await call(importRack, {
+      method: 'POST',
+      body: {
+        csv: 'section,length,location,tag\nT47100,900,Rack C1,\nNo such timber,abc,Rack C1,\nT47100,1200,Rack C1,R-0001\n',
+      },
+    });
     expect(bad.status).toBe(422);
     expect(bad.json.details.errors.map((e: { line: number }) => e.line)).toEqual([3, 3]);
     // A tag already on the rack is refused by line too.
-    const clash = await call(importRack, { method: 'POST', body: { csv: 'section,length,location,tag\nT47100,1200,Rack C1,R-0001\n' } });
+    const clash = await call(importRack, {
+      method: 'POST',
+      body: { csv: 'section,length,location,tag\nT47100,1200,Rack C1,R-0001\n' },
+    });
     expect(clash.status).toBe(422);
-    expect(clash.json.details.errors).toEqual([{ line: 2, column: 'tag', message: 'Tag "R-0001" is already on the rack.' }]);
-    const good = await call(importRack, { method: 'POST', body: { csv: 'section,length,location,tag\nT47100,900,Rack C1,\n38x89 CLS,1.2 m,Rack C2,OLD-7\n' } });
+    expect(clash.json.details.errors).toEqual([
+      { line: 2, column: 'tag', message: 'Tag "R-0001" is already on the rack.' },
+    ]);
+    const good = await call(importRack, {
+      method: 'POST',
+      body: { csv: 'section,length,location,tag\nT47100,900,Rack C1,\n38x89 CLS,1.2 m,Rack C2,OLD-7\n' },
+    });
     expect(good.status).toBe(201);
     expect(good.json.imported).toBe(2);
     expect(good.json.tags[1]).toBe('OLD-7');

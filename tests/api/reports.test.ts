@@ -19,7 +19,12 @@ const url = (name: string, q = range) => `http://test.local/api/reports/${name}?
 
 describe('report endpoints', () => {
   it('are for the owner only', async () => {
-    for (const [name, handler] of [['waste', waste], ['offcuts', offcuts], ['savings', savings], ['stock', stock]] as const) {
+    for (const [name, handler] of [
+      ['waste', waste],
+      ['offcuts', offcuts],
+      ['savings', savings],
+      ['stock', stock],
+    ] as const) {
       actAs(AS.nobody);
       expect((await call(handler, { url: url(name) })).status, name).toBe(401);
       for (const who of [AS.hand, AS.saw]) {

@@ -34,7 +34,12 @@ describe('GET /api/users', () => {
 describe('POST /api/users', () => {
   it('adds an account and refuses a duplicate e-mail with 409', async () => {
     actAs(AS.owner);
-    const body = { email: 'New.Hand@Yard.test', name: 'New Hand', role: 'yard_hand', password: 'long-enough' };
+    const body = {
+      email: 'New.Hand@Yard.test',
+      name: 'New Hand',
+      role: 'yard_hand',
+      password: 'long-enough',
+    };
     const created = await call(POST, { method: 'POST', body });
     expect(created.status).toBe(201);
     expect(created.json.user.email).toBe('new.hand@yard.test');
@@ -43,15 +48,26 @@ describe('POST /api/users', () => {
 
   it('answers 422 with field messages for bad input and 422 for a body that is not JSON', async () => {
     actAs(AS.owner);
-    const bad = await call(POST, { method: 'POST', body: { email: 'nope', name: '', role: 'boss', password: 'x' } });
+    const bad = await call(POST, {
+      method: 'POST',
+      body: { email: 'nope', name: '', role: 'boss', password: 'x' },
+    });
     expect(bad.status).toBe(422);
-    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['email', 'name', 'password', 'role']);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual([
+      'email',
+      'name',
+      'password',
+      'role',
+    ]);
     expect((await call(POST, { method: 'POST', body: '{not json' })).status).toBe(422);
   });
 
   it('is refused to a yard hand', async () => {
     actAs(AS.hand);
-    const res = await call(POST, { method: 'POST', body: { email: 'x@y.test', name: 'X', role: 'owner', password: 'long-enough' } });
+    const res = await call(POST, {
+      method: 'POST',
+      body: { email: 'x@y.test', name: 'X', role: 'owner', password: 'long-enough' },
+    });
     expect(res.status).toBe(403);
   });
 });
@@ -59,24 +75,39 @@ describe('POST /api/users', () => {
 describe('PATCH /api/users/[userId]', () => {
   it('changes a role and disables an account', async () => {
     actAs(AS.owner);
-    const res = await call(PATCH, { method: 'PATCH', params: { userId: '3' }, body: { role: 'yard_hand', disabled: true } });
+    const res = await call(PATCH, {
+      method: 'PATCH',
+      params: { userId: '3' },
+      body: { role: 'yard_hand', disabled: true },
+    });
     expect(res.status).toBe(200);
     expect(res.json.user).toMatchObject({ role: 'yard_hand', disabled: true });
   });
 
   it('never demotes or disables the last active owner', async () => {
     actAs(AS.owner);
-    expect((await call(PATCH, { method: 'PATCH', params: { userId: '1' }, body: { role: 'saw_operator' } })).status).toBe(409);
-    expect((await call(PATCH, { method: 'PATCH', params: { userId: '1' }, body: { disabled: true } })).status).toBe(409);
+    expect(
+      (await call(PATCH, { method: 'PATCH', params: { userId: '1' }, body: { role: 'saw_operator' } }))
+        .status,
+    ).toBe(409);
+    expect(
+      (await call(PATCH, { method: 'PATCH', params: { userId: '1' }, body: { disabled: true } })).status,
+    ).toBe(409);
     // With a second owner the first may step down.
     await call(PATCH, { method: 'PATCH', params: { userId: '2' }, body: { role: 'owner' } });
-    expect((await call(PATCH, { method: 'PATCH', params: { userId: '1' }, body: { role: 'yard_hand' } })).status).toBe(200);
+    expect(
+      (await call(PATCH, { method: 'PATCH', params: { userId: '1' }, body: { role: 'yard_hand' } })).status,
+    ).toBe(200);
   });
 
   it('answers 404 for an unknown user and 422 for an empty change', async () => {
     actAs(AS.owner);
-    expect((await call(PATCH, { method: 'PATCH', params: { userId: '999' }, body: { name: 'Ghost' } })).status).toBe(404);
-    expect((await call(PATCH, { method: 'PATCH', params: { userId: 'abc' }, body: { name: 'Ghost' } })).status).toBe(404);
+    expect(
+      (await call(PATCH, { method: 'PATCH', params: { userId: '999' }, body: { name: 'Ghost' } })).status,
+    ).toBe(404);
+    expect(
+      (await call(PATCH, { method: 'PATCH', params: { userId: 'abc' }, body: { name: 'Ghost' } })).status,
+    ).toBe(404);
     expect((await call(PATCH, { method: 'PATCH', params: { userId: '2' }, body: {} })).status).toBe(422);
   });
 

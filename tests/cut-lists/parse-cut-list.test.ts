@@ -10,7 +10,10 @@ function errorsOf<T>(result: ImportResult<T>) {
 describe('parseCutList: good files', () => {
   it('reads the downloadable template', () => {
     const result = parseCutList(CUT_LIST_TEMPLATE_CSV, {
-      sections: [{ id: 'a', name: '47x100 C24' }, { id: 'b', name: '38x89 CLS' }],
+      sections: [
+        { id: 'a', name: '47x100 C24' },
+        { id: 'b', name: '38x89 CLS' },
+      ],
       maxLengthMm: () => 4800,
     });
     expect(result.ok).toBe(true);
@@ -30,7 +33,14 @@ describe('parseCutList: good files', () => {
       ok: true,
       items: [
         { sectionId: 'sec-47x100', length: 2400, quantity: 9, label: 'stud', note: null, line: 2 },
-        { sectionId: 'sec-47x100', length: 2400, quantity: 2, label: 'plate', note: 'head and sole', line: 3 },
+        {
+          sectionId: 'sec-47x100',
+          length: 2400,
+          quantity: 2,
+          label: 'plate',
+          note: 'head and sole',
+          line: 3,
+        },
         // 92 5/8 in = 2352.675 mm → 2353 (1 in = 25.4 mm; precut stud, common practice)
         { sectionId: 'sec-38x89', length: 2353, quantity: 4, label: null, note: null, line: 4 },
         { sectionId: 'sec-38x89', length: 2353, quantity: 1, label: 'king stud', note: null, line: 5 },
@@ -41,14 +51,21 @@ describe('parseCutList: good files', () => {
   it('matches header synonyms loosely and in any order', () => {
     const csv = 'Qty , Len, Mark,Comments,SECTION\n3,1200,nog,,CLS89\n';
     const result = parseCutList(csv, yardOptions);
-    expect(result).toEqual({ ok: true, items: [{ sectionId: 'sec-38x89', length: 1200, quantity: 3, label: 'nog', note: null, line: 2 }] });
+    expect(result).toEqual({
+      ok: true,
+      items: [{ sectionId: 'sec-38x89', length: 1200, quantity: 3, label: 'nog', note: null, line: 2 }],
+    });
   });
 
   it('reads tab-separated text pasted from a spreadsheet, with a byte-order mark and CRLF', () => {
-    const tsv = '\ufeffSection\tSize\tPieces\tName\r\nCLS89\t3600\t2\ttop plate\r\n\r\nCLS89\t8\'\t1\t\r\n';
+    const tsv = "\ufeffSection\tSize\tPieces\tName\r\nCLS89\t3600\t2\ttop plate\r\n\r\nCLS89\t8'\t1\t\r\n";
     const result = parseCutList(tsv, yardOptions);
     expect(result.ok).toBe(true);
-    if (result.ok) expect(result.items.map((item) => [item.line, item.length])).toEqual([[2, 3600], [4, 2438]]);
+    if (result.ok)
+      expect(result.items.map((item) => [item.line, item.length])).toEqual([
+        [2, 3600],
+        [4, 2438],
+      ]);
   });
 
   it('reads semicolon-separated files', () => {
@@ -112,14 +129,23 @@ describe('parseCutList: bad files', () => {
   });
 
   it('refuses an empty file, a header alone, and whitespace', () => {
-    for (const text of ['', '   \n\n', ',,,\n']) expect(errorsOf(parseCutList(text, yardOptions))).toEqual([{ line: 1, column: null }]);
-    expect(errorsOf(parseCutList('section,length,quantity\n', yardOptions))).toEqual([{ line: 1, column: null }]);
+    for (const text of ['', '   \n\n', ',,,\n'])
+      expect(errorsOf(parseCutList(text, yardOptions))).toEqual([{ line: 1, column: null }]);
+    expect(errorsOf(parseCutList('section,length,quantity\n', yardOptions))).toEqual([
+      { line: 1, column: null },
+    ]);
   });
 
   it('refuses missing, unknown and repeated columns', () => {
-    expect(errorsOf(parseCutList('section,length\nCLS89,1200\n', yardOptions))).toEqual([{ line: 1, column: 'quantity' }]);
-    expect(errorsOf(parseCutList('section,length,quantity,price\nCLS89,1200,1,4\n', yardOptions))).toEqual([{ line: 1, column: 'price' }]);
-    expect(errorsOf(parseCutList('section,length,qty,count\nCLS89,1200,1,4\n', yardOptions))).toEqual([{ line: 1, column: 'quantity' }]);
+    expect(errorsOf(parseCutList('section,length\nCLS89,1200\n', yardOptions))).toEqual([
+      { line: 1, column: 'quantity' },
+    ]);
+    expect(errorsOf(parseCutList('section,length,quantity,price\nCLS89,1200,1,4\n', yardOptions))).toEqual([
+      { line: 1, column: 'price' },
+    ]);
+    expect(errorsOf(parseCutList('section,length,qty,count\nCLS89,1200,1,4\n', yardOptions))).toEqual([
+      { line: 1, column: 'quantity' },
+    ]);
   });
 
   it('refuses a file without a header row', () => {
@@ -129,12 +155,22 @@ describe('parseCutList: bad files', () => {
   });
 
   it('refuses a row with more cells than the header', () => {
-    expect(errorsOf(parseCutList('section,length,quantity,note\nCLS89,1200,2,left, then right\n', yardOptions))).toEqual([{ line: 2, column: null }]);
+    expect(
+      errorsOf(parseCutList('section,length,quantity,note\nCLS89,1200,2,left, then right\n', yardOptions)),
+    ).toEqual([{ line: 2, column: null }]);
   });
 
   it('refuses a section name shared by two sections', () => {
-    const options = { sections: [{ id: 'a', name: 'CLS' }, { id: 'b', name: '38x63', code: 'cls' }], maxLengthMm: () => null };
-    expect(errorsOf(parseCutList('section,length,quantity\ncls,1200,2\n38x63,1200,1\n', options))).toEqual([{ line: 2, column: 'section' }]);
+    const options = {
+      sections: [
+        { id: 'a', name: 'CLS' },
+        { id: 'b', name: '38x63', code: 'cls' },
+      ],
+      maxLengthMm: () => null,
+    };
+    expect(errorsOf(parseCutList('section,length,quantity\ncls,1200,2\n38x63,1200,1\n', options))).toEqual([
+      { line: 2, column: 'section' },
+    ]);
   });
 
   it('reports an unclosed quote', () => {

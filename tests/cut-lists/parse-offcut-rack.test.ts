@@ -4,9 +4,18 @@ import { yardOptions } from './yard-sections';
 
 describe('parseOffcutRack', () => {
   it('reads the template and a good rack', () => {
-    const template = parseOffcutRack(OFFCUT_RACK_TEMPLATE_CSV, { sections: [{ id: 'a', name: '47x100 C24' }, { id: 'b', name: '38x89 CLS' }], maxLengthMm: () => 4800 });
+    const template = parseOffcutRack(OFFCUT_RACK_TEMPLATE_CSV, {
+      sections: [
+        { id: 'a', name: '47x100 C24' },
+        { id: 'b', name: '38x89 CLS' },
+      ],
+      maxLengthMm: () => 4800,
+    });
     expect(template.ok).toBe(true);
-    const result = parseOffcutRack('Section,Length,Bay,Tag code\nCLS89,1250,A1,k-001\nT47100,"4\'-0""",A2,\n', yardOptions);
+    const result = parseOffcutRack(
+      'Section,Length,Bay,Tag code\nCLS89,1250,A1,k-001\nT47100,"4\'-0""",A2,\n',
+      yardOptions,
+    );
     expect(result).toEqual({
       ok: true,
       items: [

@@ -9,4 +9,7 @@ export const yardSections: ImportOptions['sections'] = [
 
 const longest: Record<string, number | null> = { 'sec-47x100': 4800, 'sec-38x89': 3600, 'sec-22x150': null };
 
-export const yardOptions: ImportOptions = { sections: yardSections, maxLengthMm: (id) => longest[id] ?? null };
+export const yardOptions: ImportOptions = {
+  sections: yardSections,
+  maxLengthMm: (id) => longest[id] ?? null,
+};

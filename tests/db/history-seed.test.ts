@@ -18,7 +18,10 @@ describe('seeded yard history', () => {
       const boards = await db.select().from(schema.planBoards).where(eq(schema.planBoards.planId, plan.id));
       expect(boards.every((b) => b.status === 'done' && b.doneAt)).toBe(true);
       expect(boards.length).toBe(totals.boards);
-      const pieceMm = boards.reduce((n, b) => n + (b.pieces as BoardPiece[]).reduce((m, p) => m + p.lengthMm, 0), 0);
+      const pieceMm = boards.reduce(
+        (n, b) => n + (b.pieces as BoardPiece[]).reduce((m, p) => m + p.lengthMm, 0),
+        0,
+      );
       expect(pieceMm).toBe(totals.pieceMm);
       expect(boards.reduce((n, b) => n + b.lengthMm, 0)).toBe(totals.materialMm);
       // Every piece of the job was placed, and the solver's plan is never dearer than the longest-first one.
@@ -32,9 +35,18 @@ describe('seeded yard history', () => {
   it('every kept remainder of a cut board became a rack offcut with an offcut_made movement', async () => {
     const { db, close } = await createTestDb();
     const cut = and(eq(schema.planBoards.keepRemainder, true), eq(schema.planBoards.status, 'done'));
-    const [{ kept }] = await db.select({ kept: sql<number>`count(*)::int` }).from(schema.planBoards).where(cut);
-    const [{ made }] = await db.select({ made: sql<number>`count(*)::int` }).from(schema.stockMovements).where(eq(schema.stockMovements.kind, 'offcut_made'));
-    const [{ linked }] = await db.select({ linked: sql<number>`count(new_offcut_id)::int` }).from(schema.planBoards).where(cut);
+    const [{ kept }] = await db
+      .select({ kept: sql<number>`count(*)::int` })
+      .from(schema.planBoards)
+      .where(cut);
+    const [{ made }] = await db
+      .select({ made: sql<number>`count(*)::int` })
+      .from(schema.stockMovements)
+      .where(eq(schema.stockMovements.kind, 'offcut_made'));
+    const [{ linked }] = await db
+      .select({ linked: sql<number>`count(new_offcut_id)::int` })
+      .from(schema.planBoards)
+      .where(cut);
     expect(made).toBe(kept);
     expect(linked).toBe(kept);
     await close();

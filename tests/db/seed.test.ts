@@ -31,7 +31,9 @@ describe('schema and demo seed on in-memory PGlite', () => {
     const jobs = await db.select().from(schema.jobs);
     expect(jobs.length).toBeGreaterThanOrEqual(4);
     // The seeded history adds done jobs to the open ones.
-    expect(new Set(jobs.map((j) => j.status))).toEqual(new Set(['draft', 'released', 'planned', 'cancelled', 'done']));
+    expect(new Set(jobs.map((j) => j.status))).toEqual(
+      new Set(['draft', 'released', 'planned', 'cancelled', 'done']),
+    );
     const lengths = await db.select().from(schema.stockLengths);
     // UK stock lengths step by 300 mm (common practice, see TRADE.md; no published source in the test).
     for (const l of lengths) expect(l.lengthMm % 300).toBe(0);

@@ -8,7 +8,10 @@ class FrameEditor {
     return this.page.getByTestId(`panel-card-${index}`);
   }
   async add(kind: string) {
-    await this.page.getByTestId('add-panel').getByRole('button', { name: `+ ${kind}`, exact: true }).click();
+    await this.page
+      .getByTestId('add-panel')
+      .getByRole('button', { name: `+ ${kind}`, exact: true })
+      .click();
   }
   async fill(index: number, values: Record<string, string>) {
     for (const [label, value] of Object.entries(values)) {
@@ -37,16 +40,46 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
 
   const editor = new FrameEditor(page);
   await editor.add('Wall');
-  await editor.fill(0, { 'Panel name': 'back wall', Section: '47×100 C24 treated', Length: '2400', Height: '2200', 'Stud centres': '400' });
+  await editor.fill(0, {
+    'Panel name': 'back wall',
+    Section: '47×100 C24 treated',
+    Length: '2400',
+    Height: '2200',
+    'Stud centres': '400',
+  });
   await editor.add('Wall');
   // Feet-inches are read too: 6'-2 13/16" is 1900 mm to the nearest millimetre.
-  await editor.fill(1, { 'Panel name': 'front wall', Length: '2.4 m', Height: `6'-2 13/16"`, 'Stud centres': '400' });
+  await editor.fill(1, {
+    'Panel name': 'front wall',
+    Length: '2.4 m',
+    Height: `6'-2 13/16"`,
+    'Stud centres': '400',
+  });
   await editor.add('Sloped wall');
-  await editor.fill(2, { 'Panel name': 'side wall', Length: '1500', 'Low side height': '1900', 'High side height': '2200', 'Stud centres': '400' });
+  await editor.fill(2, {
+    'Panel name': 'side wall',
+    Length: '1500',
+    'Low side height': '1900',
+    'High side height': '2200',
+    'Stud centres': '400',
+  });
   await editor.add('Door or window opening');
-  await editor.fill(3, { 'Panel name': 'side door', 'In wall': 'side wall', 'From wall start': '450', Width: '700', Height: '1650' });
+  await editor.fill(3, {
+    'Panel name': 'side door',
+    'In wall': 'side wall',
+    'From wall start': '450',
+    Width: '700',
+    Height: '1650',
+  });
   await editor.add('Roof');
-  await editor.fill(4, { 'Panel name': 'roof', 'Rafter section': '47×150 C24 treated', 'Span (front to back)': '1500', Rise: '300', 'Length along the walls': '2400', 'Rafter centres': '400' });
+  await editor.fill(4, {
+    'Panel name': 'roof',
+    'Rafter section': '47×150 C24 treated',
+    'Span (front to back)': '1500',
+    Rise: '300',
+    'Length along the walls': '2400',
+    'Rafter centres': '400',
+  });
 
   await editor.previewUpToDate();
   await expect(editor.row('front wall stud')).toContainText('1759'); // 1900 less a bottom plate and two top plates of 47
@@ -84,12 +117,16 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
 
   // The schedule remembers the job made from it.
   await page.goto('/frames');
-  await expect(page.getByTestId('schedule-list').getByRole('row').filter({ hasText: 'Quarry Lane' })).toContainText('J-');
+  await expect(
+    page.getByTestId('schedule-list').getByRole('row').filter({ hasText: 'Quarry Lane' }),
+  ).toContainText('J-');
 });
 
 test('a saw operator cannot open frame schedules or use their API', async ({ page }) => {
   await signIn(page, DEMO.saw);
   await page.goto('/frames');
   await expect(page.getByTestId('access-denied')).toBeVisible();
-  expect((await page.request.post('/api/frames/preview', { data: { unit: 'mm', panels: [] } })).status()).toBe(403);
+  expect(
+    (await page.request.post('/api/frames/preview', { data: { unit: 'mm', panels: [] } })).status(),
+  ).toBe(403);
 });

@@ -19,7 +19,9 @@ async function plan(request: APIRequestContext, jobId: number) {
   return (await response.json()) as { id: number; boards: Board[] };
 }
 
-test('two plans want the same rack offcut: one release wins, the other names the offcut and plans again', async ({ page }) => {
+test('two plans want the same rack offcut: one release wins, the other names the offcut and plans again', async ({
+  page,
+}) => {
   test.setTimeout(120_000);
   await signIn(page, DEMO.hand);
   const request = page.request;
@@ -28,7 +30,10 @@ test('two plans want the same rack offcut: one release wins, the other names the
   const probe = await plan(request, await jobWithOnePiece(request, 'Probe', 300));
   const offcut = probe.boards.find((b) => b.source === 'offcut');
   expect(offcut).toBeTruthy();
-  const [a, b] = [await jobWithOnePiece(request, 'Hollis Vane', offcut!.lengthMm), await jobWithOnePiece(request, 'Marta Quill', offcut!.lengthMm)];
+  const [a, b] = [
+    await jobWithOnePiece(request, 'Hollis Vane', offcut!.lengthMm),
+    await jobWithOnePiece(request, 'Marta Quill', offcut!.lengthMm),
+  ];
   const [planA, planB] = [await plan(request, a), await plan(request, b)];
   expect(planA.boards[0].offcutId).toBe(offcut!.offcutId);
   expect(planB.boards[0].offcutId).toBe(offcut!.offcutId);

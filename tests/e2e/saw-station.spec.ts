@@ -2,7 +2,11 @@ import { expect, test, type Browser } from '@playwright/test';
 import { DEMO, signIn } from './support/sign-in';
 import { SawStationPage } from './support/saw-station';
 
-const tablet = (width: number, height: number) => ({ viewport: { width, height }, hasTouch: true, isMobile: false });
+const tablet = (width: number, height: number) => ({
+  viewport: { width, height },
+  hasTouch: true,
+  isMobile: false,
+});
 
 async function officePage(browser: Browser) {
   const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
@@ -14,7 +18,10 @@ async function officePage(browser: Browser) {
 test.describe('the saw station in landscape (1024×768, touch)', () => {
   test.use(tablet(1024, 768));
 
-  test('the operator cuts a whole released plan while the office watches the progress', async ({ page, browser }) => {
+  test('the operator cuts a whole released plan while the office watches the progress', async ({
+    page,
+    browser,
+  }) => {
     await signIn(page, DEMO.saw);
     await expect(page).toHaveURL(/\/saw$/);
     await page.getByTestId('queue-J-1002').tap();
@@ -67,7 +74,10 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
 test.describe('the saw station in portrait (768×1024, touch)', () => {
   test.use(tablet(768, 1024));
 
-  test('a bad board is re-planned at once, labels print, and new offcuts are on the rack', async ({ page, browser }) => {
+  test('a bad board is re-planned at once, labels print, and new offcuts are on the rack', async ({
+    page,
+    browser,
+  }) => {
     // The yard hand releases J-1003, which uses rack offcuts.
     const office = await officePage(browser);
     const { jobs } = await (await office.request.get('/api/jobs?q=J-1003')).json();

@@ -13,7 +13,9 @@ test.describe('the owner runs the stock, the rack and the reports', () => {
 
     const form = page.getByTestId('receive-form');
     await form.getByLabel('Delivery note or reference').fill('DN-5521 Northwood Timber');
-    await form.getByLabel('Stock length, line 1').selectOption({ label: `47×100 C24 treated — 4800 mm (${before} on hand)` });
+    await form
+      .getByLabel('Stock length, line 1')
+      .selectOption({ label: `47×100 C24 treated — 4800 mm (${before} on hand)` });
     await form.getByLabel('Boards received, line 1').fill('12');
     await form.getByRole('button', { name: 'Receive delivery' }).click();
     await expect(page.getByTestId('receive-done')).toContainText('Received 12 boards');

@@ -2,12 +2,18 @@ import { expect, test } from '@playwright/test';
 import { caughtMail } from './support/mail';
 import { DEMO, signIn } from './support/sign-in';
 
-const csvFile = (name: string, rows: string[]) => ({ name, mimeType: 'text/csv', buffer: Buffer.from(rows.join('\n')) });
+const csvFile = (name: string, rows: string[]) => ({
+  name,
+  mimeType: 'text/csv',
+  buffer: Buffer.from(rows.join('\n')),
+});
 
 test.describe('the yard hand flow', () => {
   test.setTimeout(180_000);
 
-  test('create a job, fix a bad cut list, plan, e-mail the sheet, release and take back', async ({ page }) => {
+  test('create a job, fix a bad cut list, plan, e-mail the sheet, release and take back', async ({
+    page,
+  }) => {
     await signIn(page, DEMO.hand);
     await page.getByRole('button', { name: 'New job' }).click();
     const form = page.getByTestId('new-job-form');
@@ -20,13 +26,29 @@ test.describe('the yard hand flow', () => {
 
     // A file with an unknown section on line 3: nothing is imported and the row is named.
     const upload = page.getByLabel('Cut list file');
-    await upload.setInputFiles(csvFile('shed.csv', ['section,length,quantity,label', 'T47100,2400,6,stud', 'Oak beam,1200,2,rail', 'CLS3889,"7\' 8 5/8""",2,door stud']));
+    await upload.setInputFiles(
+      csvFile('shed.csv', [
+        'section,length,quantity,label',
+        'T47100,2400,6,stud',
+        'Oak beam,1200,2,rail',
+        'CLS3889,"7\' 8 5/8""",2,door stud',
+      ]),
+    );
     const errors = page.getByTestId('import-errors');
     await expect(errors).toContainText('Nothing was saved');
-    await expect(page.getByTestId('import-error').first()).toContainText('Line 3, section: Unknown section "Oak beam"');
+    await expect(page.getByTestId('import-error').first()).toContainText(
+      'Line 3, section: Unknown section "Oak beam"',
+    );
     await expect(page.getByTestId('item-row')).toHaveCount(0);
 
-    await upload.setInputFiles(csvFile('shed-fixed.csv', ['section,length,quantity,label', 'T47100,2400,6,stud', 'T47100,1.2m,2,rail', 'CLS3889,"7\' 8 5/8""",2,door stud']));
+    await upload.setInputFiles(
+      csvFile('shed-fixed.csv', [
+        'section,length,quantity,label',
+        'T47100,2400,6,stud',
+        'T47100,1.2m,2,rail',
+        'CLS3889,"7\' 8 5/8""",2,door stud',
+      ]),
+    );
     await expect(page.getByTestId('import-done')).toContainText('Imported 3 rows');
     await expect(page.getByTestId('item-row')).toHaveCount(3);
     // 7'-8 5/8" = 2352.675 mm, stored as 2353 (1 in = 25.4 mm exactly).
@@ -39,8 +61,13 @@ test.describe('the yard hand flow', () => {
     await expect(page.getByTestId('plan-gap')).toBeVisible();
     await expect(page.getByTestId('plan-total-price')).toContainText('£');
 
-    const reference = (await page.getByRole('link', { name: /Wren Castellane/ }).textContent())!.split(' · ')[0].trim();
-    await page.getByTestId('email-sheet-form').getByRole('button', { name: 'E-mail cut sheet and quote' }).click();
+    const reference = (await page.getByRole('link', { name: /Wren Castellane/ }).textContent())!
+      .split(' · ')[0]
+      .trim();
+    await page
+      .getByTestId('email-sheet-form')
+      .getByRole('button', { name: 'E-mail cut sheet and quote' })
+      .click();
     await expect(page.getByTestId('email-result')).toContainText('sent to wren@example.com');
     const mail = (await caughtMail()).find((m) => m.subject.includes(reference));
     expect(mail?.to).toEqual(['wren@example.com']);
@@ -68,6 +95,13 @@ test.describe('the yard hand flow', () => {
   test('a saw operator cannot plan or import through the API', async ({ page }) => {
     await signIn(page, DEMO.saw);
     expect((await page.request.post('/api/jobs/1/plans', { data: {} })).status()).toBe(403);
-    expect((await page.request.post('/api/jobs/1/items/import', { data: 'section,length,quantity\nT47100,900,1', headers: { 'content-type': 'text/csv' } })).status()).toBe(403);
+    expect(
+      (
+        await page.request.post('/api/jobs/1/items/import', {
+          data: 'section,length,quantity\nT47100,900,1',
+          headers: { 'content-type': 'text/csv' },
+        })
+      ).status(),
+    ).toBe(403);
   });
 });

@@ -31,7 +31,12 @@ describe('POST /api/frames/preview', () => {
   // TRADE.md, Framing: a 4.8 m wall at 600 mm centres has ceil(4800 / 600) + 1 = 9 studs — common practice, no published source.
   it('lists 9 studs for a 4800 mm wall at 600 mm centres, with the structure notice', async () => {
     actAs(AS.hand);
-    const res = await preview({ unit: 'mm', panels: [{ kind: 'wall', name: 'back wall', sectionId: stud, length: 4800, height: 2400, centres: 600 }] });
+    const res = await preview({
+      unit: 'mm',
+      panels: [
+        { kind: 'wall', name: 'back wall', sectionId: stud, length: 4800, height: 2400, centres: 600 },
+      ],
+    });
     expect(res.status).toBe(200);
     const studs = res.json.items.find((i: { label: string }) => i.label === 'back wall stud');
     expect(studs).toMatchObject({ sectionId: stud, quantity: 9, length: 2400 - 3 * 47 });
@@ -42,7 +47,12 @@ describe('POST /api/frames/preview', () => {
   // R. Hunter, "Framing Shed Roofs": rafter along the slope = √(run² + rise²); run 2500, rise 500 → 2549.5 mm.
   it('gives the rafter its slope length and its angled cut', async () => {
     actAs(AS.hand);
-    const res = await preview({ unit: 'mm', panels: [{ kind: 'roof', name: 'roof', sectionId: rafter, span: 2500, rise: 500, centres: 600, length: 2400 }] });
+    const res = await preview({
+      unit: 'mm',
+      panels: [
+        { kind: 'roof', name: 'roof', sectionId: rafter, span: 2500, rise: 500, centres: 600, length: 2400 },
+      ],
+    });
     expect(res.status).toBe(200);
     const rafters = res.json.items.find((i: { label: string }) => i.label === 'roof rafter');
     expect(rafters.length).toBe(2550);
@@ -55,7 +65,9 @@ describe('POST /api/frames/preview', () => {
     const res = await preview({ unit: 'imperial', panels: leanToPanels(stud, rafter) });
     expect(res.status).toBe(200);
     const labels: string[] = res.json.items.map((i: { label: string }) => i.label);
-    expect(labels).toEqual(expect.arrayContaining(['door opening head', 'door opening trimmer', 'front wall stud', 'roof rafter']));
+    expect(labels).toEqual(
+      expect.arrayContaining(['door opening head', 'door opening trimmer', 'front wall stud', 'roof rafter']),
+    );
     expect(labels.some((l) => l.startsWith('side wall stud'))).toBe(true);
     const sideStuds = res.json.items.filter((i: { label: string }) => i.label.startsWith('side wall stud'));
     for (const s of sideStuds) expect(s.angle).toBeCloseTo((Math.atan2(300, 1500) * 180) / Math.PI, 1);
@@ -64,12 +76,28 @@ describe('POST /api/frames/preview', () => {
 
   it('names the field for each bad geometry with a clear 422', async () => {
     actAs(AS.hand);
-    const tooWideCentres = await preview({ unit: 'mm', panels: [{ kind: 'wall', name: 'w', sectionId: stud, length: 300, height: 2400, centres: 400 }] });
+    const tooWideCentres = await preview({
+      unit: 'mm',
+      panels: [{ kind: 'wall', name: 'w', sectionId: stud, length: 300, height: 2400, centres: 400 }],
+    });
     expect(tooWideCentres.status).toBe(422);
     expect(paths(tooWideCentres)).toEqual(['panels.0.centres']);
     expect(tooWideCentres.json.issues[0].message).toContain('larger than the wall length');
 
-    const upsideDown = await preview({ unit: 'mm', panels: [{ kind: 'sloped_wall', name: 's', sectionId: stud, length: 1500, lowHeight: 2200, highHeight: 1900, centres: 400 }] });
+    const upsideDown = await preview({
+      unit: 'mm',
+      panels: [
+        {
+          kind: 'sloped_wall',
+          name: 's',
+          sectionId: stud,
+          length: 1500,
+          lowHeight: 2200,
+          highHeight: 1900,
+          centres: 400,
+        },
+      ],
+    });
     expect(upsideDown.status).toBe(422);
     expect(paths(upsideDown)).toEqual(['panels.0.highHeight']);
     expect(upsideDown.json.issues[0].message).toContain('lower than the low side');
@@ -88,10 +116,16 @@ describe('POST /api/frames/preview', () => {
 
   it('answers 422 for a section the yard does not have and for fields of the wrong type', async () => {
     actAs(AS.hand);
-    const unknown = await preview({ unit: 'mm', panels: [{ kind: 'wall', name: 'w', sectionId: 9999, length: 2400, height: 2400, centres: 400 }] });
+    const unknown = await preview({
+      unit: 'mm',
+      panels: [{ kind: 'wall', name: 'w', sectionId: 9999, length: 2400, height: 2400, centres: 400 }],
+    });
     expect(unknown.status).toBe(422);
     expect(paths(unknown)).toEqual(['panels.0.sectionId']);
-    const wrongType = await preview({ unit: 'mm', panels: [{ kind: 'wall', name: 'w', sectionId: stud, length: '2.4 m', height: 2400, centres: 400 }] });
+    const wrongType = await preview({
+      unit: 'mm',
+      panels: [{ kind: 'wall', name: 'w', sectionId: stud, length: '2.4 m', height: 2400, centres: 400 }],
+    });
     expect(wrongType.status).toBe(422);
     expect(paths(wrongType)).toEqual(['panels.0.length']);
     expect((await preview({ unit: 'mm', panels: [] })).status).toBe(422);

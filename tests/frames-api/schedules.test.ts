@@ -24,7 +24,9 @@ describe('frame schedules CRUD', () => {
     actAs(AS.saw);
     expect((await call(list)).status).toBe(403);
     expect((await call(create, { method: 'POST', body: { name: 'x', panels } })).status).toBe(403);
-    expect((await call(update, { method: 'PUT', params: params(1), body: { name: 'x', panels } })).status).toBe(403);
+    expect(
+      (await call(update, { method: 'PUT', params: params(1), body: { name: 'x', panels } })).status,
+    ).toBe(403);
     expect((await call(remove, { method: 'DELETE', params: params(1) })).status).toBe(403);
   });
 
@@ -34,14 +36,34 @@ describe('frame schedules CRUD', () => {
     expect(before.status).toBe(200);
     expect(before.json.schedules.map((s: { name: string }) => s.name)).toContain('Lean-to for Ines Marwood');
 
-    const created = await call(create, { method: 'POST', body: { name: 'Lean-to for the Quarry Lane garden', customerName: 'Nell Ashdown', unit: 'imperial', panels } });
+    const created = await call(create, {
+      method: 'POST',
+      body: {
+        name: 'Lean-to for the Quarry Lane garden',
+        customerName: 'Nell Ashdown',
+        unit: 'imperial',
+        panels,
+      },
+    });
     expect(created.status).toBe(201);
     const id = created.json.schedule.id;
-    expect(created.json.schedule).toMatchObject({ name: 'Lean-to for the Quarry Lane garden', unit: 'imperial', jobs: [] });
+    expect(created.json.schedule).toMatchObject({
+      name: 'Lean-to for the Quarry Lane garden',
+      unit: 'imperial',
+      jobs: [],
+    });
     // Defaults are filled in on save: a wall gets a bottom plate and a double top plate.
-    expect(created.json.schedule.panels[0]).toMatchObject({ bottomPlate: true, topPlate: 'double', nogginRows: 0 });
+    expect(created.json.schedule.panels[0]).toMatchObject({
+      bottomPlate: true,
+      topPlate: 'double',
+      nogginRows: 0,
+    });
 
-    const edited = await call(update, { method: 'PUT', params: params(id), body: { name: 'Lean-to, deeper', customerName: 'Nell Ashdown', unit: 'mm', panels: panels.slice(0, 2) } });
+    const edited = await call(update, {
+      method: 'PUT',
+      params: params(id),
+      body: { name: 'Lean-to, deeper', customerName: 'Nell Ashdown', unit: 'mm', panels: panels.slice(0, 2) },
+    });
     expect(edited.status).toBe(200);
     const got = await call(read, { params: params(id) });
     expect(got.json.schedule).toMatchObject({ name: 'Lean-to, deeper', unit: 'mm' });
@@ -54,21 +76,34 @@ describe('frame schedules CRUD', () => {
   it('saves an empty schedule to start from, but refuses bad geometry per field', async () => {
     actAs(AS.owner);
     expect((await call(create, { method: 'POST', body: { name: 'Empty start' } })).status).toBe(201);
-    const bad = await call(create, { method: 'POST', body: { name: '', panels: [{ ...panels[2], highHeight: 1000 }] } });
+    const bad = await call(create, {
+      method: 'POST',
+      body: { name: '', panels: [{ ...panels[2], highHeight: 1000 }] },
+    });
     expect(bad.status).toBe(422);
     // Every field that needs attention is named at once: the name and the slope that runs downhill.
-    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['name', 'panels.0.highHeight']);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual([
+      'name',
+      'panels.0.highHeight',
+    ]);
   });
 
   it('copies a schedule into a new one that is edited on its own', async () => {
     actAs(AS.hand);
-    const { json } = await call(create, { method: 'POST', body: { name: 'Stud wall', panels: panels.slice(0, 1) } });
+    const { json } = await call(create, {
+      method: 'POST',
+      body: { name: 'Stud wall', panels: panels.slice(0, 1) },
+    });
     const copied = await call(copy, { method: 'POST', params: params(json.schedule.id) });
     expect(copied.status).toBe(201);
     expect(copied.json.schedule.id).not.toBe(json.schedule.id);
     expect(copied.json.schedule.name).toBe('Stud wall (copy)');
     expect(copied.json.schedule.panels).toEqual(json.schedule.panels);
-    await call(update, { method: 'PUT', params: params(copied.json.schedule.id), body: { name: 'Stud wall B', panels: [] } });
+    await call(update, {
+      method: 'PUT',
+      params: params(copied.json.schedule.id),
+      body: { name: 'Stud wall B', panels: [] },
+    });
     expect((await call(read, { params: params(json.schedule.id) })).json.schedule.panels).toHaveLength(1);
   });
 
@@ -77,6 +112,8 @@ describe('frame schedules CRUD', () => {
     expect((await call(read, { params: params(9999) })).status).toBe(404);
     expect((await call(read, { params: params('abc') })).status).toBe(404);
     expect((await call(copy, { method: 'POST', params: params(9999) })).status).toBe(404);
-    expect((await call(update, { method: 'PUT', params: params(9999), body: { name: 'x' } })).status).toBe(404);
+    expect((await call(update, { method: 'PUT', params: params(9999), body: { name: 'x' } })).status).toBe(
+      404,
+    );
   });
 });

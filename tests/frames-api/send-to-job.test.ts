@@ -17,24 +17,40 @@ beforeEach(async () => {
   t = await useApiTestDb();
   panels = leanToPanels(await sectionIdOf(t.db, 'T47100'), await sectionIdOf(t.db, 'T47150'));
   actAs(AS.hand);
-  scheduleId = (await call(create, { method: 'POST', body: { name: 'Lean-to', customerName: 'Nell Ashdown', panels } })).json.schedule.id;
+  scheduleId = (
+    await call(create, { method: 'POST', body: { name: 'Lean-to', customerName: 'Nell Ashdown', panels } })
+  ).json.schedule.id;
 });
 afterEach(() => t.close());
 afterAll(closeTemplate);
 
-const sendTo = (body: unknown, id = scheduleId) => call(send, { method: 'POST', params: { scheduleId: String(id) }, body });
-const countRows = async () => ({ jobs: (await t.db.select().from(jobs)).length, items: (await t.db.select().from(jobItems)).length });
+const sendTo = (body: unknown, id = scheduleId) =>
+  call(send, { method: 'POST', params: { scheduleId: String(id) }, body });
+const countRows = async () => ({
+  jobs: (await t.db.select().from(jobs)).length,
+  items: (await t.db.select().from(jobItems)).length,
+});
 
 describe('POST /api/frames/[scheduleId]/send-to-job', () => {
   it('makes a new job from the cut list, summed by section, and the job remembers the schedule', async () => {
     const res = await sendTo({ newJob: { customerName: 'Nell Ashdown', dueDate: '2026-12-04' } });
     expect(res.status).toBe(201);
     const [job] = await t.db.select().from(jobs).where(eq(jobs.id, res.json.jobId));
-    expect(job).toMatchObject({ frameScheduleId: scheduleId, status: 'draft', customerName: 'Nell Ashdown', dueDate: '2026-12-04' });
+    expect(job).toMatchObject({
+      frameScheduleId: scheduleId,
+      status: 'draft',
+      customerName: 'Nell Ashdown',
+      dueDate: '2026-12-04',
+    });
     expect(job.reference).toBe('J-1005'); // the next after the demo yard's J-1001..J-1004
 
     const items = await t.db.select().from(jobItems).where(eq(jobItems.jobId, job.id));
-    const previewed = (await call(preview, { method: 'POST', body: { unit: 'mm', panels } })).json.items as { sectionId: number; length: number; quantity: number; angle?: number }[];
+    const previewed = (await call(preview, { method: 'POST', body: { unit: 'mm', panels } })).json.items as {
+      sectionId: number;
+      length: number;
+      quantity: number;
+      angle?: number;
+    }[];
     // Every piece arrives: total count and total length per section match the preview.
     const totals = (rows: { sectionId: number; length: number; quantity: number }[]) => {
       const sums = new Map<number, { pieces: number; mm: number }>();
@@ -44,11 +60,15 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
       }
       return sums;
     };
-    expect(totals(items.map((i) => ({ sectionId: i.sectionId, length: i.lengthMm, quantity: i.quantity })))).toEqual(totals(previewed));
+    expect(
+      totals(items.map((i) => ({ sectionId: i.sectionId, length: i.lengthMm, quantity: i.quantity }))),
+    ).toEqual(totals(previewed));
     // Items come grouped by section, longest first within a section.
     for (let k = 1; k < items.length; k++) {
       const [a, b] = [items[k - 1], items[k]];
-      expect(a.sectionId < b.sectionId || (a.sectionId === b.sectionId && a.lengthMm >= b.lengthMm)).toBe(true);
+      expect(a.sectionId < b.sectionId || (a.sectionId === b.sectionId && a.lengthMm >= b.lengthMm)).toBe(
+        true,
+      );
     }
     const rafter = items.find((i) => i.label === 'roof rafter');
     expect(rafter?.angleTenths).toBe(113); // atan(300 / 1500) = 11.3°
@@ -60,8 +80,11 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
     const planned = await call(plan, { method: 'POST', params: { jobId: String(jobId) }, body: {} });
     expect(planned.status).toBe(201);
     const items = await t.db.select().from(jobItems).where(eq(jobItems.jobId, jobId));
-    const onBoards = planned.json.boards.flatMap((b: { pieces: { jobItemId: number }[] }) => b.pieces.map((p) => p.jobItemId));
-    for (const item of items) expect(onBoards.filter((id: number) => id === item.id)).toHaveLength(item.quantity);
+    const onBoards = planned.json.boards.flatMap((b: { pieces: { jobItemId: number }[] }) =>
+      b.pieces.map((p) => p.jobItemId),
+    );
+    for (const item of items)
+      expect(onBoards.filter((id: number) => id === item.id)).toHaveLength(item.quantity);
   });
 
   it('adds to an existing draft job, after its own items', async () => {
@@ -73,7 +96,9 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
     expect(res.json.jobId).toBe(draft.id);
     const after = await t.db.select().from(jobItems).where(eq(jobItems.jobId, draft.id));
     expect(after.length).toBe(before.length + res.json.lineCount);
-    expect(Math.min(...after.filter((i) => !before.some((b) => b.id === i.id)).map((i) => i.position))).toBeGreaterThan(Math.max(...before.map((b) => b.position)));
+    expect(
+      Math.min(...after.filter((i) => !before.some((b) => b.id === i.id)).map((i) => i.position)),
+    ).toBeGreaterThan(Math.max(...before.map((b) => b.position)));
     expect((await t.db.select().from(jobs).where(eq(jobs.id, draft.id)))[0].frameScheduleId).toBe(scheduleId);
   });
 
@@ -96,7 +121,10 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
     expect((await sendTo({ newJob: { customerName: 'X', reference: 'J-1001' } })).status).toBe(409);
     const bad = await sendTo({ newJob: { customerName: '', dueDate: 'Friday' } });
     expect(bad.status).toBe(422);
-    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['newJob.customerName', 'newJob.dueDate']);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual([
+      'newJob.customerName',
+      'newJob.dueDate',
+    ]);
     expect((await sendTo({ jobId: 1, newJob: { customerName: 'X' } })).status).toBe(422);
     expect((await sendTo({ newJob: { customerName: 'X' } }, 9999)).status).toBe(404);
     expect(await countRows()).toEqual(start);

@@ -3,7 +3,18 @@ import { generateFrameItems, getDoorLeafGeometry, type DoorLeafPanel } from '@/l
 import { parsePanels, sections } from './helpers';
 
 const leaf = (extra: Record<string, unknown> = {}) =>
-  parsePanels([{ kind: 'door_leaf', name: 'door', sectionId: 3, boardSectionId: 2, openingWidth: 800, openingHeight: 1900, boardCover: 115, ...extra }]);
+  parsePanels([
+    {
+      kind: 'door_leaf',
+      name: 'door',
+      sectionId: 3,
+      boardSectionId: 2,
+      openingWidth: 800,
+      openingHeight: 1900,
+      boardCover: 115,
+      ...extra,
+    },
+  ]);
 
 describe('ledged and braced door', () => {
   // Leaf = opening less clearances, about 15 mm across and 10–20 mm on height — common practice, no published source.
@@ -48,7 +59,9 @@ describe('ledged and braced door', () => {
     const brace = items.find((i) => i.label === 'door brace')!;
     const panels = leaf();
     const b = getDoorLeafGeometry(panels[0] as DoorLeafPanel, panels, { sections })!.braces[0];
-    expect(brace.length).toBeGreaterThanOrEqual(Math.floor(Math.hypot(b.end.x - b.start.x, b.end.y - b.start.y)));
+    expect(brace.length).toBeGreaterThanOrEqual(
+      Math.floor(Math.hypot(b.end.x - b.start.x, b.end.y - b.start.y)),
+    );
     expect(brace.angle).toBeGreaterThan(0);
   });
 });

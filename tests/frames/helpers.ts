@@ -1,4 +1,9 @@
-import { framePreviewBodySchema, type FrameSchedulePanel, type FrameSchedulePanelInput, type SectionDimensions } from '@/lib/frames';
+import {
+  framePreviewBodySchema,
+  type FrameSchedulePanel,
+  type FrameSchedulePanelInput,
+  type SectionDimensions,
+} from '@/lib/frames';
 
 // Invented yard sections for tests: 1 = 47×100 framing, 2 = 19×125 cladding, 3 = 22×150 ledges.
 export const sections = new Map<number, SectionDimensions>([

@@ -5,9 +5,26 @@ import { parsePanels, sections } from './helpers';
 // Stud each side of the opening, a head across, short studs above — common practice, no published source.
 describe('openings in a wall', () => {
   const panels = parsePanels([
-    { kind: 'wall', id: 'back', name: 'back wall', sectionId: 1, length: 3600, height: 2400, centres: 600, topPlate: 'double' },
+    {
+      kind: 'wall',
+      id: 'back',
+      name: 'back wall',
+      sectionId: 1,
+      length: 3600,
+      height: 2400,
+      centres: 600,
+      topPlate: 'double',
+    },
     { kind: 'opening', name: 'door', wallId: 'back', position: 1000, width: 900, height: 2000 },
-    { kind: 'opening', name: 'window', wallId: 'back', position: 2300, width: 600, height: 500, sillHeight: 1000 },
+    {
+      kind: 'opening',
+      name: 'window',
+      wallId: 'back',
+      position: 2300,
+      width: 600,
+      height: 500,
+      sillHeight: 1000,
+    },
   ]);
   const { items, warnings } = generateFrameItems(panels, { sections });
   const q = (label: string) => items.find((i) => i.label === label);

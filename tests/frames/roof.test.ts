@@ -3,7 +3,9 @@ import { FRAME_STRUCTURE_NOTICE, generateFrameItems, getRoofGeometry } from '@/l
 import { parsePanels, sections } from './helpers';
 
 const roof = (extra: Record<string, number>) =>
-  parsePanels([{ kind: 'roof', name: 'roof', sectionId: 1, span: 2500, rise: 500, centres: 600, length: 3000, ...extra }]);
+  parsePanels([
+    { kind: 'roof', name: 'roof', sectionId: 1, span: 2500, rise: 500, centres: 600, length: 3000, ...extra },
+  ]);
 
 describe('mono-pitch roof', () => {
   // R. Hunter, "Framing Shed Roofs": run 2500, rise 500 → 2549.5 mm along the slope;
@@ -12,7 +14,9 @@ describe('mono-pitch roof', () => {
     const [panel] = roof({});
     if (panel.kind !== 'roof') throw new Error('roof expected');
     expect(getRoofGeometry(panel).rafterLength).toBeCloseTo(2549.5, 1);
-    expect(generateFrameItems([panel], { sections }).items.find((i) => i.label === 'roof rafter')?.length).toBe(2550);
+    expect(
+      generateFrameItems([panel], { sections }).items.find((i) => i.label === 'roof rafter')?.length,
+    ).toBe(2550);
   });
 
   it('a 500 mm eaves overhang adds 510 mm', () => {
@@ -23,14 +27,26 @@ describe('mono-pitch roof', () => {
   });
 
   it('a pitch gives the same rafter as the matching rise', () => {
-    const [byPitch] = parsePanels([{ kind: 'roof', name: 'r', sectionId: 1, span: 2500, pitch: (Math.atan(0.2) * 180) / Math.PI, centres: 600, length: 3000 }]);
+    const [byPitch] = parsePanels([
+      {
+        kind: 'roof',
+        name: 'r',
+        sectionId: 1,
+        span: 2500,
+        pitch: (Math.atan(0.2) * 180) / Math.PI,
+        centres: 600,
+        length: 3000,
+      },
+    ]);
     if (byPitch.kind !== 'roof') throw new Error('roof expected');
     expect(getRoofGeometry(byPitch).rafterLength).toBeCloseTo(2549.5, 1);
   });
 
   // Rafter count follows the stud rule: ceil(3000 / 600) + 1 = 6 (common practice).
   it('spaces rafters like studs, adds fly rafters, lookouts and fascias, and carries the notice', () => {
-    const result = generateFrameItems(roof({ sideOverhang: 200, fasciaSectionId: 3, eavesOverhang: 300 }), { sections });
+    const result = generateFrameItems(roof({ sideOverhang: 200, fasciaSectionId: 3, eavesOverhang: 300 }), {
+      sections,
+    });
     const q = (label: string) => result.items.find((i) => i.label === label);
     expect(q('roof rafter')).toMatchObject({ quantity: 6, angle: 11.3 });
     expect(q('roof fly rafter')?.quantity).toBe(2);

@@ -14,17 +14,39 @@ describe('mono-pitch wall', () => {
     [600, 300],
     [400, 200],
   ])('6 in 12 slope at %i mm centres steps each stud by %i mm', (centres, step) => {
-    const panels = parsePanels([{ kind: 'sloped_wall', name: 'side', sectionId: 1, length: 4800, lowHeight: 1800, highHeight: 4200, centres }]);
+    const panels = parsePanels([
+      {
+        kind: 'sloped_wall',
+        name: 'side',
+        sectionId: 1,
+        length: 4800,
+        lowHeight: 1800,
+        highHeight: 4200,
+        centres,
+      },
+    ]);
     const studs = studsOf(generateFrameItems(panels, { sections }).items, 'side stud');
     const inner = studs.slice(1, -1); // end studs sit off the centre grid
     expect(inner.length).toBeGreaterThan(3);
-    for (let k = 1; k < inner.length; k++) expect(Math.abs(inner[k].length - inner[k - 1].length - step)).toBeLessThanOrEqual(1);
+    for (let k = 1; k < inner.length; k++)
+      expect(Math.abs(inner[k].length - inner[k - 1].length - step)).toBeLessThanOrEqual(1);
     // Top cut of 6 in 12 is atan(0.5) = 26.6°.
     expect(inner.every((s) => s.angle === 26.6)).toBe(true);
   });
 
   it('sloping top plate runs along the slope: 2400 long, 300 rise → 2419 mm', () => {
-    const panels = parsePanels([{ kind: 'sloped_wall', name: 'side', sectionId: 1, length: 2400, lowHeight: 1900, highHeight: 2200, centres: 400, topPlate: 'single' }]);
+    const panels = parsePanels([
+      {
+        kind: 'sloped_wall',
+        name: 'side',
+        sectionId: 1,
+        length: 2400,
+        lowHeight: 1900,
+        highHeight: 2200,
+        centres: 400,
+        topPlate: 'single',
+      },
+    ]);
     const plate = generateFrameItems(panels, { sections }).items.find((i) => i.label === 'side top plate');
     expect(plate).toMatchObject({ length: Math.round(Math.hypot(2400, 300)), quantity: 1, angle: 7.1 });
   });
@@ -38,10 +60,23 @@ describe('mono-pitch wall', () => {
         fc.constantFrom(300, 400, 450, 600),
         (length, low, rise, centres) => {
           fc.pre(centres <= length);
-          const [wall] = parsePanels([{ kind: 'sloped_wall', name: 'w', sectionId: 1, length, lowHeight: low, highHeight: low + rise, centres, nogginRows: 1 }]);
+          const [wall] = parsePanels([
+            {
+              kind: 'sloped_wall',
+              name: 'w',
+              sectionId: 1,
+              length,
+              lowHeight: low,
+              highHeight: low + rise,
+              centres,
+              nogginRows: 1,
+            },
+          ]);
           const { items } = generateFrameItems([wall], { sections });
           const shapes = layoutPanel(wall, { sections }).shapes.filter((s) => s.label.startsWith('w stud'));
-          const byX = shapes.map((s) => ({ x: Math.min(...s.points.map((p) => p.x)), mark: s.mark })).sort((a, b) => a.x - b.x);
+          const byX = shapes
+            .map((s) => ({ x: Math.min(...s.points.map((p) => p.x)), mark: s.mark }))
+            .sort((a, b) => a.x - b.x);
           const lengthOf = (mark: string | null) => items.find((i) => i.mark === mark)!.length;
           const maxStep = Math.ceil((centres * rise) / length) + 1;
           for (let k = 1; k < byX.length; k++) {
@@ -51,7 +86,9 @@ describe('mono-pitch wall', () => {
           }
           for (const item of items) {
             expect(item.length).toBeGreaterThan(0);
-            expect(item.length).toBeLessThanOrEqual(Math.ceil(Math.max(Math.hypot(length, rise), low + rise)));
+            expect(item.length).toBeLessThanOrEqual(
+              Math.ceil(Math.max(Math.hypot(length, rise), low + rise)),
+            );
           }
         },
       ),

@@ -25,7 +25,8 @@ const csv = (text: string, jobId = J1001, query = '') =>
     params: { jobId },
     headers: { 'content-type': 'text/csv' },
   });
-const itemsOf = async (jobId = 1) => t.db.select().from(schema.jobItems).where(eq(schema.jobItems.jobId, jobId));
+const itemsOf = async (jobId = 1) =>
+  t.db.select().from(schema.jobItems).where(eq(schema.jobItems.jobId, jobId));
 
 describe('POST /api/jobs/[jobId]/items/import: good files', () => {
   it('imports the downloadable template, made with the yard sections, and appends its rows', async () => {
@@ -70,7 +71,11 @@ describe('POST /api/jobs/[jobId]/items/import: good files', () => {
   });
 
   it('sends a planned job back to draft and supersedes its plans', async () => {
-    const planned = await call(planJob, { method: 'POST', params: { jobId: J1001 }, body: { timeLimitMs: 300 } });
+    const planned = await call(planJob, {
+      method: 'POST',
+      params: { jobId: J1001 },
+      body: { timeLimitMs: 300 },
+    });
     expect(planned.status).toBe(201);
     expect((await csv('section,length,quantity\nT47100,900,1')).status).toBe(200);
     const job = await call(getJob, { params: { jobId: J1001 } });

@@ -35,7 +35,12 @@ describe('POST /api/jobs', () => {
   it('creates a draft job with the next J-number when no reference is given', async () => {
     const res = await create({ customer: 'Orla Penhaligon', dueDate: '2026-12-24' });
     expect(res.status).toBe(201);
-    expect(res.json.job).toMatchObject({ reference: 'J-1005', customerName: 'Orla Penhaligon', dueDate: '2026-12-24', status: 'draft' });
+    expect(res.json.job).toMatchObject({
+      reference: 'J-1005',
+      customerName: 'Orla Penhaligon',
+      dueDate: '2026-12-24',
+      status: 'draft',
+    });
     const second = await create({ customer: 'B', reference: '' });
     expect(second.json.job.reference).toBe('J-1006');
   });
@@ -92,14 +97,32 @@ describe('job details, edits and cancelling', () => {
   });
 
   it('edits details, cancels a draft, refuses to cancel a released job, reopens a cancelled one', async () => {
-    const edit = await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { customer: 'Priya H.', dueDate: null } });
+    const edit = await call(patchJob, {
+      method: 'PATCH',
+      params: { jobId: '1' },
+      body: { customer: 'Priya H.', dueDate: null },
+    });
     expect(edit.status).toBe(200);
     expect(edit.json.job).toMatchObject({ customerName: 'Priya H.', dueDate: null });
-    expect((await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { status: 'cancelled' } })).json.job.status).toBe('cancelled');
-    expect((await call(patchJob, { method: 'PATCH', params: { jobId: '2' }, body: { status: 'cancelled' } })).status).toBe(409);
-    expect((await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { status: 'draft' } })).json.job.status).toBe('draft');
-    expect((await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { status: 'done' } })).status).toBe(422);
-    expect((await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { reference: 'J-1002' } })).status).toBe(409);
+    expect(
+      (await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { status: 'cancelled' } })).json
+        .job.status,
+    ).toBe('cancelled');
+    expect(
+      (await call(patchJob, { method: 'PATCH', params: { jobId: '2' }, body: { status: 'cancelled' } }))
+        .status,
+    ).toBe(409);
+    expect(
+      (await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { status: 'draft' } })).json.job
+        .status,
+    ).toBe('draft');
+    expect(
+      (await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { status: 'done' } })).status,
+    ).toBe(422);
+    expect(
+      (await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: { reference: 'J-1002' } }))
+        .status,
+    ).toBe(409);
     expect((await call(patchJob, { method: 'PATCH', params: { jobId: '1' }, body: {} })).status).toBe(422);
   });
 });
@@ -112,7 +135,11 @@ describe('line items', () => {
     expect(added.status).toBe(201);
     expect(added.json.item).toMatchObject({ lengthMm: 2400, quantity: 3, label: 'rail' });
     const itemId = String(added.json.item.id);
-    const changed = await call(patchItem, { method: 'PATCH', params: { jobId: '1', itemId }, body: { length: 1500, quantity: 5 } });
+    const changed = await call(patchItem, {
+      method: 'PATCH',
+      params: { jobId: '1', itemId },
+      body: { length: 1500, quantity: 5 },
+    });
     expect(changed.json.item).toMatchObject({ lengthMm: 1500, quantity: 5 });
     expect((await call(deleteItem, { method: 'DELETE', params: { jobId: '1', itemId } })).status).toBe(200);
     expect((await call(deleteItem, { method: 'DELETE', params: { jobId: '1', itemId } })).status).toBe(404);

@@ -30,13 +30,16 @@ async function j1003Plan() {
   const [plan] = await t.db.select().from(schema.plans).where(eq(schema.plans.jobId, job.id));
   return { job, plan };
 }
-const send = (planId: number, body: unknown = {}) => call(emailPlan, { method: 'POST', params: { planId: String(planId) }, body });
+const send = (planId: number, body: unknown = {}) =>
+  call(emailPlan, { method: 'POST', params: { planId: String(planId) }, body });
 
 describe('cut sheet PDF', () => {
   it('downloads as a PDF for every role that reads plans', async () => {
     const { plan } = await j1003Plan();
     actAs(AS.saw);
-    const res = await cutSheet(new (await import('next/server')).NextRequest('http://test.local/x'), { params: Promise.resolve({ planId: String(plan.id) }) });
+    const res = await cutSheet(new (await import('next/server')).NextRequest('http://test.local/x'), {
+      params: Promise.resolve({ planId: String(plan.id) }),
+    });
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
     const bytes = Buffer.from(await res.arrayBuffer());
@@ -57,7 +60,12 @@ describe('POST /api/plans/[planId]/email', () => {
     expect(mail.subject).toContain('J-1003');
     expect(mail.text).toContain('Ready Friday.');
     expect(mail.text).toMatch(/Total: £\d+\.\d\d/);
-    expect(mail.attachments).toEqual([expect.objectContaining({ contentType: 'application/pdf', filename: `cut-sheet-J-1003-plan-${plan.id}.pdf` })]);
+    expect(mail.attachments).toEqual([
+      expect.objectContaining({
+        contentType: 'application/pdf',
+        filename: `cut-sheet-J-1003-plan-${plan.id}.pdf`,
+      }),
+    ]);
     const rows = await t.db.select().from(schema.sentMail).where(eq(schema.sentMail.jobId, job.id));
     expect(rows.map((r) => r.status)).toEqual(['sent']);
   }, 60_000);
@@ -92,7 +100,9 @@ describe('prices of stored plans', () => {
     const boards = await t.db.select().from(schema.planBoards).where(eq(schema.planBoards.planId, plan.id));
     const prices = new Map((await t.db.select().from(schema.stockLengths)).map((l) => [l.id, l.pricePence]));
     const [yard] = await t.db.select().from(schema.yardSettings);
-    const stockPence = boards.filter((b) => b.source === 'stock').reduce((sum, b) => sum + prices.get(b.stockLengthId!)!, 0);
+    const stockPence = boards
+      .filter((b) => b.source === 'stock')
+      .reduce((sum, b) => sum + prices.get(b.stockLengthId!)!, 0);
     const cuts = boards.reduce((sum, b) => sum + (b.pieces as unknown[]).length, 0);
     expect(plan.pricePence).toBe(stockPence + cuts * yard.perCutChargePence);
     expect((plan.price as { total: number }).total * 100).toBeCloseTo(plan.pricePence, 6);

@@ -24,7 +24,10 @@ const plan = (jobId: number, body?: unknown) =>
 async function twoJobsOneOffcut() {
   const [section] = await t.db.select().from(schema.sections).where(eq(schema.sections.code, 'T47100'));
   // Clear the demo rack for this section so the test's offcut is the only one.
-  await t.db.update(schema.offcuts).set({ status: 'scrapped' }).where(eq(schema.offcuts.sectionId, section.id));
+  await t.db
+    .update(schema.offcuts)
+    .set({ status: 'scrapped' })
+    .where(eq(schema.offcuts.sectionId, section.id));
   const [offcut] = await t.db
     .insert(schema.offcuts)
     .values({ tag: 'T-TEST', sectionId: section.id, lengthMm: 1500, location: 'Rack A1' })
@@ -32,7 +35,9 @@ async function twoJobsOneOffcut() {
   const jobIds: number[] = [];
   for (const reference of ['J-T1', 'J-T2']) {
     const [job] = await t.db.insert(schema.jobs).values({ reference, customerName: 'Test' }).returning();
-    await t.db.insert(schema.jobItems).values({ jobId: job.id, sectionId: section.id, lengthMm: 1500, quantity: 1 });
+    await t.db
+      .insert(schema.jobItems)
+      .values({ jobId: job.id, sectionId: section.id, lengthMm: 1500, quantity: 1 });
     jobIds.push(job.id);
   }
   return { offcut, jobIds };
@@ -59,7 +64,13 @@ describe('POST /api/jobs/[jobId]/plans', () => {
     actAs(AS.hand);
     const res = await plan(1, { timeLimitMs: 500 });
     expect(res.status).toBe(201);
-    const body = res.json as { id: number; jobId: number; status: string; sections: PlanSection[]; boards: unknown[] };
+    const body = res.json as {
+      id: number;
+      jobId: number;
+      status: string;
+      sections: PlanSection[];
+      boards: unknown[];
+    };
     expect(body).toMatchObject({ jobId: 1, status: 'planned' });
     expect(body.sections.length).toBeGreaterThan(0);
     for (const section of body.sections) {
@@ -88,7 +99,10 @@ describe('POST /api/jobs/[jobId]/plans', () => {
 
   it('refuses to plan a job without line items', async () => {
     actAs(AS.hand);
-    const [job] = await t.db.insert(schema.jobs).values({ reference: 'J-EMPTY', customerName: 'Nobody' }).returning();
+    const [job] = await t.db
+      .insert(schema.jobs)
+      .values({ reference: 'J-EMPTY', customerName: 'Nobody' })
+      .returning();
     const res = await plan(job.id);
     expect(res.status).toBe(422);
     expect(res.json.error).toMatch(/no line items/);
@@ -104,7 +118,10 @@ describe('releasing a plan', () => {
     expect(res.status).toBe(200);
     const [o] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.id, offcut.id));
     expect(o).toMatchObject({ status: 'reserved', reservedByPlanId: planned.json.id });
-    const moves = await t.db.select().from(schema.stockMovements).where(eq(schema.stockMovements.offcutId, offcut.id));
+    const moves = await t.db
+      .select()
+      .from(schema.stockMovements)
+      .where(eq(schema.stockMovements.offcutId, offcut.id));
     expect(moves.map((m) => m.kind)).toContain('offcut_reserved');
     const [job] = await t.db.select().from(schema.jobs).where(eq(schema.jobs.id, jobIds[0]));
     expect(job.status).toBe('released');
@@ -138,7 +155,9 @@ describe('releasing a plan', () => {
     expect(res.status).toBe(200);
     const [o] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.id, offcut.id));
     expect(o).toMatchObject({ status: 'available', reservedByPlanId: null });
-    expect((await call(unrelease, { method: 'POST', params: { planId: String(planned.json.id) } })).status).toBe(409);
+    expect(
+      (await call(unrelease, { method: 'POST', params: { planId: String(planned.json.id) } })).status,
+    ).toBe(409);
   });
 
   it('is refused to saw operators', async () => {

@@ -10,9 +10,33 @@ const end = new Date('2026-09-21T00:00:00Z');
 describe('offcut report', () => {
   const now = new Date('2026-09-20T12:00:00Z');
   const rack: RackOffcutRow[] = [
-    { id: 1, tag: 'K-1', sectionName: 'X', lengthMm: 1000, location: 'A1', createdAt: new Date('2026-09-10T12:00:00Z'), pencePerMetre: 300 },
-    { id: 2, tag: 'K-2', sectionName: 'X', lengthMm: 500, location: 'Short bin', createdAt: new Date('2026-05-01T12:00:00Z'), pencePerMetre: 300 },
-    { id: 3, tag: 'K-3', sectionName: 'Y', lengthMm: 2000, location: 'B2', createdAt: new Date('2026-01-01T12:00:00Z'), pencePerMetre: 500 },
+    {
+      id: 1,
+      tag: 'K-1',
+      sectionName: 'X',
+      lengthMm: 1000,
+      location: 'A1',
+      createdAt: new Date('2026-09-10T12:00:00Z'),
+      pencePerMetre: 300,
+    },
+    {
+      id: 2,
+      tag: 'K-2',
+      sectionName: 'X',
+      lengthMm: 500,
+      location: 'Short bin',
+      createdAt: new Date('2026-05-01T12:00:00Z'),
+      pencePerMetre: 300,
+    },
+    {
+      id: 3,
+      tag: 'K-3',
+      sectionName: 'Y',
+      lengthMm: 2000,
+      location: 'B2',
+      createdAt: new Date('2026-01-01T12:00:00Z'),
+      pencePerMetre: 500,
+    },
   ];
   const report = computeOffcutReport({
     rack,
@@ -41,7 +65,14 @@ describe('offcut report', () => {
       { sectionName: 'Y', count: 1, lengthMm: 2000, valuePence: 1000 },
       { sectionName: 'X', count: 2, lengthMm: 1500, valuePence: 450 },
     ]);
-    expect(report.totals).toMatchObject({ made: 2, used: 1, scrapped: 1, rackCount: 3, rackMm: 3500, rackValuePence: 1450 });
+    expect(report.totals).toMatchObject({
+      made: 2,
+      used: 1,
+      scrapped: 1,
+      rackCount: 3,
+      rackMm: 3500,
+      rackValuePence: 1450,
+    });
   });
 
   it('buckets ages and lists the oldest first, flagging those past the clearing age', () => {
@@ -56,15 +87,34 @@ describe('offcut report', () => {
 });
 
 describe('savings report', () => {
-  const row = (planId: number, day: string, stockBoards: number, stockCostPence: number, baselineBoards: number, baselineCostPence: number): PlannedJobRow => ({
-    planId, jobReference: `J-${planId}`, customerName: 'C', plannedAt: new Date(`${day}T09:00:00Z`), stockBoards, stockCostPence, baselineBoards, baselineCostPence,
+  const row = (
+    planId: number,
+    day: string,
+    stockBoards: number,
+    stockCostPence: number,
+    baselineBoards: number,
+    baselineCostPence: number,
+  ): PlannedJobRow => ({
+    planId,
+    jobReference: `J-${planId}`,
+    customerName: 'C',
+    plannedAt: new Date(`${day}T09:00:00Z`),
+    stockBoards,
+    stockCostPence,
+    baselineBoards,
+    baselineCostPence,
   });
 
   it('sets each plan against its longest-first plan, with a running total', () => {
     const report = computeSavingsReport({
       start,
       end,
-      plans: [row(4, '2026-09-18', 7, 4000, 8, 4500), row(1, '2026-09-08', 10, 5000, 12, 6200), row(2, '2026-09-10', 5, 3000, 5, 3000), row(3, '2026-10-01', 1, 1, 9, 9999)],
+      plans: [
+        row(4, '2026-09-18', 7, 4000, 8, 4500),
+        row(1, '2026-09-08', 10, 5000, 12, 6200),
+        row(2, '2026-09-10', 5, 3000, 5, 3000),
+        row(3, '2026-10-01', 1, 1, 9, 9999),
+      ],
     });
     // Saved: 12 − 10 = 2 boards and 1200 p; then 0; then 1 board and 500 p. Running 1200, 1200, 1700.
     expect(report.jobs.map((j) => [j.planId, j.savedBoards, j.savedPence, j.runningSavedPence])).toEqual([
@@ -72,13 +122,25 @@ describe('savings report', () => {
       [2, 0, 0, 1200],
       [4, 1, 500, 1700],
     ]);
-    expect(report.totals).toEqual({ jobs: 3, stockBoards: 22, baselineBoards: 25, savedBoards: 3, stockCostPence: 12_000, baselineCostPence: 13_700, savedPence: 1700 });
+    expect(report.totals).toEqual({
+      jobs: 3,
+      stockBoards: 22,
+      baselineBoards: 25,
+      savedBoards: 3,
+      stockCostPence: 12_000,
+      baselineCostPence: 13_700,
+      savedPence: 1700,
+    });
   });
 });
 
 describe('stock report', () => {
   it('works out weeks of cover and flags lengths that run short', () => {
-    const cuts = (id: number, n: number) => Array.from({ length: n }, (_, i) => ({ at: new Date(start.getTime() + i * 3_600_000), stockLengthId: id }));
+    const cuts = (id: number, n: number) =>
+      Array.from({ length: n }, (_, i) => ({
+        at: new Date(start.getTime() + i * 3_600_000),
+        stockLengthId: id,
+      }));
     const report = computeStockReport({
       start,
       end, // two weeks

@@ -5,7 +5,15 @@ import { POST as undo } from '@/app/api/plans/[planId]/undo-board/route';
 import * as schema from '@/db/schema';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
-import { addOffcut, boardsOf, clearRack, movementsOf, releasedDemoPlanId, releasedJob, sectionByCode } from './saw-fixtures';
+import {
+  addOffcut,
+  boardsOf,
+  clearRack,
+  movementsOf,
+  releasedDemoPlanId,
+  releasedJob,
+  sectionByCode,
+} from './saw-fixtures';
 
 let t: Awaited<ReturnType<typeof useApiTestDb>>;
 beforeEach(async () => {
@@ -25,9 +33,23 @@ async function twoBoardJob() {
   const section = await sectionByCode(t.db, 'T47100');
   await clearRack(t.db, section.id);
   const offcut = await addOffcut(t.db, { tag: 'T-2000', sectionId: section.id, lengthMm: 2000 });
-  const job = await releasedJob(t.db, { reference: 'J-T1', sectionId: section.id, pieces: [[1500, 1, 'rail'], [3000, 1, 'beam']] });
+  const job = await releasedJob(t.db, {
+    reference: 'J-T1',
+    sectionId: section.id,
+    pieces: [
+      [1500, 1, 'rail'],
+      [3000, 1, 'beam'],
+    ],
+  });
   const boards = await boardsOf(t.db, job.planId);
-  return { section, offcut, ...job, boards, offcutBoard: boards.find((b) => b.source === 'offcut')!, stockBoard: boards.find((b) => b.source === 'stock')! };
+  return {
+    section,
+    offcut,
+    ...job,
+    boards,
+    offcutBoard: boards.find((b) => b.source === 'offcut')!,
+    stockBoard: boards.find((b) => b.source === 'stock')!,
+  };
 }
 
 describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
@@ -49,25 +71,41 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     expect((await confirm(planId, 999)).status).toBe(404);
     expect((await confirm(planId, 1, { location: '' })).status).toBe(422);
     const section = await sectionByCode(t.db, 'T47100');
-    const unreleased = await releasedJob(t.db, { reference: 'J-T9', sectionId: section.id, pieces: [[1000, 1, 'x']], releaseIt: false });
+    const unreleased = await releasedJob(t.db, {
+      reference: 'J-T9',
+      sectionId: section.id,
+      pieces: [[1000, 1, 'x']],
+      releaseIt: false,
+    });
     expect((await confirm(unreleased.planId, 1)).status).toBe(409);
   });
 
   it('cuts a stock board: one stock_cut at the stock price, on hand one fewer, a kept remainder tagged', async () => {
     const { stockBoard, planId, jobId, section } = await twoBoardJob();
-    const [before] = await t.db.select().from(schema.stockLengths).where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    const [before] = await t.db
+      .select()
+      .from(schema.stockLengths)
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
     const res = await confirm(planId, stockBoard.boardNo);
     expect(res.status).toBe(200);
     expect(res.json.newOffcut.tag).toMatch(/^K-\d{4}$/);
 
-    const [after] = await t.db.select().from(schema.stockLengths).where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    const [after] = await t.db
+      .select()
+      .from(schema.stockLengths)
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
     expect(after.onHand).toBe(before.onHand! - 1);
-    const moves = (await movementsOf(t.db, planId)).filter((m) => m.kind === 'stock_cut' || m.kind === 'offcut_made');
+    const moves = (await movementsOf(t.db, planId)).filter(
+      (m) => m.kind === 'stock_cut' || m.kind === 'offcut_made',
+    );
     expect(moves.map((m) => [m.kind, m.quantityDelta, m.valuePence])).toEqual([
       ['stock_cut', -1, before.pricePence],
       ['offcut_made', 0, 0],
     ]);
-    const [made] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.tag, res.json.newOffcut.tag));
+    const [made] = await t.db
+      .select()
+      .from(schema.offcuts)
+      .where(eq(schema.offcuts.tag, res.json.newOffcut.tag));
     expect(made).toMatchObject({
       sectionId: section.id,
       lengthMm: stockBoard.remainderMm,
@@ -103,7 +141,12 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     const countRows = async () => ({
       moves: (await movementsOf(t.db, planId)).length,
       offcuts: (await t.db.select().from(schema.offcuts)).length,
-      stock: (await t.db.select().from(schema.stockLengths).where(eq(schema.stockLengths.id, stockBoard.stockLengthId!)))[0].onHand,
+      stock: (
+        await t.db
+          .select()
+          .from(schema.stockLengths)
+          .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!))
+      )[0].onHand,
     });
     const before = await countRows();
     const second = await confirm(planId, stockBoard.boardNo);
@@ -115,11 +158,19 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
 
   it('never takes on hand below zero: a board the count missed is recorded as counted short', async () => {
     const { stockBoard, planId } = await twoBoardJob();
-    await t.db.update(schema.stockLengths).set({ onHand: 0 }).where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    await t.db
+      .update(schema.stockLengths)
+      .set({ onHand: 0 })
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
     expect((await confirm(planId, stockBoard.boardNo)).status).toBe(200);
-    const [after] = await t.db.select().from(schema.stockLengths).where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    const [after] = await t.db
+      .select()
+      .from(schema.stockLengths)
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
     expect(after.onHand).toBe(0);
-    const rows = (await movementsOf(t.db, planId)).filter((m) => m.stockLengthId === stockBoard.stockLengthId);
+    const rows = (await movementsOf(t.db, planId)).filter(
+      (m) => m.stockLengthId === stockBoard.stockLengthId,
+    );
     expect(rows.map((m) => [m.kind, m.quantityDelta])).toEqual([
       ['stock_cut', -1],
       ['stocktake', 1],
@@ -132,8 +183,15 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     await confirm(planId, stockBoard.boardNo);
     const snapshot = async () => ({
       moves: (await movementsOf(t.db, planId)).map((m) => m.id),
-      offcuts: (await t.db.select().from(schema.offcuts).orderBy(schema.offcuts.id)).map((o) => [o.id, o.status, o.reservedByPlanId]),
-      stock: (await t.db.select().from(schema.stockLengths).orderBy(schema.stockLengths.id)).map((s) => [s.id, s.onHand]),
+      offcuts: (await t.db.select().from(schema.offcuts).orderBy(schema.offcuts.id)).map((o) => [
+        o.id,
+        o.status,
+        o.reservedByPlanId,
+      ]),
+      stock: (await t.db.select().from(schema.stockLengths).orderBy(schema.stockLengths.id)).map((s) => [
+        s.id,
+        s.onHand,
+      ]),
       boards: (await boardsOf(t.db, planId)).map((b) => [b.boardNo, b.status, b.newOffcutId]),
       job: (await t.db.select().from(schema.jobs).where(eq(schema.jobs.id, jobId)))[0].status,
     });
@@ -146,7 +204,11 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     actAs(AS.saw);
     const undone = await call(undo, { method: 'POST', params: { planId: String(planId) } });
     expect(undone.status).toBe(200);
-    expect(undone.json).toMatchObject({ boardNo: offcutBoard.boardNo, jobStatus: 'cutting', planStatus: 'released' });
+    expect(undone.json).toMatchObject({
+      boardNo: offcutBoard.boardNo,
+      jobStatus: 'cutting',
+      planStatus: 'released',
+    });
     expect(await snapshot()).toEqual(before);
     const [back] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.id, offcut.id));
     expect(back).toMatchObject({ status: 'reserved', reservedByPlanId: planId });

@@ -7,7 +7,15 @@ import type { SolveInput, SolvePlan } from '@/solver';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 import { checkPlan } from '../solver/plan-checker';
-import { addOffcut, boardsOf, clearRack, movementsOf, releasedDemoPlanId, releasedJob, sectionByCode } from './saw-fixtures';
+import {
+  addOffcut,
+  boardsOf,
+  clearRack,
+  movementsOf,
+  releasedDemoPlanId,
+  releasedJob,
+  sectionByCode,
+} from './saw-fixtures';
 
 let t: Awaited<ReturnType<typeof useApiTestDb>>;
 beforeEach(async () => {
@@ -20,7 +28,11 @@ const report = (planId: number, boardNo: number, body: unknown) =>
   call(defect, { method: 'POST', params: { planId: String(planId), boardNo: String(boardNo) }, body });
 
 const sortedPieces = (boards: { pieces: unknown }[]) =>
-  boards.flatMap((b) => (b.pieces as { jobItemId: number; lengthMm: number }[]).map((p) => `${p.jobItemId}:${p.lengthMm}`)).sort();
+  boards
+    .flatMap((b) =>
+      (b.pieces as { jobItemId: number; lengthMm: number }[]).map((p) => `${p.jobItemId}:${p.lengthMm}`),
+    )
+    .sort();
 
 describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
   it('is only for saw operators and owners, and checks the reason and usable length', async () => {
@@ -45,7 +57,12 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
     actAs(AS.owner);
     const res = await report(planId, bad.boardNo, { reason: 'shake', note: 'along the grain' });
     expect(res.status).toBe(200);
-    const replan = res.json.replan as { input: SolveInput; output: SolvePlan; boardNos: number[]; unplaced: unknown[] };
+    const replan = res.json.replan as {
+      input: SolveInput;
+      output: SolvePlan;
+      boardNos: number[];
+      unplaced: unknown[];
+    };
     expect(checkPlan(replan.input, replan.output)).toEqual([]);
     expect(replan.unplaced).toEqual([]);
 
@@ -55,9 +72,14 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
     expect(added.every((b) => b.status === 'pending')).toBe(true);
     // The new boards hold exactly the pieces the bad board was to give.
     expect(sortedPieces(added)).toEqual(sortedPieces([bad]));
-    expect(after.find((b) => b.boardNo === bad.boardNo)).toMatchObject({ status: 'defective', defectReason: 'Shake (along the grain)' });
+    expect(after.find((b) => b.boardNo === bad.boardNo)).toMatchObject({
+      status: 'defective',
+      defectReason: 'Shake (along the grain)',
+    });
 
-    const kinds = (await movementsOf(t.db, planId)).filter((m) => m.kind === 'defect' || m.kind === 'stock_cut');
+    const kinds = (await movementsOf(t.db, planId)).filter(
+      (m) => m.kind === 'defect' || m.kind === 'stock_cut',
+    );
     expect(kinds.map((m) => [m.kind, m.stockLengthId, m.quantityDelta])).toEqual([
       ['defect', bad.stockLengthId, 0],
       ['stock_cut', bad.stockLengthId, -1],
@@ -77,15 +99,26 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
     const section = await sectionByCode(t.db, 'T47100');
     await clearRack(t.db, section.id);
     const taken = await addOffcut(t.db, { tag: 'T-TAKEN', sectionId: section.id, lengthMm: 2000 });
-    const other = await releasedJob(t.db, { reference: 'J-OTHER', sectionId: section.id, pieces: [[1500, 1, 'rail']] });
+    const other = await releasedJob(t.db, {
+      reference: 'J-OTHER',
+      sectionId: section.id,
+      pieces: [[1500, 1, 'rail']],
+    });
     const [otherBoard] = await boardsOf(t.db, other.planId);
     expect(otherBoard.offcutId).toBe(taken.id);
 
-    const mine = await releasedJob(t.db, { reference: 'J-MINE', sectionId: section.id, pieces: [[1500, 1, 'rail']] });
+    const mine = await releasedJob(t.db, {
+      reference: 'J-MINE',
+      sectionId: section.id,
+      pieces: [[1500, 1, 'rail']],
+    });
     const [myBoard] = await boardsOf(t.db, mine.planId);
     expect(myBoard.source).toBe('stock');
     // The yard runs out of this section: only the reserved offcut could still hold the piece.
-    await t.db.update(schema.stockLengths).set({ onHand: 0 }).where(eq(schema.stockLengths.sectionId, section.id));
+    await t.db
+      .update(schema.stockLengths)
+      .set({ onHand: 0 })
+      .where(eq(schema.stockLengths.sectionId, section.id));
 
     const res = await report(mine.planId, myBoard.boardNo, { reason: 'rot' });
     expect(res.status).toBe(200);
@@ -101,7 +134,11 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
   it('puts a sound part on the rack, where the re-plan may use it', async () => {
     const section = await sectionByCode(t.db, 'T47100');
     await clearRack(t.db, section.id);
-    const mine = await releasedJob(t.db, { reference: 'J-SOUND', sectionId: section.id, pieces: [[1500, 1, 'rail']] });
+    const mine = await releasedJob(t.db, {
+      reference: 'J-SOUND',
+      sectionId: section.id,
+      pieces: [[1500, 1, 'rail']],
+    });
     const [board] = await boardsOf(t.db, mine.planId);
     const res = await report(mine.planId, board.boardNo, { reason: 'split', usableMm: 1600 });
     expect(res.status).toBe(200);
@@ -119,7 +156,11 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
     const section = await sectionByCode(t.db, 'T47100');
     await clearRack(t.db, section.id);
     const offcut = await addOffcut(t.db, { tag: 'T-BAD', sectionId: section.id, lengthMm: 2000 });
-    const mine = await releasedJob(t.db, { reference: 'J-BAD', sectionId: section.id, pieces: [[1500, 1, 'rail']] });
+    const mine = await releasedJob(t.db, {
+      reference: 'J-BAD',
+      sectionId: section.id,
+      pieces: [[1500, 1, 'rail']],
+    });
     const res = await report(mine.planId, 1, { reason: 'wane' });
     expect(res.status).toBe(200);
     const [bad] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.id, offcut.id));

@@ -33,7 +33,13 @@ describe('GET /api/saw/queue', () => {
     const res = await call(queue);
     expect(res.status).toBe(200);
     expect(res.json.queue.map((q: { reference: string }) => q.reference)).toEqual(['J-1002', 'J-1003']);
-    expect(res.json.queue[0]).toMatchObject({ planId, customerName: 'Fenwick Joinery', sections: ['38×89 CLS'], boardsDone: 1, jobStatus: 'cutting' });
+    expect(res.json.queue[0]).toMatchObject({
+      planId,
+      customerName: 'Fenwick Joinery',
+      sections: ['38×89 CLS'],
+      boardsDone: 1,
+      jobStatus: 'cutting',
+    });
     expect(res.json.queue[0].boards).toBeGreaterThan(1);
   });
 });
@@ -48,10 +54,19 @@ describe('offcuts at the saw', () => {
     expect((await call(findOffcut, { url: 'http://test.local/api/saw/offcuts' })).status).toBe(422);
 
     const id = String(found.json.offcut.id);
-    expect((await call(moveOffcut, { method: 'PATCH', params: { offcutId: id }, body: { location: '' } })).status).toBe(422);
-    const moved = await call(moveOffcut, { method: 'PATCH', params: { offcutId: id }, body: { location: 'Rack C2' } });
+    expect(
+      (await call(moveOffcut, { method: 'PATCH', params: { offcutId: id }, body: { location: '' } })).status,
+    ).toBe(422);
+    const moved = await call(moveOffcut, {
+      method: 'PATCH',
+      params: { offcutId: id },
+      body: { location: 'Rack C2' },
+    });
     expect(moved.status).toBe(200);
-    const rows = await t.db.select().from(schema.stockMovements).where(eq(schema.stockMovements.offcutId, Number(id)));
+    const rows = await t.db
+      .select()
+      .from(schema.stockMovements)
+      .where(eq(schema.stockMovements.offcutId, Number(id)));
     expect(rows.map((r) => r.kind)).toContain('offcut_moved');
   });
 });

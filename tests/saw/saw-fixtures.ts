@@ -19,22 +19,49 @@ export async function clearRack(db: Db, sectionId: number) {
     .where(and(eq(schema.offcuts.sectionId, sectionId), eq(schema.offcuts.status, 'available')));
 }
 
-export async function addOffcut(db: Db, { tag, sectionId, lengthMm }: { tag: string; sectionId: number; lengthMm: number }) {
-  const [offcut] = await db.insert(schema.offcuts).values({ tag, sectionId, lengthMm, location: 'Rack A1' }).returning();
+export async function addOffcut(
+  db: Db,
+  { tag, sectionId, lengthMm }: { tag: string; sectionId: number; lengthMm: number },
+) {
+  const [offcut] = await db
+    .insert(schema.offcuts)
+    .values({ tag, sectionId, lengthMm, location: 'Rack A1' })
+    .returning();
   return offcut;
 }
 
 /** Creates a job with the given pieces, plans it as the yard hand and (by default) releases it. */
 export async function releasedJob(
   db: Db,
-  { reference, sectionId, pieces, releaseIt = true }: { reference: string; sectionId: number; pieces: [number, number, string][]; releaseIt?: boolean },
+  {
+    reference,
+    sectionId,
+    pieces,
+    releaseIt = true,
+  }: { reference: string; sectionId: number; pieces: [number, number, string][]; releaseIt?: boolean },
 ) {
-  const [job] = await db.insert(schema.jobs).values({ reference, customerName: 'Test customer', dueDate: '2026-11-21' }).returning();
-  await db.insert(schema.jobItems).values(
-    pieces.map(([lengthMm, quantity, label], position) => ({ jobId: job.id, sectionId, lengthMm, quantity, label, position })),
-  );
+  const [job] = await db
+    .insert(schema.jobs)
+    .values({ reference, customerName: 'Test customer', dueDate: '2026-11-21' })
+    .returning();
+  await db
+    .insert(schema.jobItems)
+    .values(
+      pieces.map(([lengthMm, quantity, label], position) => ({
+        jobId: job.id,
+        sectionId,
+        lengthMm,
+        quantity,
+        label,
+        position,
+      })),
+    );
   actAs(AS.hand);
-  const planned = await call(planJob, { method: 'POST', params: { jobId: String(job.id) }, body: { timeLimitMs: 500 } });
+  const planned = await call(planJob, {
+    method: 'POST',
+    params: { jobId: String(job.id) },
+    body: { timeLimitMs: 500 },
+  });
   if (planned.status !== 201) throw new Error(`planning failed: ${JSON.stringify(planned.json)}`);
   const planId = planned.json.id as number;
   if (releaseIt) {
@@ -46,11 +73,19 @@ export async function releasedJob(
 }
 
 export async function boardsOf(db: Db, planId: number) {
-  return db.select().from(schema.planBoards).where(eq(schema.planBoards.planId, planId)).orderBy(schema.planBoards.boardNo);
+  return db
+    .select()
+    .from(schema.planBoards)
+    .where(eq(schema.planBoards.planId, planId))
+    .orderBy(schema.planBoards.boardNo);
 }
 
 export async function movementsOf(db: Db, planId: number) {
-  return db.select().from(schema.stockMovements).where(eq(schema.stockMovements.planId, planId)).orderBy(schema.stockMovements.id);
+  return db
+    .select()
+    .from(schema.stockMovements)
+    .where(eq(schema.stockMovements.planId, planId))
+    .orderBy(schema.stockMovements.id);
 }
 
 export async function releasedDemoPlanId(db: Db) {

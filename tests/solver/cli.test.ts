@@ -7,7 +7,11 @@ import { checkPlan } from './plan-checker';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const runCli = (stdin: string) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'solver/cli.ts'], { cwd: root, input: stdin, encoding: 'utf8' });
+  spawnSync(process.execPath, ['--import', 'tsx', 'solver/cli.ts'], {
+    cwd: root,
+    input: stdin,
+    encoding: 'utf8',
+  });
 
 describe('solver CLI', () => {
   it('writes a valid plan for a job on stdin', () => {

@@ -67,7 +67,10 @@ describe('kerf, trim and marks', () => {
     });
     const plan = solve(input);
     expect(checkPlan(input, plan)).toEqual([]);
-    expect(plan.unplaced.map((u) => `${u.id}:${u.reason}`).sort()).toEqual(['long:longer-than-every-source', 'p:not-enough-stock']);
+    expect(plan.unplaced.map((u) => `${u.id}:${u.reason}`).sort()).toEqual([
+      'long:longer-than-every-source',
+      'p:not-enough-stock',
+    ]);
   });
 
   it('picks the cheaper stock length when it holds the same pieces', () => {

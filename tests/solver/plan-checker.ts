@@ -30,12 +30,14 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
     if (isStock) stockUse.set(b.sourceId, (stockUse.get(b.sourceId) ?? 0) + 1);
     else offcutUse.set(b.sourceId, (offcutUse.get(b.sourceId) ?? 0) + 1);
     if (b.pieces.length === 0) errors.push(`${where}: no pieces`);
-    if (b.pieces.length !== b.pieceLengths.length) errors.push(`${where}: pieces and lengths differ in count`);
+    if (b.pieces.length !== b.pieceLengths.length)
+      errors.push(`${where}: pieces and lengths differ in count`);
     b.pieces.forEach((id, k) => {
       seen.set(id, (seen.get(id) ?? 0) + 1);
       const p = pieceById.get(id);
       if (!p) errors.push(`${where}: unknown piece ${id}`);
-      else if (p.length !== b.pieceLengths[k]) errors.push(`${where}: piece ${id} length ${b.pieceLengths[k]} != ${p.length}`);
+      else if (p.length !== b.pieceLengths[k])
+        errors.push(`${where}: piece ${id} length ${b.pieceLengths[k]} != ${p.length}`);
     });
     const usable = length - boardTrim - (boardTrim > 0 ? kerf : 0);
     const sumWithKerf = b.pieceLengths.reduce((s, l) => s + l + kerf, 0);
@@ -48,7 +50,8 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
       if (pos < usable) expected.push(pos);
       pos += kerf;
     });
-    if (JSON.stringify(expected) !== JSON.stringify(b.marks)) errors.push(`${where}: marks ${b.marks} expected ${expected}`);
+    if (JSON.stringify(expected) !== JSON.stringify(b.marks))
+      errors.push(`${where}: marks ${b.marks} expected ${expected}`);
     const used = b.pieceLengths.reduce((s, l) => s + l, 0) + b.pieceLengths.length * kerf;
     const remainder = Math.max(0, usable - used);
     if (b.remainder !== remainder) errors.push(`${where}: remainder ${b.remainder} expected ${remainder}`);
@@ -57,7 +60,8 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
     const scrap = boardTrim + (kept ? 0 : remainder);
     if (b.scrap !== scrap) errors.push(`${where}: scrap ${b.scrap} expected ${scrap}`);
     const pieceSum = b.pieceLengths.reduce((s, l) => s + l, 0);
-    if (pieceSum + b.kerfLoss + b.scrap + (kept ? remainder : 0) !== length) errors.push(`${where}: material does not add up`);
+    if (pieceSum + b.kerfLoss + b.scrap + (kept ? remainder : 0) !== length)
+      errors.push(`${where}: material does not add up`);
     const boardCost = isStock ? (stock!.cost ?? length / 1000) : 0;
     if (money(b.cost) !== money(boardCost)) errors.push(`${where}: cost ${b.cost} expected ${boardCost}`);
     cost += boardCost;
@@ -72,7 +76,9 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
 
   const capacityOf = (len: number, isStock: boolean) => (isStock ? len - trim - (trim > 0 ? kerf : 0) : len);
   const sources = [
-    ...input.stock.filter((s) => s.available !== 0).map((s) => ({ id: s.id, usable: capacityOf(s.length, true), stock: s })),
+    ...input.stock
+      .filter((s) => s.available !== 0)
+      .map((s) => ({ id: s.id, usable: capacityOf(s.length, true), stock: s })),
     ...input.offcuts.map((o) => ({ id: o.id, usable: capacityOf(o.length, false), stock: null })),
   ];
   for (const u of plan.unplaced) {
@@ -83,7 +89,8 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
       continue;
     }
     const fitsSomewhere = sources.some((s) => s.usable >= p.length);
-    if (u.reason === 'longer-than-every-source' && fitsSomewhere) errors.push(`unplaced ${u.id}: fits a source`);
+    if (u.reason === 'longer-than-every-source' && fitsSomewhere)
+      errors.push(`unplaced ${u.id}: fits a source`);
     if (u.reason === 'not-enough-stock') {
       if (!fitsSomewhere) errors.push(`unplaced ${u.id}: reason should be longer-than-every-source`);
       const idle = sources.find((s) => {
@@ -104,7 +111,9 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
   if (t.boards !== plan.boards.length) errors.push('totals.boards wrong');
   if (money(t.cost) !== money(cost)) errors.push(`totals.cost ${t.cost} expected ${cost}`);
   if (t.materialLength !== material) errors.push('totals.materialLength wrong');
-  if (plan.lowerBound.boards > plan.boards.length) errors.push(`boards ${plan.boards.length} below lower bound ${plan.lowerBound.boards}`);
-  if (money(plan.lowerBound.cost) > money(cost) + 1) errors.push(`cost ${cost} below lower bound ${plan.lowerBound.cost}`);
+  if (plan.lowerBound.boards > plan.boards.length)
+    errors.push(`boards ${plan.boards.length} below lower bound ${plan.lowerBound.boards}`);
+  if (money(plan.lowerBound.cost) > money(cost) + 1)
+    errors.push(`cost ${cost} below lower bound ${plan.lowerBound.cost}`);
   return errors;
 }

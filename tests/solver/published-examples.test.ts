@@ -15,8 +15,19 @@ const job = (stock: number, widths: [number, number][], kerf = 0): SolveInput =>
 
 // Published: Wikipedia, "Cutting stock problem", example section (paper rolls of width 5600).
 const paperRolls: [number, number][] = [
-  [1380, 22], [1520, 25], [1560, 12], [1710, 14], [1820, 18], [1880, 18], [1930, 20],
-  [2000, 10], [2050, 12], [2100, 14], [2140, 16], [2150, 18], [2200, 20],
+  [1380, 22],
+  [1520, 25],
+  [1560, 12],
+  [1710, 14],
+  [1820, 18],
+  [1880, 18],
+  [1930, 20],
+  [2000, 10],
+  [2050, 12],
+  [2100, 14],
+  [2140, 16],
+  [2150, 18],
+  [2200, 20],
 ];
 
 describe('published cutting-stock examples', () => {
@@ -27,19 +38,28 @@ describe('published cutting-stock examples', () => {
     expect(plan.totals.boards).toBe(73);
     expect(plan.lowerBound.boards).toBe(73); // ceil(72.917)
     expect(plan.provenOptimal).toBe(true);
-    const wastePercent = (100 * (plan.totals.materialLength - plan.totals.pieceLength)) / plan.totals.materialLength;
+    const wastePercent =
+      (100 * (plan.totals.materialLength - plan.totals.pieceLength)) / plan.totals.materialLength;
     expect(wastePercent).toBeCloseTo(0.401, 3);
   });
 
-  it.each([3, 5, 10])('paper rolls with kerf %i mm: 74 rolls (each width + kerf, stock + kerf; computed with an independent integer solver, not published)', (kerf) => {
-    const input = job(5600, paperRolls, kerf);
-    const plan = solve(input);
-    expect(checkPlan(input, plan)).toEqual([]);
-    expect(plan.totals.boards).toBe(74);
-  });
+  it.each([3, 5, 10])(
+    'paper rolls with kerf %i mm: 74 rolls (each width + kerf, stock + kerf; computed with an independent integer solver, not published)',
+    (kerf) => {
+      const input = job(5600, paperRolls, kerf);
+      const plan = solve(input);
+      expect(checkPlan(input, plan)).toEqual([]);
+      expect(plan.totals.boards).toBe(74);
+    },
+  );
 
   it('Chvátal, Linear Programming (1983), ch. 13: rolls of 100, optimum 453, LP 452.25 (optimum from memory of the book)', () => {
-    const input = job(100, [[14, 211], [31, 395], [36, 610], [45, 97]]);
+    const input = job(100, [
+      [14, 211],
+      [31, 395],
+      [36, 610],
+      [45, 97],
+    ]);
     const plan = solve(input);
     expect(checkPlan(input, plan)).toEqual([]);
     expect(plan.totals.boards).toBe(453);

@@ -41,24 +41,49 @@ describe('stock movement invariants', () => {
     const ids = lengths.map((l) => l.id);
     const command = fc.oneof(
       fc.record({ kind: fc.constant('receipt' as const), i: fc.nat(3), n: fc.integer({ min: 1, max: 30 }) }),
-      fc.record({ kind: fc.constant('stocktake' as const), i: fc.nat(3), n: fc.integer({ min: 0, max: 40 }) }),
+      fc.record({
+        kind: fc.constant('stocktake' as const),
+        i: fc.nat(3),
+        n: fc.integer({ min: 0, max: 40 }),
+      }),
       fc.record({ kind: fc.constant('cut' as const), i: fc.nat(3), n: fc.integer({ min: 1, max: 60 }) }),
     );
     await fc.assert(
       fc.asyncProperty(fc.array(command, { minLength: 1, maxLength: 12 }), async (commands) => {
         for (const c of commands) {
           const stockLengthId = ids[c.i];
-          const [before] = await t.db.select().from(schema.stockLengths).where(eq(schema.stockLengths.id, stockLengthId));
-          if (c.kind === 'receipt') await receiveStock({ body: { reference: 'prop', lines: [{ stockLengthId, quantity: c.n }] }, userId: 1 });
-          else if (c.kind === 'stocktake') await takeStock({ body: { reason: 'prop', counts: [{ stockLengthId, counted: c.n }] }, userId: 1 });
+          const [before] = await t.db
+            .select()
+            .from(schema.stockLengths)
+            .where(eq(schema.stockLengths.id, stockLengthId));
+          if (c.kind === 'receipt')
+            await receiveStock({
+              body: { reference: 'prop', lines: [{ stockLengthId, quantity: c.n }] },
+              userId: 1,
+            });
+          else if (c.kind === 'stocktake')
+            await takeStock({
+              body: { reason: 'prop', counts: [{ stockLengthId, counted: c.n }] },
+              userId: 1,
+            });
           else {
             // A cut of n boards in one transaction: refused whole when fewer than n are on hand.
             const attempt = t.db.transaction(async (tx) => {
-              for (let k = 0; k < c.n; k++) await applyStockMovement(tx, { kind: 'stock_cut', stockLengthId, quantityDelta: -1, userId: 3, reason: 'prop' });
+              for (let k = 0; k < c.n; k++)
+                await applyStockMovement(tx, {
+                  kind: 'stock_cut',
+                  stockLengthId,
+                  quantityDelta: -1,
+                  userId: 3,
+                  reason: 'prop',
+                });
             });
             if (before.onHand !== null && before.onHand < c.n) {
               await expect(attempt).rejects.toBeInstanceOf(AppError);
-              const [after] = await t.db.select().from(schema.stockLengths).where(eq(schema.stockLengths.id, stockLengthId));
+              const [after] = await t.db
+                .select()
+                .from(schema.stockLengths)
+                .where(eq(schema.stockLengths.id, stockLengthId));
               expect(after.onHand).toBe(before.onHand);
             } else await attempt;
           }
@@ -67,7 +92,10 @@ describe('stock movement invariants', () => {
       }),
       { numRuns: 15 },
     );
-    const [{ negatives }] = await t.db.select({ negatives: sql<number>`count(*)::int` }).from(schema.stockLengths).where(sql`${schema.stockLengths.onHand} < 0`);
+    const [{ negatives }] = await t.db
+      .select({ negatives: sql<number>`count(*)::int` })
+      .from(schema.stockLengths)
+      .where(sql`${schema.stockLengths.onHand} < 0`);
     expect(negatives).toBe(0);
   });
 });

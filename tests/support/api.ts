@@ -4,7 +4,8 @@ import { setDbForTests } from '@/db';
 import { createTestDb } from './test-db';
 
 // The session mock lives in setup.ts (vi.mock must run before the handlers are imported).
-const session = (globalThis as unknown as { kerfwiseTestSession: { userId: number | null } }).kerfwiseTestSession;
+const session = (globalThis as unknown as { kerfwiseTestSession: { userId: number | null } })
+  .kerfwiseTestSession;
 
 /** Demo user ids in seed order. */
 export const AS = { nobody: null, owner: 1, hand: 2, saw: 3 } as const;
@@ -29,7 +30,13 @@ type Handler<P> = (req: NextRequest, ctx: { params: Promise<P> }) => Promise<Res
 
 export async function call<P = Record<string, string>>(
   handler: Handler<P>,
-  { method = 'GET', url = 'http://test.local/api', body, params, headers }: {
+  {
+    method = 'GET',
+    url = 'http://test.local/api',
+    body,
+    params,
+    headers,
+  }: {
     method?: string;
     url?: string;
     body?: unknown;
@@ -42,7 +49,9 @@ export async function call<P = Record<string, string>>(
     headers: { 'content-type': 'application/json', ...headers },
   };
   if (body !== undefined) init.body = typeof body === 'string' ? body : JSON.stringify(body);
-  const response = await handler(new NextRequest(url, init), { params: Promise.resolve((params ?? {}) as P) });
+  const response = await handler(new NextRequest(url, init), {
+    params: Promise.resolve((params ?? {}) as P),
+  });
   const text = await response.text();
   let json: unknown = null;
   try {

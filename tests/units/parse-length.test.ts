@@ -29,7 +29,18 @@ describe('parseLength: metric', () => {
   });
 
   it('refuses commas, centimetres and negatives with a message', () => {
-    for (const text of ['2,400', '2,4 m', '240cm', '240 cm', '-300', '', '   ', 'abc', '12 34', '2400 ft x']) {
+    for (const text of [
+      '2,400',
+      '2,4 m',
+      '240cm',
+      '240 cm',
+      '-300',
+      '',
+      '   ',
+      'abc',
+      '12 34',
+      '2400 ft x',
+    ]) {
       const result = parseLength(text);
       expect(result.ok, text).toBe(false);
       if (!result.ok) expect(result.message.length).toBeGreaterThan(5);
@@ -47,14 +58,24 @@ describe('parseLength: feet and inches', () => {
 
   it('reads a 92 5/8 in precut stud as 2353 mm in every notation (common practice, no published source)', () => {
     // 92.625 in × 25.4 = 2352.675 mm → 2353 mm
-    for (const text of ['92 5/8"', '92-5/8"', '92 5/8', '92-5/8 in', "7' 8 5/8\"", "7'-8 5/8\"", '7′-8 5/8″', '7 ft 8 5/8 in', '92.625"']) {
+    for (const text of [
+      '92 5/8"',
+      '92-5/8"',
+      '92 5/8',
+      '92-5/8 in',
+      '7\' 8 5/8"',
+      '7\'-8 5/8"',
+      '7′-8 5/8″',
+      '7 ft 8 5/8 in',
+      '92.625"',
+    ]) {
       expect(mmOf(text), text).toBe(2353);
     }
   });
 
   it('8 ft 1-1/8 in = 97.125 in (TRADE.md, common practice, no published source)', () => {
     // 97.125 in × 25.4 = 2466.975 mm → 2467 mm; the same as 92 5/8 + 3 × 1 1/2 in
-    expect(mmOf("8' 1-1/8\"")).toBe(2467);
+    expect(mmOf('8\' 1-1/8"')).toBe(2467);
     expect(mmOf('97 1/8"')).toBe(2467);
     expect(mmOf('8ft 1 1/8in')).toBe(2467);
   });
@@ -62,9 +83,9 @@ describe('parseLength: feet and inches', () => {
   it('reads feet alone, zero inches and fractions alone', () => {
     expect(mmOf('8ft')).toBe(2438); // 96 in × 25.4 = 2438.4
     expect(mmOf("8'")).toBe(2438);
-    expect(mmOf("4'-0\"")).toBe(1219); // 48 in = 1219.2 mm
+    expect(mmOf('4\'-0"')).toBe(1219); // 48 in = 1219.2 mm
     expect(mmOf('3/4"')).toBe(19); // 19.05 mm
-    expect(mmOf("7'8\"")).toBe(2337); // 92 in = 2336.8 mm
+    expect(mmOf('7\'8"')).toBe(2337); // 92 in = 2336.8 mm
     expect(mmOf('7’-8 5/8”')).toBe(2353); // smart quotes pasted from a word processor
     expect(mmOf("7' 8 5/8''")).toBe(2353); // two apostrophes for inches
   });

@@ -25,24 +25,36 @@ describe('round trips', () => {
 
   it('whole sixteenths of an inch written as feet-inches parse to the exact rounded millimetres', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 0, max: 11 }), fc.integer({ min: 0, max: 15 }), (feet, inches, sixteenths) => {
-        const text = `${feet}' ${inches} ${sixteenths}/16"`;
-        const totalInches = feet * 12 + inches + sixteenths / 16;
-        // sixteenths × 25.4 / 16 has at most 4 decimals, so toFixed keeps this reference exact
-        const expected = Math.round(Number((totalInches * 25.4).toFixed(6)));
-        const result = parseLength(sixteenths === 0 ? `${feet}' ${inches}"` : text);
-        expect(result).toEqual({ ok: true, mm: expected });
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 50 }),
+        fc.integer({ min: 0, max: 11 }),
+        fc.integer({ min: 0, max: 15 }),
+        (feet, inches, sixteenths) => {
+          const text = `${feet}' ${inches} ${sixteenths}/16"`;
+          const totalInches = feet * 12 + inches + sixteenths / 16;
+          // sixteenths × 25.4 / 16 has at most 4 decimals, so toFixed keeps this reference exact
+          const expected = Math.round(Number((totalInches * 25.4).toFixed(6)));
+          const result = parseLength(sixteenths === 0 ? `${feet}' ${inches}"` : text);
+          expect(result).toEqual({ ok: true, mm: expected });
+        },
+      ),
     );
   });
 
   it('parseLength never throws on arbitrary strings', () => {
     fc.assert(
-      fc.property(fc.oneof(fc.string(), fc.string({ unit: 'grapheme' }), fc.stringMatching(/^[0-9 '"\-/.,mftin′″]{0,30}$/)), (text) => {
-        const result = parseLength(text);
-        expect(typeof result.ok).toBe('boolean');
-        if (result.ok) expect(Number.isInteger(result.mm) && result.mm >= 0).toBe(true);
-      }),
+      fc.property(
+        fc.oneof(
+          fc.string(),
+          fc.string({ unit: 'grapheme' }),
+          fc.stringMatching(/^[0-9 '"\-/.,mftin′″]{0,30}$/),
+        ),
+        (text) => {
+          const result = parseLength(text);
+          expect(typeof result.ok).toBe('boolean');
+          if (result.ok) expect(Number.isInteger(result.mm) && result.mm >= 0).toBe(true);
+        },
+      ),
       { numRuns: 2000 },
     );
   });

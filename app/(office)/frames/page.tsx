@@ -17,7 +17,10 @@ export default async function FramesPage() {
   const schedules = await listFrameSchedules();
   return (
     <div className="space-y-6">
-      <PageHeader title="Frame schedules" lead="Describe a shed, lean-to or stud wall panel by panel and get its cut list." />
+      <PageHeader
+        title="Frame schedules"
+        lead="Describe a shed, lean-to or stud wall panel by panel and get its cut list."
+      />
       <Card>
         <h2 className="mb-3 text-xl font-bold">New schedule</h2>
         <NewScheduleForm />

@@ -17,7 +17,13 @@ export default async function JobsPage() {
       <PageHeader
         title="Jobs"
         lead="Customer cut lists, soonest due first."
-        actions={can(user.role, 'mail:outbox') ? <Link href="/outbox" className="font-semibold text-spruce underline">Outbox: sent cut sheets</Link> : undefined}
+        actions={
+          can(user.role, 'mail:outbox') ? (
+            <Link href="/outbox" className="font-semibold text-spruce underline">
+              Outbox: sent cut sheets
+            </Link>
+          ) : undefined
+        }
       />
       <SawProgressPanel />
       <JobsBoard />

@@ -18,7 +18,10 @@ export default async function OutboxPage() {
   const [sent, caught] = await Promise.all([listSentMail(), listCaughtMail()]);
   return (
     <>
-      <PageHeader title="Outbox" lead="Cut sheets and quotes the yard has e-mailed, and whether the mail server took them." />
+      <PageHeader
+        title="Outbox"
+        lead="Cut sheets and quotes the yard has e-mailed, and whether the mail server took them."
+      />
       <div className="space-y-6">
         <Card className="overflow-x-auto p-0">
           <SentMailTable rows={sent} />
@@ -26,11 +29,18 @@ export default async function OutboxPage() {
         {caught && (
           <Card>
             <h2 className="mb-3 text-xl font-bold">Caught by the local mail catcher</h2>
-            <p className="mb-3 text-sm text-bark-soft">In development nothing leaves this machine: messages land here instead of in the customer&apos;s inbox.</p>
+            <p className="mb-3 text-sm text-bark-soft">
+              In development nothing leaves this machine: messages land here instead of in the customer&apos;s
+              inbox.
+            </p>
             <CaughtMailList messages={caught} />
           </Card>
         )}
-        <p className="text-sm"><Link href="/jobs" className="text-spruce underline">Back to jobs</Link></p>
+        <p className="text-sm">
+          <Link href="/jobs" className="text-spruce underline">
+            Back to jobs
+          </Link>
+        </p>
       </div>
     </>
   );

@@ -9,14 +9,21 @@ import { getYardSettings } from '@/lib/yard/yard-settings';
 
 export const metadata: Metadata = { title: 'Offcut rack' };
 
-export default async function RackPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function RackPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const user = await requirePageUser();
   if (!can(user.role, 'offcuts:read')) return <AccessDenied />;
   const [settings, sections, params] = await Promise.all([getYardSettings(), listSections(), searchParams]);
   const minAgeDays = params.minAgeDays && /^\d+$/.test(params.minAgeDays) ? params.minAgeDays : undefined;
   return (
     <>
-      <PageHeader title="Offcut rack" lead={`Every offcut the yard holds. Pieces older than ${settings.clearOffcutsAfterDays} days are suggested for clearing.`} />
+      <PageHeader
+        title="Offcut rack"
+        lead={`Every offcut the yard holds. Pieces older than ${settings.clearOffcutsAfterDays} days are suggested for clearing.`}
+      />
       <RackManager
         unit={settings.displayUnit}
         clearAfterDays={settings.clearOffcutsAfterDays}

@@ -16,25 +16,48 @@ import { getYardSettings } from '@/lib/yard/yard-settings';
 
 export const metadata: Metadata = { title: 'Reports' };
 
-export default async function ReportsPage({ searchParams }: { searchParams: Promise<{ from?: string; to?: string }> }) {
+export default async function ReportsPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ from?: string; to?: string }>;
+}) {
   const user = await requirePageUser();
   if (!can(user.role, 'reports:read')) return <AccessDenied />;
   const { range, problem } = readReportRange(await searchParams);
   const [waste, offcuts, savings, stock, settings] = await Promise.all([
-    getWasteReport(range), getOffcutReport(range), getSavingsReport(range), getStockReport(range), getYardSettings(),
+    getWasteReport(range),
+    getOffcutReport(range),
+    getSavingsReport(range),
+    getStockReport(range),
+    getYardSettings(),
   ]);
   const today = readReportRange({}).range.to;
   return (
     <>
-      <PageHeader title="Reports" lead="What the yard's cutting really costs: waste, the offcut rack, what planning saved, and stock against use." />
+      <PageHeader
+        title="Reports"
+        lead="What the yard's cutting really costs: waste, the offcut rack, what planning saved, and stock against use."
+      />
       <div className="space-y-8">
         <ReportRangeForm range={range} today={today} />
         {problem && <Notice tone="warning">{problem}</Notice>}
         <HeadlineFigures waste={waste} offcuts={offcuts} savings={savings} />
-        <section className="space-y-3"><h2 className="text-2xl font-bold">Waste and yield</h2><WasteCharts report={waste} /></section>
-        <section className="space-y-3"><h2 className="text-2xl font-bold">Offcuts</h2><OffcutCharts report={offcuts} clearAfterDays={settings.clearOffcutsAfterDays} /></section>
-        <section className="space-y-3"><h2 className="text-2xl font-bold">Savings</h2><SavingsCharts report={savings} /></section>
-        <section className="space-y-3"><h2 className="text-2xl font-bold">Stock</h2><StockReportView report={stock} /></section>
+        <section className="space-y-3">
+          <h2 className="text-2xl font-bold">Waste and yield</h2>
+          <WasteCharts report={waste} />
+        </section>
+        <section className="space-y-3">
+          <h2 className="text-2xl font-bold">Offcuts</h2>
+          <OffcutCharts report={offcuts} clearAfterDays={settings.clearOffcutsAfterDays} />
+        </section>
+        <section className="space-y-3">
+          <h2 className="text-2xl font-bold">Savings</h2>
+          <SavingsCharts report={savings} />
+        </section>
+        <section className="space-y-3">
+          <h2 className="text-2xl font-bold">Stock</h2>
+          <StockReportView report={stock} />
+        </section>
       </div>
     </>
   );

@@ -15,10 +15,21 @@ export default async function SettingsPage() {
   const s = await getYardSettings();
   return (
     <>
-      <PageHeader title="Yard settings" lead="How the yard cuts and what it charges. The tool counts and cuts timber; it does not size structure." />
+      <PageHeader
+        title="Yard settings"
+        lead="How the yard cuts and what it charges. The tool counts and cuts timber; it does not size structure."
+      />
       <Card>
         <SettingsForm
-          initial={{ yardName: s.yardName, kerfMm: s.kerfMm, trimMm: s.trimMm, minOffcutMm: s.minOffcutMm, displayUnit: s.displayUnit, perCutChargePence: s.perCutChargePence, clearOffcutsAfterDays: s.clearOffcutsAfterDays }}
+          initial={{
+            yardName: s.yardName,
+            kerfMm: s.kerfMm,
+            trimMm: s.trimMm,
+            minOffcutMm: s.minOffcutMm,
+            displayUnit: s.displayUnit,
+            perCutChargePence: s.perCutChargePence,
+            clearOffcutsAfterDays: s.clearOffcutsAfterDays,
+          }}
         />
       </Card>
     </>

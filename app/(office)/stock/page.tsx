@@ -14,7 +14,10 @@ export default async function StockPage() {
   const settings = await getYardSettings();
   return (
     <>
-      <PageHeader title="Stock" lead="Sections and stock lengths the yard sells, deliveries in and counted stock. Every change is kept as a stock movement." />
+      <PageHeader
+        title="Stock"
+        lead="Sections and stock lengths the yard sells, deliveries in and counted stock. Every change is kept as a stock movement."
+      />
       <StockManager
         unit={settings.displayUnit}
         canEditSections={can(user.role, 'sections:edit')}

@@ -13,7 +13,10 @@ export default function SawQueuePage() {
         title="Saw queue"
         lead="Released plans, soonest due first."
         actions={
-          <Link href="/saw/find" className="inline-flex min-h-12 items-center rounded-lg border-2 border-grain bg-white px-4 font-semibold">
+          <Link
+            href="/saw/find"
+            className="inline-flex min-h-12 items-center rounded-lg border-2 border-grain bg-white px-4 font-semibold"
+          >
             Find an offcut
           </Link>
         }

@@ -11,5 +11,8 @@ export const GET = route('frames:edit', async () => {
 
 export const POST = route('frames:edit', async ({ req, user }) => {
   const body = await parseJsonBody(req, saveFrameScheduleBodySchema);
-  return NextResponse.json({ schedule: await createFrameSchedule({ body, userId: user.id }) }, { status: 201 });
+  return NextResponse.json(
+    { schedule: await createFrameSchedule({ body, userId: user.id }) },
+    { status: 201 },
+  );
 });

@@ -5,7 +5,9 @@ import { parseJsonBody, route } from '@/lib/api/route';
 import { yardSettingsBodySchema } from '@/lib/validations/yard-settings';
 import { getYardSettings, updateYardSettings } from '@/lib/yard/yard-settings';
 
-export const GET = route('sections:read', async () => NextResponse.json({ settings: await getYardSettings() }));
+export const GET = route('sections:read', async () =>
+  NextResponse.json({ settings: await getYardSettings() }),
+);
 
 export const PATCH = route('settings:edit', async ({ req }) => {
   const body = await parseJsonBody(req, yardSettingsBodySchema);

@@ -16,7 +16,10 @@ export const metadata: Metadata = { title: 'Offcut labels' };
 
 type Search = { ids?: string; plan?: string; format?: string };
 
-const PAGE_SIZE = { roll: '@page { size: 62mm 29mm; margin: 0; }', a4: '@page { size: A4; margin: 15mm 7mm; }' };
+const PAGE_SIZE = {
+  roll: '@page { size: 62mm 29mm; margin: 0; }',
+  a4: '@page { size: A4; margin: 15mm 7mm; }',
+};
 
 export default async function OffcutLabelsPage({ searchParams }: { searchParams: Promise<Search> }) {
   const user = await requirePageUser();
@@ -26,7 +29,11 @@ export default async function OffcutLabelsPage({ searchParams }: { searchParams:
   const ids = offcutIdsQuerySchema.safeParse(search.ids ?? '');
   const planId = Number(search.plan);
   const [offcuts, yard] = await Promise.all([
-    ids.success ? getOffcutsForLabels({ ids: ids.data }) : Number.isSafeInteger(planId) && planId > 0 ? getOffcutsMadeByPlan({ planId }) : [],
+    ids.success
+      ? getOffcutsForLabels({ ids: ids.data })
+      : Number.isSafeInteger(planId) && planId > 0
+        ? getOffcutsMadeByPlan({ planId })
+        : [],
     getYardSettings(),
   ]);
   const query = search.ids ? `ids=${search.ids}` : `plan=${search.plan ?? ''}`;
@@ -34,7 +41,10 @@ export default async function OffcutLabelsPage({ searchParams }: { searchParams:
     <Link
       href={`/labels/offcuts?${query}&format=${f}`}
       aria-current={format === f ? 'page' : undefined}
-      className={cn('inline-flex min-h-12 items-center rounded-lg border-2 px-4 font-semibold', format === f ? 'border-spruce bg-spruce text-white' : 'border-grain bg-white')}
+      className={cn(
+        'inline-flex min-h-12 items-center rounded-lg border-2 px-4 font-semibold',
+        format === f ? 'border-spruce bg-spruce text-white' : 'border-grain bg-white',
+      )}
     >
       {text}
     </Link>
@@ -43,7 +53,10 @@ export default async function OffcutLabelsPage({ searchParams }: { searchParams:
     <main className="mx-auto max-w-5xl p-4">
       <style>{PAGE_SIZE[format]}</style>
       <div className="no-print mb-6 flex flex-wrap items-center gap-3">
-        <Link href="/" className="inline-flex min-h-12 items-center rounded-lg border-2 border-grain bg-white px-4 font-semibold">
+        <Link
+          href="/"
+          className="inline-flex min-h-12 items-center rounded-lg border-2 border-grain bg-white px-4 font-semibold"
+        >
           ‹ Back
         </Link>
         <h1 className="flex-1 text-2xl font-bold">Offcut labels ({offcuts.length})</h1>

@@ -18,15 +18,25 @@ export default async function FrameSchedulePage({ params }: { params: Promise<{ 
   const id = Number((await params).scheduleId);
   if (!Number.isSafeInteger(id) || id <= 0) notFound();
   const [schedule, sections, openJobs] = await Promise.all([
-    getFrameScheduleById({ id }).catch((e: unknown) => (e instanceof AppError && e.code === 'not_found' ? null : Promise.reject(e))),
+    getFrameScheduleById({ id }).catch((e: unknown) =>
+      e instanceof AppError && e.code === 'not_found' ? null : Promise.reject(e),
+    ),
     getYardFrameSections(),
     listJobsOpenForFrames(),
   ]);
   if (!schedule) notFound();
   return (
     <>
-      <PageHeader title={schedule.name} lead={schedule.customerName ? `For ${schedule.customerName}` : 'Frame schedule'} />
-      <FrameScheduleEditor key={schedule.id} schedule={schedule} sections={sections.list.filter((s) => s.active)} openJobs={openJobs} />
+      <PageHeader
+        title={schedule.name}
+        lead={schedule.customerName ? `For ${schedule.customerName}` : 'Frame schedule'}
+      />
+      <FrameScheduleEditor
+        key={schedule.id}
+        schedule={schedule}
+        sections={sections.list.filter((s) => s.active)}
+        openJobs={openJobs}
+      />
     </>
   );
 }

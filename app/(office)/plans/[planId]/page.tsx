@@ -19,11 +19,18 @@ export default async function PlanPage({ params, searchParams }: Props) {
   const [{ planId }, { previous }, yard] = await Promise.all([params, searchParams, getYardSettings()]);
   const id = Number(planId);
   if (!Number.isSafeInteger(id) || id <= 0) notFound();
-  const context = await getPlanContext({ planId: id }).catch((e) => (e instanceof AppError ? null : Promise.reject(e)));
+  const context = await getPlanContext({ planId: id }).catch((e) =>
+    e instanceof AppError ? null : Promise.reject(e),
+  );
   if (!context) notFound();
   return (
     <DisplayUnitProvider yardUnit={yard.displayUnit}>
-      <PlanView planId={id} context={context} previousPlanId={previous ? Number(previous) || undefined : undefined} canAct={can(user.role, 'plans:release')} />
+      <PlanView
+        planId={id}
+        context={context}
+        previousPlanId={previous ? Number(previous) || undefined : undefined}
+        canAct={can(user.role, 'plans:release')}
+      />
     </DisplayUnitProvider>
   );
 }

@@ -10,7 +10,11 @@ import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Compare plans' };
 
-export default async function ComparePlansPage({ searchParams }: { searchParams: Promise<{ a?: string; b?: string }> }) {
+export default async function ComparePlansPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ a?: string; b?: string }>;
+}) {
   const user = await requirePageUser();
   if (!can(user.role, 'plans:read')) return <AccessDenied />;
   const [{ a, b }, yard] = await Promise.all([searchParams, getYardSettings()]);
@@ -18,8 +22,15 @@ export default async function ComparePlansPage({ searchParams }: { searchParams:
   const valid = ids.every((id) => Number.isSafeInteger(id) && id > 0);
   return (
     <DisplayUnitProvider yardUnit={yard.displayUnit}>
-      <PageHeader title="Compare plans" lead="Two plans side by side; the better figure in each row is in bold." />
-      {valid ? <PlanCompare ids={ids as [number, number]} /> : <Notice tone="warning">Choose two plans to compare from a job page.</Notice>}
+      <PageHeader
+        title="Compare plans"
+        lead="Two plans side by side; the better figure in each row is in bold."
+      />
+      {valid ? (
+        <PlanCompare ids={ids as [number, number]} />
+      ) : (
+        <Notice tone="warning">Choose two plans to compare from a job page.</Notice>
+      )}
     </DisplayUnitProvider>
   );
 }

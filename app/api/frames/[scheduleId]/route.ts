@@ -3,7 +3,11 @@
 // DELETE /api/frames/[scheduleId] – delete it, unless a job came from it
 import { NextResponse } from 'next/server';
 import { parseId, parseJsonBody, route } from '@/lib/api/route';
-import { deleteFrameSchedule, getFrameScheduleById, updateFrameSchedule } from '@/lib/frames-data/frame-schedules';
+import {
+  deleteFrameSchedule,
+  getFrameScheduleById,
+  updateFrameSchedule,
+} from '@/lib/frames-data/frame-schedules';
 import { saveFrameScheduleBodySchema } from '@/lib/validations/frames';
 
 type Params = { scheduleId: string };

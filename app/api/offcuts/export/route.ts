@@ -9,6 +9,9 @@ export const GET = route('offcuts:read', async ({ req }) => {
   const csv = offcutsToCsv(await listOffcutsForExport({ query }));
   const day = new Date().toISOString().slice(0, 10);
   return new Response(csv, {
-    headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="offcut-rack-${day}.csv"` },
+    headers: {
+      'content-type': 'text/csv; charset=utf-8',
+      'content-disposition': `attachment; filename="offcut-rack-${day}.csv"`,
+    },
   });
 });

@@ -3,4 +3,6 @@ import { NextResponse } from 'next/server';
 import { route } from '@/lib/api/route';
 import { listStockMovements } from '@/lib/stock/list-stock-movements';
 
-export const GET = route('stock:receive', async () => NextResponse.json({ movements: await listStockMovements() }));
+export const GET = route('stock:receive', async () =>
+  NextResponse.json({ movements: await listStockMovements() }),
+);

@@ -21,7 +21,11 @@ export default async function CutSheetPage({ params }: { params: Promise<{ planI
   if (!can(user.role, 'plans:read')) return <AccessDenied />;
   const planId = Number((await params).planId);
   if (!Number.isSafeInteger(planId) || planId <= 0) notFound();
-  const loaded = await Promise.all([getPlanById({ planId }), getPlanContext({ planId }), getYardSettings()]).catch((e) => (e instanceof AppError ? null : Promise.reject(e)));
+  const loaded = await Promise.all([
+    getPlanById({ planId }),
+    getPlanContext({ planId }),
+    getYardSettings(),
+  ]).catch((e) => (e instanceof AppError ? null : Promise.reject(e)));
   if (!loaded) notFound();
   const [plan, context, yard] = loaded;
   const { job } = await getJobById({ jobId: plan.jobId });
@@ -29,10 +33,19 @@ export default async function CutSheetPage({ params }: { params: Promise<{ planI
     <DisplayUnitProvider yardUnit={yard.displayUnit}>
       <div className="no-print mb-4 flex flex-wrap items-center gap-4">
         <PrintButton />
-        <a className="font-semibold text-spruce underline" href={`/api/plans/${planId}/cut-sheet`}>Download PDF</a>
-        <Link className="font-semibold text-spruce underline" href={`/plans/${planId}`}>Back to the plan</Link>
+        <a className="font-semibold text-spruce underline" href={`/api/plans/${planId}/cut-sheet`}>
+          Download PDF
+        </a>
+        <Link className="font-semibold text-spruce underline" href={`/plans/${planId}`}>
+          Back to the plan
+        </Link>
       </div>
-      <CutSheet plan={JSON.parse(JSON.stringify(plan)) as PlanViewData} job={job} yardName={yard.yardName} offcutTags={context.offcutTags} />
+      <CutSheet
+        plan={JSON.parse(JSON.stringify(plan)) as PlanViewData}
+        job={job}
+        yardName={yard.yardName}
+        offcutTags={context.offcutTags}
+      />
     </DisplayUnitProvider>
   );
 }

@@ -5,6 +5,9 @@ import { renderCutSheet } from '@/lib/cut-sheets/render-cut-sheet';
 export const GET = route<{ planId: string }>('plans:read', async ({ params }) => {
   const { pdf, fileName } = await renderCutSheet({ planId: parseId(params.planId, 'That plan') });
   return new Response(new Uint8Array(pdf), {
-    headers: { 'content-type': 'application/pdf', 'content-disposition': `attachment; filename="${fileName}"` },
+    headers: {
+      'content-type': 'application/pdf',
+      'content-disposition': `attachment; filename="${fileName}"`,
+    },
   });
 });

@@ -4,5 +4,7 @@ import { parseId, route } from '@/lib/api/route';
 import { releasePlan } from '@/lib/plans/release-plan';
 
 export const POST = route<{ planId: string }>('plans:release', async ({ user, params }) => {
-  return NextResponse.json(await releasePlan({ planId: parseId(params.planId, 'That plan'), userId: user.id }));
+  return NextResponse.json(
+    await releasePlan({ planId: parseId(params.planId, 'That plan'), userId: user.id }),
+  );
 });

@@ -4,5 +4,7 @@ import { parseId, route } from '@/lib/api/route';
 import { unreleasePlan } from '@/lib/plans/unrelease-plan';
 
 export const POST = route<{ planId: string }>('plans:release', async ({ user, params }) => {
-  return NextResponse.json(await unreleasePlan({ planId: parseId(params.planId, 'That plan'), userId: user.id }));
+  return NextResponse.json(
+    await unreleasePlan({ planId: parseId(params.planId, 'That plan'), userId: user.id }),
+  );
 });

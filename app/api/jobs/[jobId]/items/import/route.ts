@@ -6,7 +6,13 @@ import { AppError } from '@/lib/errors';
 import { importJobItems } from '@/lib/jobs/import-job-items';
 import { MAX_IMPORT_BYTES } from '@/lib/validations/jobs';
 
-const ACCEPTED = ['text/csv', 'text/plain', 'text/tab-separated-values', 'application/csv', 'application/vnd.ms-excel'];
+const ACCEPTED = [
+  'text/csv',
+  'text/plain',
+  'text/tab-separated-values',
+  'application/csv',
+  'application/vnd.ms-excel',
+];
 
 export const POST = route<{ jobId: string }>('jobs:edit', async ({ req, params }) => {
   const jobId = parseId(params.jobId, 'That job');
@@ -22,7 +28,10 @@ export const POST = route<{ jobId: string }>('jobs:edit', async ({ req, params }
   const result = await importJobItems({ jobId, csvText, replace });
   if (!result.ok) {
     return NextResponse.json(
-      { error: `The file was not imported: ${result.errors.length} problem${result.errors.length === 1 ? '' : 's'} to fix.`, errors: result.errors },
+      {
+        error: `The file was not imported: ${result.errors.length} problem${result.errors.length === 1 ? '' : 's'} to fix.`,
+        errors: result.errors,
+      },
       { status: 422 },
     );
   }
