@@ -172,14 +172,12 @@ export async function seedHistory(
         trim: SETTINGS.trimMm,
         minOffcut: SETTINGS.minOffcutMm,
         timeLimitMs: SETTINGS.timeLimitMs,
-        stock: lengthsBySection
-          .get(sectionId)!
-          .map((l) => ({
-            id: stockSourceId(l.id),
-            length: l.lengthMm,
-            cost: l.pricePence / 100,
-            available: onHand.get(l.id) ?? null,
-          })),
+        stock: lengthsBySection.get(sectionId)!.map((l) => ({
+          id: stockSourceId(l.id),
+          length: l.lengthMm,
+          cost: l.pricePence / 100,
+          available: onHand.get(l.id) ?? null,
+        })),
         offcuts: offcutsHere.map((o) => ({ id: offcutSourceId(o.id), length: o.lengthMm })),
         pieces: sectionItems.map((i) => ({ id: pieceIdFor(i.id), length: i.lengthMm, quantity: i.quantity })),
       };

@@ -73,19 +73,17 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
         })),
       )
       .returning();
-    await tx
-      .insert(stockMovements)
-      .values(
-        inserted.map((o) => ({
-          at: now,
-          kind: 'offcut_imported' as const,
-          userId,
-          sectionId: o.sectionId,
-          offcutId: o.id,
-          lengthMm: o.lengthMm,
-          reason: 'Rack list import',
-        })),
-      );
+    await tx.insert(stockMovements).values(
+      inserted.map((o) => ({
+        at: now,
+        kind: 'offcut_imported' as const,
+        userId,
+        sectionId: o.sectionId,
+        offcutId: o.id,
+        lengthMm: o.lengthMm,
+        reason: 'Rack list import',
+      })),
+    );
     return { imported: inserted.length, tags: inserted.map((o) => o.tag) };
   });
 }

@@ -14,15 +14,13 @@ async function saveLengths(tx: Tx, sectionId: number, lengths: SectionBody['leng
     if (input.id && !current) throw notFound(`Stock length ${input.id} of this section`);
     if (!current) {
       // A new counted length starts at zero; deliveries and stocktakes bring it up.
-      await tx
-        .insert(stockLengths)
-        .values({
-          sectionId,
-          lengthMm: input.lengthMm,
-          pricePence: input.pricePence,
-          onHand: input.unlimited ? null : 0,
-          active: input.active,
-        });
+      await tx.insert(stockLengths).values({
+        sectionId,
+        lengthMm: input.lengthMm,
+        pricePence: input.pricePence,
+        onHand: input.unlimited ? null : 0,
+        active: input.active,
+      });
       continue;
     }
     // Switching to counted needs a stocktake (the count comes from movements), so only "unlimited" is set here.

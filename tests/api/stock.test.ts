@@ -246,21 +246,19 @@ describe('plan stock check', () => {
       .insert(schema.plans)
       .values({ jobId: job.id, settings: {}, sections: [], totals: {} })
       .returning();
-    await t.db
-      .insert(schema.planBoards)
-      .values(
-        Array.from({ length: l.onHand! + 2 }, (_, i) => ({
-          planId: plan.id,
-          boardNo: i + 1,
-          sectionId: l.sectionId,
-          source: 'stock' as const,
-          stockLengthId: l.id,
-          lengthMm: l.lengthMm,
-          pieces: [],
-          remainderMm: 0,
-          keepRemainder: false,
-        })),
-      );
+    await t.db.insert(schema.planBoards).values(
+      Array.from({ length: l.onHand! + 2 }, (_, i) => ({
+        planId: plan.id,
+        boardNo: i + 1,
+        sectionId: l.sectionId,
+        source: 'stock' as const,
+        stockLengthId: l.id,
+        lengthMm: l.lengthMm,
+        pieces: [],
+        remainderMm: 0,
+        keepRemainder: false,
+      })),
+    );
     actAs(AS.hand);
     const res = await call(stockCheck, { params: { planId: String(plan.id) } });
     expect(res.status).toBe(200);

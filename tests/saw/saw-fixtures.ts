@@ -44,18 +44,16 @@ export async function releasedJob(
     .insert(schema.jobs)
     .values({ reference, customerName: 'Test customer', dueDate: '2026-11-21' })
     .returning();
-  await db
-    .insert(schema.jobItems)
-    .values(
-      pieces.map(([lengthMm, quantity, label], position) => ({
-        jobId: job.id,
-        sectionId,
-        lengthMm,
-        quantity,
-        label,
-        position,
-      })),
-    );
+  await db.insert(schema.jobItems).values(
+    pieces.map(([lengthMm, quantity, label], position) => ({
+      jobId: job.id,
+      sectionId,
+      lengthMm,
+      quantity,
+      label,
+      position,
+    })),
+  );
   actAs(AS.hand);
   const planned = await call(planJob, {
     method: 'POST',
