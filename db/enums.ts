@@ -31,3 +31,9 @@ export const MOVEMENT_KINDS = [
   'defect', // a board found bad at the saw
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
+
+export const ACCOUNT_KINDS = ['retail', 'trade'] as const;
+export type AccountKind = (typeof ACCOUNT_KINDS)[number];
+
+export const PAYMENT_KINDS = ['deposit', 'full', 'balance', 'refund', 'on_account'] as const;
+export type PaymentKind = (typeof PAYMENT_KINDS)[number];
