@@ -1,7 +1,7 @@
 // Runs the cutting engine off the request's event loop, in a worker thread, with a hard deadline.
 import 'server-only';
 import { Worker } from 'node:worker_threads';
-import { solve, type SolveInput, type SolvePlan } from '@/solver';
+import { prepareSolver, solve, type SolveInput, type SolvePlan } from '@/solver';
 import { AppError } from '@/lib/errors';
 
 const GRACE_MS = 5_000; // the solver stops itself at timeLimitMs; this only catches a stuck worker
@@ -29,6 +29,9 @@ function solveInWorker(input: SolveInput): Promise<SolvePlan> {
 
 /** Under the bundler the worker file is compiled; under the test runner (plain .ts) solve in process. */
 export async function runSolver(input: SolveInput): Promise<SolvePlan> {
-  if (import.meta.url.endsWith('.ts')) return solve(input);
+  if (import.meta.url.endsWith('.ts')) {
+    await prepareSolver().catch(() => undefined);
+    return solve(input);
+  }
   return solveInWorker(input);
 }
