@@ -2,7 +2,12 @@ import type { NextConfig } from 'next';
 
 const nextConfig: NextConfig = {
   // PGlite ships WASM and data files, argon2 a native binary: load both from node_modules at run time.
-  serverExternalPackages: ['@electric-sql/pglite', '@node-rs/argon2', '@react-pdf/renderer'],
+  serverExternalPackages: ['@electric-sql/pglite', '@node-rs/argon2', '@react-pdf/renderer', 'tsx'],
+  // The solver runs in a worker thread loaded from these files at run time (lib/plans/run-solver.ts),
+  // outside the bundle; list them so a traced (standalone) build carries them too.
+  outputFileTracingIncludes: {
+    '/**': ['./lib/plans/solver-worker.mjs', './solver/**/*.ts', './node_modules/tsx/**'],
+  },
   poweredByHeader: false,
 };
 

@@ -7,6 +7,7 @@ import { compareScores, scorePacking, type Packing } from './packing';
 import { buildPlan } from './plan-builder';
 import { SearchBudget } from './search-budget';
 import { improvePacking, quickTargetSearch } from './improve';
+import { fromUnits, toUnits } from './money';
 import type { PlanBound, SolveInput, SolvePlan } from './types';
 
 /** Iteration caps that fix the search path (see README, "Determinism"). */
@@ -37,11 +38,13 @@ export function solve(input: SolveInput): SolvePlan {
       maxPivots: SEARCH_CAPS.lpPivots,
       shouldStop: budget.shouldStop,
       warmStart: best,
-      stopAtCost: scorePacking(model, best).cost,
+      stopAtCost: fromUnits(scorePacking(model, best).cost),
     });
     bound = maxBound(bound, lp?.bound ?? null);
     if (!meetsBound(model, best, bound)) {
-      consider(improvePacking(model, best, bound, lp, budget, lengthTarget));
+      // Untrimmed boards widen the LP's patterns beyond what trimmed boards hold: bound only.
+      const guide = model.relaxed ? null : lp;
+      consider(improvePacking(model, best, bound, guide, budget, lengthTarget));
     }
   }
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
@@ -55,7 +58,7 @@ function placedDemand(model: Model, p: Packing): number[] {
   return model.items.map((it, i) => it.count - p.unplaced[i]);
 }
 
+/** Exact, in whole money units: the bound is already rounded up to a cost a plan can have. */
 export function meetsBound(model: Model, p: Packing, bound: PlanBound): boolean {
-  const cost = scorePacking(model, p).cost;
-  return cost <= bound.cost + 1e-5 * Math.max(1, cost);
+  return scorePacking(model, p).cost <= toUnits(bound.cost);
 }
