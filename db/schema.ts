@@ -54,6 +54,10 @@ export const yardSettings = pgTable('yard_settings', {
   perCutChargePence: integer('per_cut_charge_pence').notNull().default(25),
   clearOffcutsAfterDays: integer('clear_offcuts_after_days').notNull().default(90),
   lengthToleranceMm: integer('length_tolerance_mm').notNull().default(2),
+  // Picks piece names and framing defaults: 'uk' (head/sole plate, lintel) or 'na' (top/bottom plate, header).
+  region: text('region', { enum: REGIONS }).notNull().default('uk'),
+  // Shorter pieces are refused on forms and imports: the saw cannot hold them safely.
+  minSafePieceMm: integer('min_safe_piece_mm').notNull().default(150),
   // Quotes and payment. The VAT rate is in hundredths of a percent (2000 = 20 %).
   vatRateBasisPoints: integer('vat_rate_basis_points').notNull().default(2000),
   yardAddress: text('yard_address').notNull().default(''),
@@ -67,10 +71,6 @@ export const yardSettings = pgTable('yard_settings', {
     .notNull()
     .default('yard'),
   depositPercent: integer('deposit_percent').notNull().default(50),
-  // Picks piece names and framing defaults: 'uk' (head/sole plate, lintel) or 'na' (top/bottom plate, header).
-  region: text('region', { enum: REGIONS }).notNull().default('uk'),
-  // Shorter pieces are refused on forms and imports: the saw cannot hold them safely.
-  minSafePieceMm: integer('min_safe_piece_mm').notNull().default(150),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });
 export type YardSettings = typeof yardSettings.$inferSelect;

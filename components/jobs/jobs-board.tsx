@@ -12,6 +12,7 @@ import { JobDetailsForm } from './job-details-form';
 import { JobFilters } from './job-filters';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { JobStatusBadge } from './job-status-badge';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** The office's job list: filters, the table, and a form for a new job. */
 export function JobsBoard() {
@@ -53,7 +54,7 @@ export function JobsBoard() {
           <p className="py-4 text-bark-soft">No jobs match these filters.</p>
         )}
         {jobs.data && jobs.data.length > 0 && (
-          <div className="overflow-x-auto">
+          <ScrollRegion label="Jobs">
             <table className="w-full text-left" data-testid="jobs-table">
               <thead className="bg-shaving text-sm">
                 <tr>
@@ -88,7 +89,7 @@ export function JobsBoard() {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
         )}
       </Card>
     </div>
