@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { JOB_STATUSES } from '@/db/enums';
 import { lengthInputSchema } from '@/lib/units/length-input-schema';
+import { dbIdSchema } from './db-id';
 
 const dueDate = z.string().refine(isCalendarDate, 'Use a real date like 2026-12-24.');
 
@@ -62,16 +63,24 @@ const quantity = z
   .max(10_000, 'Quantity must be at most 10 000.');
 
 /** One line item from the editable table; length in mm or any notation lib/units reads. */
-export const jobItemBodySchema = z.object({
-  sectionId: z.number().int().positive('Choose a section.'),
+const itemFields = {
+  sectionId: dbIdSchema('Choose a section.'),
   length: lengthInputSchema,
   quantity,
-  label: z.string().trim().max(100).default(''),
-  note: z.string().trim().max(500).default(''),
+  label: z.string().trim().max(100),
+  note: z.string().trim().max(500),
+};
+
+export const jobItemBodySchema = z.object({
+  ...itemFields,
+  label: itemFields.label.default(''),
+  note: itemFields.note.default(''),
 });
 export type JobItemBody = z.input<typeof jobItemBodySchema>;
 
-export const updateJobItemBodySchema = jobItemBodySchema
+/** A partial change: fields left out keep their values (no defaults here, or they would wipe them). */
+export const updateJobItemBodySchema = z
+  .object(itemFields)
   .partial()
   .strict()
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
