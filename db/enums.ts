@@ -32,3 +32,9 @@ export const MOVEMENT_KINDS = [
   'board_undone', // a board confirmation taken back: reverses its cut, offcut use and new offcut
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
+
+export const REGIONS = ['uk', 'na'] as const;
+export type Region = (typeof REGIONS)[number];
+
+export const MOISTURE_STATES = ['kiln_dried', 'air_dried', 'green'] as const;
+export type MoistureState = (typeof MOISTURE_STATES)[number];

@@ -6,7 +6,7 @@ export default async function SawLayout({ children }: { children: React.ReactNod
   const user = await requirePageUser('saw:read');
   return (
     <AppShell user={user} nav={officeNav}>
-      {children}
+      <div className="saw-contrast">{children}</div>
     </AppShell>
   );
 }

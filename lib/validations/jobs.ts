@@ -62,28 +62,41 @@ const quantity = z
   .min(1, 'Quantity must be at least 1.')
   .max(10_000, 'Quantity must be at most 10 000.');
 
-/** One line item from the editable table; length in mm or any notation lib/units reads. */
 const itemFields = {
   sectionId: dbIdSchema('Choose a section.'),
   length: lengthInputSchema,
+  // The length as typed, kept so a too-short bare number can be answered with "did you mean 2.4 m?".
+  lengthText: z.string().max(40).optional(),
   quantity,
   label: z.string().trim().max(100),
   note: z.string().trim().max(500),
 };
-
-export const jobItemBodySchema = z.object({
+const jobItemFields = z.object({
   ...itemFields,
   label: itemFields.label.default(''),
   note: itemFields.note.default(''),
 });
-export type JobItemBody = z.input<typeof jobItemBodySchema>;
+
+/** Copies a typed length into `lengthText` before it is read as millimetres. */
+const keepTypedLength = (body: unknown) =>
+  body && typeof body === 'object' && typeof (body as { length?: unknown }).length === 'string'
+    ? { ...body, lengthText: (body as { length: string }).length }
+    : body;
+
+/** One line item from the editable table; length in mm or any notation lib/units reads. */
+export const jobItemBodySchema = z.preprocess(keepTypedLength, jobItemFields);
+export type JobItemBody = z.input<typeof jobItemFields>;
+export type JobItemFields = z.output<typeof jobItemFields>;
 
 /** A partial change: fields left out keep their values (no defaults here, or they would wipe them). */
-export const updateJobItemBodySchema = z
-  .object(itemFields)
-  .partial()
-  .strict()
-  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+export const updateJobItemBodySchema = z.preprocess(
+  keepTypedLength,
+  z
+    .object(itemFields)
+    .partial()
+    .strict()
+    .refine((v) => Object.keys(v).length > 0, 'Nothing to change.'),
+);
 
 /** Largest cut list the import accepts, in bytes. */
 export const MAX_IMPORT_BYTES = 5 * 1024 * 1024;
