@@ -8,7 +8,7 @@ import { NextRequest } from 'next/server';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import * as schema from '@/db/schema';
 import { hashPassword } from '@/lib/auth/password';
-import { userCan, type Action } from '@/lib/auth/permissions';
+import { isPublicAction, userCan, type Action } from '@/lib/auth/permissions';
 import { actAs, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 import { recordCells } from './matrix-figures';
@@ -41,7 +41,8 @@ const PUBLIC_API = new Set([
   'GET /api/auth/[...nextauth]',
   'POST /api/auth/[...nextauth]',
 ]);
-const PUBLIC_PAGES = new Set(['/sign-in']);
+// The customer's quote page: the unguessable, expiring token in its address is the authority.
+const PUBLIC_PAGES = new Set(['/sign-in', '/q/[token]']);
 /** Bodies for routes where an empty JSON object would do slow work (a full solve). */
 const BODIES: Record<string, unknown> = { 'POST /api/jobs/[jobId]/plans': { timeLimitMs: 200 } };
 const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const;
@@ -127,8 +128,11 @@ describe('API routes', () => {
             params: Promise.resolve(sampleParams(urlPath)),
           });
           cells++;
-          const allowed = person.role !== undefined && userCan(person as Required<Person>, handler.action!);
-          const expected = person.role === undefined ? '401' : allowed ? 'allowed' : '403';
+          // Public actions (the customer's quote link, the signed webhook) need no sign-in.
+          const open = isPublicAction(handler.action!);
+          const allowed =
+            open || (person.role !== undefined && userCan(person as Required<Person>, handler.action!));
+          const expected = allowed ? 'allowed' : person.role === undefined ? '401' : '403';
           const got =
             res.status === 401 ? '401' : res.status === 403 ? '403' : res.status < 500 ? 'allowed' : '5xx';
           if (got !== expected) leaks.push(`${key} as ${person.name}: ${res.status} (expected ${expected})`);
