@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { migrationsFolder, wrapClient } from '@/db/client';
 
 interface Journal {
@@ -15,7 +15,11 @@ const journal = JSON.parse(
   readFileSync(path.join(migrationsFolder, 'meta/_journal.json'), 'utf8'),
 ) as Journal;
 const scratch = mkdtempSync(path.join(tmpdir(), 'kerfwise-migrations-'));
-afterAll(() => rmSync(scratch, { recursive: true, force: true }));
+let client: PGlite;
+afterAll(async () => {
+  await client?.close();
+  rmSync(scratch, { recursive: true, force: true });
+});
 
 /** A copy of the migrations folder that knows only the first `count` migrations. */
 function firstMigrations(count: number): string {
@@ -37,8 +41,8 @@ const initialRows = `
   insert into job_items (job_id, section_id, length_mm, quantity) values (1, 1, 2100, 6);
 `;
 
-async function count(client: PGlite, table: string): Promise<number> {
-  const { rows } = await client.query<{ n: number }>(`select count(*)::int as n from ${table}`);
+async function count(db: PGlite, table: string): Promise<number> {
+  const { rows } = await db.query<{ n: number }>(`select count(*)::int as n from ${table}`);
   return rows[0].n;
 }
 
@@ -48,36 +52,34 @@ describe('database upgrades', () => {
     expect(journal.entries.map((e) => e.idx)).toEqual(journal.entries.map((_, i) => i));
   });
 
-  it('a database made by the initial migration upgrades to all of them with its rows intact', async () => {
-    const client = new PGlite();
-    try {
-      const db = wrapClient(client);
-      await migrate(db, { migrationsFolder: firstMigrations(1) });
-      await client.exec(initialRows);
+  // Set up in a hook: starting PGlite can outlast a test's time limit on a busy machine.
+  beforeAll(async () => {
+    client = new PGlite();
+    await migrate(wrapClient(client), { migrationsFolder: firstMigrations(1) });
+    await client.exec(initialRows);
+  });
 
-      await migrate(db, { migrationsFolder });
-      const applied = await client.query<{ n: number }>(
-        'select count(*)::int as n from drizzle.__drizzle_migrations',
-      );
-      expect(applied.rows[0].n).toBe(journal.entries.length);
-      for (const table of [
-        'users',
-        'yard_settings',
-        'sections',
-        'stock_lengths',
-        'offcuts',
-        'jobs',
-        'job_items',
-      ]) {
-        expect(await count(client, table), table).toBe(1);
-      }
-      const { rows } = await client.query<{ email: string; tag: string; reference: string; kerf: number }>(
-        `select u.email, o.tag, j.reference, y.kerf_mm as kerf
-           from users u, offcuts o, jobs j, yard_settings y`,
-      );
-      expect(rows).toEqual([{ email: 'owner@upgrade.test', tag: 'U-0001', reference: 'J-UP-1', kerf: 4 }]);
-    } finally {
-      await client.close();
+  it('a database made by the initial migration upgrades to all of them with its rows intact', async () => {
+    await migrate(wrapClient(client), { migrationsFolder });
+    const applied = await client.query<{ n: number }>(
+      'select count(*)::int as n from drizzle.__drizzle_migrations',
+    );
+    expect(applied.rows[0].n).toBe(journal.entries.length);
+    for (const table of [
+      'users',
+      'yard_settings',
+      'sections',
+      'stock_lengths',
+      'offcuts',
+      'jobs',
+      'job_items',
+    ]) {
+      expect(await count(client, table), table).toBe(1);
     }
+    const { rows } = await client.query<{ email: string; tag: string; reference: string; kerf: number }>(
+      `select u.email, o.tag, j.reference, y.kerf_mm as kerf
+         from users u, offcuts o, jobs j, yard_settings y`,
+    );
+    expect(rows).toEqual([{ email: 'owner@upgrade.test', tag: 'U-0001', reference: 'J-UP-1', kerf: 4 }]);
   });
 });
