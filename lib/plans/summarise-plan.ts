@@ -1,4 +1,5 @@
 // Whole-plan figures and the saw's board list, from the solver's per-section results. Pure.
+import type { PlanBoard } from '@/solver';
 import { longestFirstBaseline } from './longest-first-baseline';
 import {
   parsePieceId,
@@ -19,6 +20,8 @@ export type BoardRow = {
   pieces: BoardPiece[];
   remainderMm: number;
   keepRemainder: boolean;
+  /** One piece sold at the whole stock length: no trim, no cut. */
+  fullLength: boolean;
 };
 
 export function summarisePlan(sections: PlanSection[]): PlanTotals {
@@ -85,9 +88,10 @@ export function planBoardRows(sections: PlanSection[], labels: Map<number, strin
         offcutId: source.kind === 'offcut' ? source.id : null,
         lengthMm: board.length,
         trimMm: board.trim,
-        pieces: boardPieces(board.pieces, board.pieceLengths, board.marks, input.kerf, labels),
+        pieces: boardPieces(board, input.kerf, labels),
         remainderMm: board.remainder,
         keepRemainder: board.remainderKept,
+        fullLength: board.fullLength ?? false,
       });
     }
   }
@@ -96,17 +100,18 @@ export function planBoardRows(sections: PlanSection[], labels: Map<number, strin
 
 /** The last piece may end exactly at the board's end, where no cut (and so no mark) is needed. */
 function boardPieces(
-  pieceIds: string[],
-  lengths: number[],
-  marks: number[],
+  board: Pick<PlanBoard, 'pieces' | 'pieceLengths' | 'cutLengths' | 'marks'>,
   kerf: number,
   labels: Map<number, string>,
 ): BoardPiece[] {
+  // Plans stored before nominal pieces carry no cut lengths: the ordered lengths were cut.
+  const cuts = board.cutLengths ?? board.pieceLengths;
   let start = 0;
-  return pieceIds.map((pieceId, i) => {
+  return board.pieces.map((pieceId, i) => {
     const jobItemId = parsePieceId(pieceId);
-    const markMm = marks[i] ?? start + lengths[i];
+    const markMm = board.marks[i] ?? start + cuts[i];
     start = markMm + kerf;
-    return { pieceId, jobItemId, label: labels.get(jobItemId) ?? '', lengthMm: lengths[i], markMm };
+    const label = labels.get(jobItemId) ?? '';
+    return { pieceId, jobItemId, label, lengthMm: board.pieceLengths[i], cutMm: cuts[i], markMm };
   });
 }
