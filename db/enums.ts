@@ -31,3 +31,9 @@ export const MOVEMENT_KINDS = [
   'defect', // a board found bad at the saw
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
+
+export const REGIONS = ['uk', 'na'] as const;
+export type Region = (typeof REGIONS)[number];
+
+export const MOISTURE_STATES = ['kiln_dried', 'air_dried', 'green'] as const;
+export type MoistureState = (typeof MOISTURE_STATES)[number];

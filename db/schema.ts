@@ -17,9 +17,11 @@ import {
   BOARD_STATUSES,
   DISPLAY_UNITS,
   JOB_STATUSES,
+  MOISTURE_STATES,
   MOVEMENT_KINDS,
   OFFCUT_STATUSES,
   PLAN_STATUSES,
+  REGIONS,
   ROLES,
 } from './enums';
 
@@ -50,6 +52,10 @@ export const yardSettings = pgTable('yard_settings', {
   perCutChargePence: integer('per_cut_charge_pence').notNull().default(25),
   clearOffcutsAfterDays: integer('clear_offcuts_after_days').notNull().default(90),
   lengthToleranceMm: integer('length_tolerance_mm').notNull().default(2),
+  // Picks piece names and framing defaults: 'uk' (head/sole plate, lintel) or 'na' (top/bottom plate, header).
+  region: text('region', { enum: REGIONS }).notNull().default('uk'),
+  // Shorter pieces are refused on forms and imports: the saw cannot hold them safely.
+  minSafePieceMm: integer('min_safe_piece_mm').notNull().default(150),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });
 export type YardSettings = typeof yardSettings.$inferSelect;
@@ -66,6 +72,13 @@ export const sections = pgTable('sections', {
   finish: text('finish', { enum: ['sawn', 'planed'] })
     .notNull()
     .default('sawn'),
+  // Thickness and width above are nominal (what the trade calls it); finished sizes are what it measures.
+  finishedThicknessMm: integer('finished_thickness_mm'),
+  finishedWidthMm: integer('finished_width_mm'),
+  // Kiln dried, air dried or green: apart from treatment (a treated section may be wet from the tank).
+  moisture: text('moisture', { enum: MOISTURE_STATES }).notNull().default('kiln_dried'),
+  // Shortest remainder worth keeping for this section; null: the yard's minimum kept offcut.
+  minKeepMm: integer('min_keep_mm'),
   active: boolean('active').notNull().default(true),
   createdAt: createdAt(),
 });
@@ -81,6 +94,8 @@ export const stockLengths = pgTable(
       .references(() => sections.id),
     lengthMm: integer('length_mm').notNull(),
     pricePence: integer('price_pence').notNull(),
+    // What the yard paid for one length; null: not entered. Reports value waste at cost.
+    costPence: integer('cost_pence'),
     // null: the yard treats this length as always available.
     onHand: integer('on_hand'),
     active: boolean('active').notNull().default(true),
@@ -117,6 +132,7 @@ export const frameSchedules = pgTable('frame_schedules', {
   id: serial('id').primaryKey(),
   name: text('name').notNull(),
   customerName: text('customer_name').notNull().default(''),
+  customerEmail: text('customer_email').notNull().default(''),
   unit: text('unit', { enum: DISPLAY_UNITS }).notNull().default('mm'),
   panels: jsonb('panels')
     .notNull()
@@ -161,6 +177,12 @@ export const jobItems = pgTable('job_items', {
   note: text('note').notNull().default(''),
   // Angle of an angled cut in tenths of a degree (frame schedules), null for square cuts.
   angleTenths: integer('angle_tenths'),
+  // Frame piece marks ("1.1, 1.2, 2.3"): the numbers the schedule's drawings show.
+  marks: text('marks').notNull().default(''),
+  // The frame schedule that sent this line, so sending it again can replace its lines.
+  frameScheduleId: integer('frame_schedule_id').references(() => frameSchedules.id, {
+    onDelete: 'set null',
+  }),
   position: integer('position').notNull().default(0),
 });
 export type JobItem = typeof jobItems.$inferSelect;

@@ -11,6 +11,7 @@ import { createJobRequest, jobsQuery, type JobFilters as Filters } from '@/lib/q
 import { JobDetailsForm } from './job-details-form';
 import { JobFilters } from './job-filters';
 import { JobStatusBadge } from './job-status-badge';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** The office's job list: filters, the table, and a form for a new job. */
 export function JobsBoard() {
@@ -52,7 +53,7 @@ export function JobsBoard() {
           <p className="py-4 text-bark-soft">No jobs match these filters.</p>
         )}
         {jobs.data && jobs.data.length > 0 && (
-          <div className="overflow-x-auto">
+          <ScrollRegion label="Jobs">
             <table className="w-full text-left" data-testid="jobs-table">
               <thead className="bg-shaving text-sm">
                 <tr>
@@ -81,7 +82,7 @@ export function JobsBoard() {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
         )}
       </Card>
     </div>

@@ -32,7 +32,10 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       .values(demoUsers.map((u) => ({ ...u, passwordHash })))
       .returning();
     const ownerId = users.find((u) => u.role === 'owner')!.id;
-    await tx.insert(schema.yardSettings).values({ id: 1, yardName: demoYardName });
+    // End trim 15 mm: clears split or out-of-square ends; a thinner sliver can be thrown by the blade.
+    await tx
+      .insert(schema.yardSettings)
+      .values({ id: 1, yardName: demoYardName, trimMm: 15, minSafePieceMm: 150, region: 'uk' });
 
     const sectionIds = new Map<string, number>();
     for (const s of demoSections) {

@@ -5,6 +5,7 @@ import {
   parsePieceId,
   parseSourceId,
   type BoardPiece,
+  type PieceDetails,
   type PlanSection,
   type PlanTotals,
 } from './plan-shapes';
@@ -72,7 +73,10 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
 }
 
 /** The boards in saw order: section by section, offcuts first, then the longest boards. */
-export function planBoardRows(sections: PlanSection[], labels: Map<number, string>): BoardRow[] {
+export function planBoardRows(
+  sections: PlanSection[],
+  labels: Map<number, string | PieceDetails>,
+): BoardRow[] {
   const rows: BoardRow[] = [];
   for (const { sectionId, input, output } of sections) {
     const boards = [...output.boards].sort(
@@ -102,7 +106,7 @@ export function planBoardRows(sections: PlanSection[], labels: Map<number, strin
 function boardPieces(
   board: Pick<PlanBoard, 'pieces' | 'pieceLengths' | 'cutLengths' | 'marks'>,
   kerf: number,
-  labels: Map<number, string>,
+  labels: Map<number, string | PieceDetails>,
 ): BoardPiece[] {
   // Plans stored before nominal pieces carry no cut lengths: the ordered lengths were cut.
   const cuts = board.cutLengths ?? board.pieceLengths;
@@ -111,7 +115,17 @@ function boardPieces(
     const jobItemId = parsePieceId(pieceId);
     const markMm = board.marks[i] ?? start + cuts[i];
     start = markMm + kerf;
-    const label = labels.get(jobItemId) ?? '';
-    return { pieceId, jobItemId, label, lengthMm: board.pieceLengths[i], cutMm: cuts[i], markMm };
+    const found = labels.get(jobItemId) ?? '';
+    const details: PieceDetails = typeof found === 'string' ? { label: found } : found;
+    return {
+      pieceId,
+      jobItemId,
+      label: details.label,
+      lengthMm: board.pieceLengths[i],
+      cutMm: cuts[i],
+      markMm,
+      ...(details.angleTenths ? { angleTenths: details.angleTenths, cutNote: details.note ?? '' } : {}),
+      ...(details.marks ? { marks: details.marks } : {}),
+    };
   });
 }

@@ -61,20 +61,34 @@ const quantity = z
   .min(1, 'Quantity must be at least 1.')
   .max(10_000, 'Quantity must be at most 10 000.');
 
-/** One line item from the editable table; length in mm or any notation lib/units reads. */
-export const jobItemBodySchema = z.object({
+const jobItemFields = z.object({
   sectionId: z.number().int().positive('Choose a section.'),
   length: lengthInputSchema,
+  // The length as typed, kept so a too-short bare number can be answered with "did you mean 2.4 m?".
+  lengthText: z.string().max(40).optional(),
   quantity,
   label: z.string().trim().max(100).default(''),
   note: z.string().trim().max(500).default(''),
 });
-export type JobItemBody = z.input<typeof jobItemBodySchema>;
 
-export const updateJobItemBodySchema = jobItemBodySchema
-  .partial()
-  .strict()
-  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+/** Copies a typed length into `lengthText` before it is read as millimetres. */
+const keepTypedLength = (body: unknown) =>
+  body && typeof body === 'object' && typeof (body as { length?: unknown }).length === 'string'
+    ? { ...body, lengthText: (body as { length: string }).length }
+    : body;
+
+/** One line item from the editable table; length in mm or any notation lib/units reads. */
+export const jobItemBodySchema = z.preprocess(keepTypedLength, jobItemFields);
+export type JobItemBody = z.input<typeof jobItemFields>;
+export type JobItemFields = z.output<typeof jobItemFields>;
+
+export const updateJobItemBodySchema = z.preprocess(
+  keepTypedLength,
+  jobItemFields
+    .partial()
+    .strict()
+    .refine((v) => Object.keys(v).length > 0, 'Nothing to change.'),
+);
 
 /** Largest cut list the import accepts, in bytes. */
 export const MAX_IMPORT_BYTES = 5 * 1024 * 1024;

@@ -31,9 +31,11 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     expect(total).toBeGreaterThan(3);
 
     // The cautions are one line that opens on a tap.
-    await expect(page.getByTestId('safety-line')).toContainText('riving knife');
+    // Cross-cut saw cautions (HSE WIS36; HSE cross-cut saw guidance), deferring to the yard's risk assessment.
+    await expect(page.getByTestId('safety-line')).toContainText('Blade at rest before hands go near');
     await page.getByTestId('safety-line').locator('summary').tap();
-    await expect(page.getByTestId('safety-line')).toContainText('own safe-working rules');
+    await expect(page.getByTestId('safety-line')).toContainText('own risk assessment');
+    await expect(page.getByTestId('safety-line')).toContainText('HSE WIS36');
     await page.getByTestId('safety-line').locator('summary').tap();
 
     // The next cut is highlighted, and each "cut made" moves the highlight on.
