@@ -31,7 +31,7 @@ export async function runYardExact(count: number, median: (xs: number[]) => numb
       compared++;
       if (cost === best) atOptimum++;
       else misses.push(`#${seed} +${(((cost - best) / best) * 100).toFixed(2)} %`);
-      maxGap = Math.max(maxGap, (cost - best) / best);
+      if (best > 0) maxGap = Math.max(maxGap, (cost - best) / best);
     }
     const pieces = job.pieces.reduce((s, p) => s + p.quantity, 0);
     console.log(
