@@ -5,10 +5,10 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { SolveInput } from '@/solver/types';
 
-export const BENCHMARK_DIR = path.resolve(
-  path.dirname(fileURLToPath(import.meta.url)),
-  '../../../shared/benchmarks',
-);
+// ../shared/benchmarks beside the repository; BENCHMARK_DIR overrides it (e.g. from a git worktree).
+export const BENCHMARK_DIR =
+  process.env.BENCHMARK_DIR ??
+  path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../shared/benchmarks');
 
 export interface BenchmarkInstance {
   set: string;
