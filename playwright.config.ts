@@ -61,7 +61,7 @@ export default defineConfig({
     {
       command: `rm -rf ${dataDir} ${dataDir}.lock && npx next build && npx next start -p ${PORT} -H 127.0.0.1`,
       url: `${baseURL}/api/health`,
-      timeout: 300_000,
+      timeout: 600_000,
       reuseExistingServer: false,
       env: {
         KERFWISE_DATA_DIR: dataDir,

@@ -28,6 +28,14 @@ export default async function SettingsPage() {
             minSafePieceMm: s.minSafePieceMm,
             perCutChargePence: s.perCutChargePence,
             clearOffcutsAfterDays: s.clearOffcutsAfterDays,
+            vatRateBasisPoints: s.vatRateBasisPoints,
+            quoteValidityDays: s.quoteValidityDays,
+            minimumChargePence: s.minimumChargePence,
+            offcutRatePercent: s.offcutRatePercent,
+            depositPercent: s.depositPercent,
+            yardAddress: s.yardAddress,
+            vatNumber: s.vatNumber,
+            remaindersGoTo: s.remaindersGoTo,
           }}
         />
       </Card>
