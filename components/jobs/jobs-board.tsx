@@ -10,6 +10,7 @@ import { Notice } from '@/components/ui/notice';
 import { createJobRequest, jobsQuery, type JobFilters as Filters } from '@/lib/queries/jobs';
 import { JobDetailsForm } from './job-details-form';
 import { JobFilters } from './job-filters';
+import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { JobStatusBadge } from './job-status-badge';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 
@@ -62,6 +63,7 @@ export function JobsBoard() {
                   <th className="p-3">Due</th>
                   <th className="p-3 text-right">Pieces</th>
                   <th className="p-3">Status</th>
+                  <th className="p-3">Quote</th>
                 </tr>
               </thead>
               <tbody>
@@ -77,6 +79,11 @@ export function JobsBoard() {
                     <td className="p-3 text-right tabular-nums">{job.pieceCount}</td>
                     <td className="p-3">
                       <JobStatusBadge status={job.status} />
+                    </td>
+                    <td className="p-3" data-testid="job-quote-state">
+                      {job.quoteNumber && job.paymentState
+                        ? `${job.quoteNumber} · ${PAYMENT_STATE_LABEL[job.paymentState]}`
+                        : '—'}
                     </td>
                   </tr>
                 ))}

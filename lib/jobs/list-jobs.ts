@@ -3,6 +3,7 @@ import { and, asc, eq, gte, ilike, inArray, lte, notInArray, or, sql, type SQL }
 import { getDb } from '@/db';
 import { OPEN_JOB_STATUSES } from '@/db/enums';
 import { jobItems, jobs } from '@/db/schema';
+import { paymentState } from '@/lib/quotes/payment-state';
 import type { ListJobsQuery } from '@/lib/validations/jobs';
 
 const OPEN = [...OPEN_JOB_STATUSES];
@@ -24,7 +25,7 @@ export async function listJobs(query: ListJobsQuery = {}) {
   else if (query.show === 'closed') where.push(notInArray(jobs.status, OPEN));
   if (query.dueFrom) where.push(gte(jobs.dueDate, query.dueFrom));
   if (query.dueTo) where.push(lte(jobs.dueDate, query.dueTo));
-  return db
+  const rows = await db
     .select({
       id: jobs.id,
       reference: jobs.reference,
@@ -34,6 +35,17 @@ export async function listJobs(query: ListJobsQuery = {}) {
       status: jobs.status,
       itemCount: sql<number>`count(${jobItems.id})::int`,
       pieceCount: sql<number>`coalesce(sum(${jobItems.quantity}), 0)::int`,
+      // The latest quote (by version) and what the job has paid, for the state at a glance.
+      quote: sql<{
+        number: string;
+        accepted_at: string | null;
+        on_account: boolean;
+        gross_pence: number;
+        deposit_pence: number;
+      } | null>`(select row_to_json(q) from (select number, accepted_at, on_account, gross_pence, deposit_pence
+          from quotes where quotes.job_id = ${jobs.id} order by version desc limit 1) q)`,
+      paidPence: sql<number>`(select coalesce(sum(amount_pence), 0)::int from payments
+          where payments.job_id = ${jobs.id} and payments.status = 'succeeded')`,
     })
     .from(jobs)
     .leftJoin(jobItems, eq(jobItems.jobId, jobs.id))
@@ -44,5 +56,20 @@ export async function listJobs(query: ListJobsQuery = {}) {
       sql`${jobs.dueDate} asc nulls last`,
       asc(jobs.reference),
     );
+  return rows.map(({ quote, paidPence, ...row }) => ({
+    ...row,
+    quoteNumber: quote?.number ?? null,
+    paymentState: quote
+      ? paymentState(
+          {
+            acceptedAt: quote.accepted_at ? new Date(quote.accepted_at) : null,
+            onAccount: quote.on_account,
+            grossPence: quote.gross_pence,
+            depositPence: quote.deposit_pence,
+          },
+          paidPence,
+        )
+      : null,
+  }));
 }
 export type JobListRow = Awaited<ReturnType<typeof listJobs>>[number];
