@@ -38,6 +38,8 @@ export type PlanTotals = {
   cuts: number;
   lowerBoundBoards: number;
   gapBoards: number;
+  /** No plan for the same pieces can buy its new stock for less (whole pence); absent on older plans. */
+  lowerBoundPence?: number;
   unplacedPieces: number;
   /** What a plain longest-first plan (first-fit decreasing, new stock only) would have used. */
   baseline: { boards: number; stockCostPence: number; scrapMm: number };

@@ -41,6 +41,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     cuts: 0,
     lowerBoundBoards: 0,
     gapBoards: 0,
+    lowerBoundPence: 0,
     unplacedPieces: 0,
     baseline: { boards: 0, stockCostPence: 0, scrapMm: 0 },
   };
@@ -60,6 +61,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     );
     t.cuts += output.boards.reduce((sum, b) => sum + b.pieces.length, 0);
     t.lowerBoundBoards += output.lowerBound.boards;
+    t.lowerBoundPence! += boundPence(output.lowerBound);
     t.gapBoards += output.gap.boards;
     t.unplacedPieces += output.unplaced.length;
     const base = longestFirstBaseline(input);
@@ -70,6 +72,15 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
   const consumed = t.materialMm - t.keptMm;
   t.yieldPercent = consumed > 0 ? Math.round((1000 * t.pieceMm) / consumed) / 10 : 0;
   return t;
+}
+
+/**
+ * The solver's cost bound in whole pence. Plans cost whole pence, so a bound of £12.341 means no
+ * plan under £12.35: round up. Reads a pence figure when the solver gives one.
+ */
+function boundPence(bound: { cost: number } & { costPence?: unknown }): number {
+  if (typeof bound.costPence === 'number') return Math.ceil(bound.costPence);
+  return Math.ceil(Math.round(bound.cost * 1e6) / 1e4);
 }
 
 /** The boards in saw order: section by section, offcuts first, then the longest boards. */

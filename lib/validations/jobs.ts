@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { JOB_STATUSES } from '@/db/enums';
+import { JOB_LIST_SHOWS, JOB_STATUSES } from '@/db/enums';
 import { lengthInputSchema } from '@/lib/units/length-input-schema';
 import { dbIdSchema } from './db-id';
 
@@ -65,6 +65,8 @@ export const listJobsQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
   customer: z.string().trim().max(120).optional(),
   status: z.enum(JOB_STATUSES).optional(),
+  /** Open jobs unless asked otherwise; a chosen status overrides it. */
+  show: z.enum(JOB_LIST_SHOWS).optional(),
   dueFrom: dueDate.optional(),
   dueTo: dueDate.optional(),
 });

@@ -66,6 +66,8 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     await saw.cutEverything();
     await expect(saw.progress()).toContainText(`${total} of ${total}`);
     await office.reload();
+    // Done jobs leave the open list; the office finds them under Show.
+    await office.getByTestId('job-show').selectOption('closed');
     await expect(office.getByTestId('jobs-table').getByRole('row', { name: /J-1002/ })).toContainText('done');
     await office.context().close();
 
@@ -144,6 +146,7 @@ test.describe('the saw station in portrait (768×1024, touch)', () => {
 
     // The office sees the job done.
     await office.goto('/jobs');
+    await office.getByTestId('job-show').selectOption('closed');
     await expect(office.getByTestId('jobs-table').getByRole('row', { name: /J-1003/ })).toContainText('done');
     await office.context().close();
   });

@@ -14,7 +14,7 @@ export default async function JobsPage() {
     <>
       <PageHeader
         title="Jobs"
-        lead="Customer cut lists, soonest due first."
+        lead="Open jobs, soonest due first. Done and cancelled jobs are under Show."
         actions={
           can(user.role, 'mail:outbox') ? (
             <Link href="/outbox" className="font-semibold text-spruce underline">
