@@ -57,8 +57,8 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
         <ComposedChart data={data}>
           <CartesianGrid stroke={CHART.grain} strokeDasharray="3 3" />
           <XAxis dataKey="jobReference" fontSize={11} />
-          <YAxis yAxisId="job" fontSize={12} unit=" £" />
-          <YAxis yAxisId="run" orientation="right" fontSize={12} unit=" £" />
+          <YAxis yAxisId="job" fontSize={12} tickFormatter={poundsTick} />
+          <YAxis yAxisId="run" orientation="right" fontSize={12} tickFormatter={poundsTick} />
           <Tooltip />
           <Legend />
           <Bar yAxisId="job" dataKey="plainPounds" name="Longest-first (£)" fill={CHART.grain} />
@@ -76,3 +76,6 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
     </ChartPanel>
   );
 }
+
+/** Money on an axis the way it is written: £100, not 100 £. */
+const poundsTick = (value: number) => `£${value}`;
