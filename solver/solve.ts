@@ -1,5 +1,7 @@
 // The public entry point: validated job in, cheapest plan found plus its lower bound out.
 
+import type { Pattern } from './column-generation';
+import { exactStep } from './exact-step';
 import { firstFitDecreasing, sequentialFill } from './greedy-fill';
 import { lengthBound, lpBound, maxBound } from './lower-bounds';
 import { buildModel, type Model } from './model';
@@ -24,9 +26,12 @@ export function solve(input: SolveInput): SolvePlan {
   const consider = (p: Packing | null) => {
     if (p && compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
   };
-  consider(firstFitDecreasing(model, demand, limits));
+  const ffd = firstFitDecreasing(model, demand, limits);
+  consider(ffd);
 
+  const firstPlans = [best];
   let bound = lengthBound(model, placedDemand(model, best), limits);
+  let lpPool: Pattern[] = [];
   const allPlaced = best.unplaced.every((n) => n === 0);
   if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
     const lengthTarget = bound.boards;
@@ -41,11 +46,19 @@ export function solve(input: SolveInput): SolvePlan {
       stopAtCost: fromUnits(scorePacking(model, best).cost),
     });
     bound = maxBound(bound, lp?.bound ?? null);
+    lpPool = lp?.pool ?? [];
     if (!meetsBound(model, best, bound)) {
       // Untrimmed boards widen the LP's patterns beyond what trimmed boards hold: bound only.
       const guide = model.relaxed ? null : lp;
       consider(improvePacking(model, best, bound, guide, budget, lengthTarget));
     }
+  }
+  // The integer step: cheaper when the bound is not met, and tidier (offcuts, scrap) when it is.
+  const unusedOffcuts = model.bins.some(
+    (b, j) => b.source === 'offcut' && !best.boards.some((pb) => pb.bin === j),
+  );
+  if (allPlaced && (!meetsBound(model, best, bound) || unusedOffcuts) && !budget.expired()) {
+    consider(exactStep(model, demand, limits, [...firstPlans, ffd, best], lpPool, budget));
   }
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
   return buildPlan(model, best, bound, {

@@ -2,6 +2,7 @@
 import { sql } from 'drizzle-orm';
 import type { PgliteDatabase } from 'drizzle-orm/pglite';
 import { hashPassword } from '@/lib/auth/password';
+import { seedDemoCustomers } from './customers';
 import * as schema from '../schema';
 import { seedDemoPlans } from './demo-plans';
 import {
@@ -124,6 +125,7 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       now,
       userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') },
     });
+    await seedDemoCustomers(tx);
     return users.find((u) => u.role === 'yard_hand')!.id;
   });
   await seedDemoPlans(db, handId);

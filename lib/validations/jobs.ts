@@ -15,19 +15,31 @@ const email = z.union([
   z.string().trim().toLowerCase().email('Enter a valid e-mail address.'),
 ]);
 
-/** POST /api/jobs. The reference is generated (next J-number) when left out. */
-export const createJobBodySchema = z.object({
-  customer: z.string().trim().min(1, 'Enter the customer.').max(120),
-  reference: z
-    .string()
-    .trim()
-    .max(40)
-    .optional()
-    .transform((v) => v || undefined),
-  dueDate: dueDate.nullable().optional(),
-  customerEmail: email.optional(),
-  notes: z.string().max(2000).optional(),
-});
+const deliveryChargePence = z.number().int('The delivery charge is in whole pence.').min(0).max(100_000_00);
+
+/**
+ * POST /api/jobs. The reference is generated (next J-number) when left out. The customer is a
+ * record (`customerId`) or a name, which finds that customer or makes a new retail one.
+ */
+export const createJobBodySchema = z
+  .object({
+    customerId: z.number().int().positive().optional(),
+    customer: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
+    deliveryChargePence: deliveryChargePence.optional(),
+    reference: z
+      .string()
+      .trim()
+      .max(40)
+      .optional()
+      .transform((v) => v || undefined),
+    dueDate: dueDate.nullable().optional(),
+    customerEmail: email.optional(),
+    notes: z.string().max(2000).optional(),
+  })
+  .refine((v) => v.customerId !== undefined || v.customer !== undefined, {
+    message: 'Choose a customer or enter a new one.',
+    path: ['customer'],
+  });
 export type CreateJobBody = z.infer<typeof createJobBodySchema>;
 
 /** PATCH /api/jobs/[jobId]: edit details, cancel (status "cancelled") or reopen a cancelled job (status "draft"). */
@@ -37,6 +49,8 @@ export const updateJobBodySchema = z
     reference: z.string().trim().min(1, 'Enter a reference.').max(40),
     dueDate: dueDate.nullable(),
     customerEmail: email,
+    customerId: z.number().int().positive(),
+    deliveryChargePence,
     notes: z.string().max(2000),
     status: z.enum(['cancelled', 'draft'], { message: 'A job can only be cancelled or reopened here.' }),
   })

@@ -1,4 +1,5 @@
 import { expect, test, type Browser } from '@playwright/test';
+import { acceptAndPayDeposit } from './support/payments';
 import { DEMO, signIn } from './support/sign-in';
 import { SawStationPage } from './support/saw-station';
 
@@ -90,6 +91,7 @@ test.describe('the saw station in portrait (768×1024, touch)', () => {
     const replanned = await office.request.post(`/api/jobs/${job.id}/plans`, { data: {} });
     expect(replanned.status()).toBe(201);
     const planned = await replanned.json();
+    await acceptAndPayDeposit(office.request, planned.id);
     expect((await office.request.post(`/api/plans/${planned.id}/release`)).status()).toBe(200);
 
     await signIn(page, DEMO.saw);
