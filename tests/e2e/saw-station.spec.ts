@@ -37,6 +37,8 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     await page.getByTestId('safety-line').locator('summary').tap();
     await expect(page.getByTestId('safety-line')).toContainText('own risk assessment');
     await expect(page.getByTestId('safety-line')).toContainText('HSE WIS36');
+    await expect(page.getByTestId('cut-1').getByTestId('piece-length')).toBeVisible();
+    await page.screenshot({ path: 'test-results/screens/saw-cautions-tablet-landscape.png', fullPage: true });
     await page.getByTestId('safety-line').locator('summary').tap();
 
     // The next cut is highlighted, and each "cut made" moves the highlight on.
