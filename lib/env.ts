@@ -11,6 +11,15 @@ const envSchema = z.object({
   KERFWISE_MAIL_FROM: z.string().default('Kerfwise <cutting@yard.test>'),
   // Development and tests: the local mail catcher's HTTP address, so the outbox can show caught mail.
   KERFWISE_MAIL_CATCHER_URL: z.string().url().optional(),
+  // Seed the demo yard (demo users with a known password) into an empty database at start.
+  KERFWISE_DEMO: z
+    .enum(['0', '1', 'true', 'false', ''])
+    .optional()
+    .transform((v) => v === '1' || v === 'true'),
+  // Create the first owner at start when the database has no accounts yet.
+  KERFWISE_OWNER_EMAIL: z.string().optional(),
+  KERFWISE_OWNER_PASSWORD: z.string().optional(),
+  KERFWISE_OWNER_NAME: z.string().optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
 });
 
