@@ -42,7 +42,11 @@ export async function createPlan({
   };
 
   const plan = await composePlan({
-    data,
+    // A shortest kept offcut set for this plan overrides each section's own.
+    data:
+      overrides.minOffcutMm === undefined
+        ? data
+        : { ...data, sections: data.sections.map((s) => ({ ...s, minKeepMm: null })) },
     settings,
     perCutChargePence: yard.perCutChargePence,
     solve: runSolver,

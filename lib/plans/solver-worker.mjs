@@ -4,7 +4,9 @@
 import { parentPort } from 'node:worker_threads';
 import { tsImport } from 'tsx/esm/api';
 
-const { solve } = await tsImport('../../solver/index.ts', import.meta.url);
+const { prepareSolver, solve } = await tsImport('../../solver/index.ts', import.meta.url);
+// The integer step (HiGHS, WebAssembly) loads once per worker; without it the heuristics still plan.
+await prepareSolver().catch(() => undefined);
 
 parentPort?.on('message', (input) => {
   try {
