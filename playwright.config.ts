@@ -65,6 +65,7 @@ export default defineConfig({
       reuseExistingServer: false,
       env: {
         KERFWISE_DATA_DIR: dataDir,
+        KERFWISE_DEMO: '1',
         NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-use',
         NEXTAUTH_URL: baseURL,
         NEXT_TELEMETRY_DISABLED: '1',
