@@ -34,6 +34,7 @@ export const MOVEMENT_KINDS = [
   'offcut_scrapped',
   'offcut_moved',
   'defect', // a board found bad at the saw
+  'board_undone', // a board confirmation taken back: reverses its cut, offcut use and new offcut
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
 

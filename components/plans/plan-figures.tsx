@@ -3,7 +3,7 @@
 import { useFormatLength } from '@/components/units/display-unit';
 import type { PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
-import { countBoardsByLength } from './group-boards';
+import { countBoardsByLength } from '@/lib/plans/group-boards';
 import { BaselineComparison } from './baseline-comparison';
 import { formatPence, formatPounds } from './money';
 

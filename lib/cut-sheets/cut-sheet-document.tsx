@@ -1,6 +1,6 @@
 // The PDF cut sheet: job, pieces by section, board diagrams and the price.
 import { Document, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
-import { groupIdenticalBoards } from '@/components/plans/group-boards';
+import { groupIdenticalBoards } from '@/lib/plans/group-boards';
 import type { PlanViewData } from '@/lib/queries/plans';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import { PdfBoard } from './pdf-board';

@@ -51,6 +51,8 @@ export type BoardPiece = {
   jobItemId: number;
   label: string;
   lengthMm: number;
+  /** Length actually cut: a nominal piece may be up to its tolerance short (plans before this: lengthMm). */
+  cutMm?: number;
   markMm: number;
   /** An angled cut, from a frame schedule: degrees off square in tenths; the length is the long point. */
   angleTenths?: number;

@@ -1,4 +1,5 @@
 // Whole-plan figures and the saw's board list, from the solver's per-section results. Pure.
+import type { PlanBoard } from '@/solver';
 import { longestFirstBaseline } from './longest-first-baseline';
 import {
   parsePieceId,
@@ -20,6 +21,8 @@ export type BoardRow = {
   pieces: BoardPiece[];
   remainderMm: number;
   keepRemainder: boolean;
+  /** One piece sold at the whole stock length: no trim, no cut. */
+  fullLength: boolean;
 };
 
 export function summarisePlan(sections: PlanSection[]): PlanTotals {
@@ -100,9 +103,10 @@ export function planBoardRows(
         offcutId: source.kind === 'offcut' ? source.id : null,
         lengthMm: board.length,
         trimMm: board.trim,
-        pieces: boardPieces(board.pieces, board.pieceLengths, board.marks, input.kerf, labels),
+        pieces: boardPieces(board, input.kerf, labels),
         remainderMm: board.remainder,
         keepRemainder: board.remainderKept,
+        fullLength: board.fullLength ?? false,
       });
     }
   }
@@ -111,16 +115,16 @@ export function planBoardRows(
 
 /** The last piece may end exactly at the board's end, where no cut (and so no mark) is needed. */
 function boardPieces(
-  pieceIds: string[],
-  lengths: number[],
-  marks: number[],
+  board: Pick<PlanBoard, 'pieces' | 'pieceLengths' | 'cutLengths' | 'marks'>,
   kerf: number,
   labels: Map<number, string | PieceDetails>,
 ): BoardPiece[] {
+  // Plans stored before nominal pieces carry no cut lengths: the ordered lengths were cut.
+  const cuts = board.cutLengths ?? board.pieceLengths;
   let start = 0;
-  return pieceIds.map((pieceId, i) => {
+  return board.pieces.map((pieceId, i) => {
     const jobItemId = parsePieceId(pieceId);
-    const markMm = marks[i] ?? start + lengths[i];
+    const markMm = board.marks[i] ?? start + cuts[i];
     start = markMm + kerf;
     const found = labels.get(jobItemId) ?? '';
     const details: PieceDetails = typeof found === 'string' ? { label: found } : found;
@@ -128,7 +132,8 @@ function boardPieces(
       pieceId,
       jobItemId,
       label: details.label,
-      lengthMm: lengths[i],
+      lengthMm: board.pieceLengths[i],
+      cutMm: cuts[i],
       markMm,
       ...(details.angleTenths ? { angleTenths: details.angleTenths, cutNote: details.note ?? '' } : {}),
       ...(details.marks ? { marks: details.marks } : {}),

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { describeGap } from '@/components/plans/gap-words';
-import { layOutBoard } from '@/components/plans/board-layout';
+import { layOutBoard } from '@/lib/plans/board-layout';
 
 describe('layOutBoard', () => {
   it('places trim, kerfs, pieces and the end so they add up to the board', () => {

@@ -4,6 +4,6 @@ import { route } from '@/lib/api/route';
 import { getSawQueue } from '@/lib/saw/get-saw-queue';
 
 // Read by the saw and, for live progress, by the office.
-export const GET = route('plans:read', async () => {
+export const GET = route('saw:read', async () => {
   return NextResponse.json({ queue: await getSawQueue() });
 });
