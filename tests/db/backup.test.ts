@@ -5,10 +5,11 @@ import { sql } from 'drizzle-orm';
 import { afterAll, describe, expect, it } from 'vitest';
 import { readVerifiedBackup, restoreSnapshot, writeBackup } from '@/db/backup';
 import { requestSnapshot, serveBackups } from '@/db/backup-socket';
+import { setDbForTests } from '@/db';
 import { openDatabase, type Db } from '@/db/client';
 import { acquireDataDirLock } from '@/db/data-dir-lock';
 import * as schema from '@/db/schema';
-import { seedDemoYard } from '@/db/seed';
+import { minimalYard } from '../support/minimal-yard';
 
 const root = mkdtempSync(path.join(tmpdir(), 'kerfwise-backup-'));
 /** Every row of every table the database has (the migrations' own table too), in a fixed order. */
@@ -35,13 +36,17 @@ describe('backup and restore', () => {
 
   it('restores a snapshot taken from a running server with every table equal', async () => {
     opened = await openDatabase(source);
-    await seedDemoYard(opened.db, new Date('2026-11-20T09:00:00Z'));
+    setDbForTests(opened.db); // the fixture writes through the lib functions
+    await minimalYard(opened.db);
+    setDbForTests(undefined);
     const server = await serveBackups(source, opened.client);
 
     // Writes keep coming while the snapshot is taken; the restore must hold whole transactions only.
     let writing = true;
     const writes = (async () => {
-      for (let i = 0; writing; i++) {
+      // Bounded, and pausing between writes, so the snapshot can take the database between transactions.
+      for (let i = 0; writing && i < 500; i++) {
+        await new Promise((resolve) => setTimeout(resolve, 2));
         await opened.db.transaction(async (tx) => {
           const [job] = await tx
             .insert(schema.jobs)
