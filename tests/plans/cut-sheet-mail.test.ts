@@ -63,7 +63,7 @@ describe('POST /api/plans/[planId]/email', () => {
     expect(mail.to).toEqual(['ade.t@example.com']);
     expect(mail.subject).toContain('J-1003');
     expect(mail.text).toContain('Ready Friday.');
-    expect(mail.text).toMatch(/Total: £\d+\.\d\d/);
+    expect(mail.text).toMatch(/Total to pay: £\d+\.\d\d \(includes VAT of £\d+\.\d\d\)/);
     expect(mail.attachments).toEqual([
       expect.objectContaining({
         contentType: 'application/pdf',

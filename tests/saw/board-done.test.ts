@@ -38,7 +38,8 @@ async function twoBoardJob() {
     sectionId: section.id,
     pieces: [
       [1500, 1, 'rail'],
-      [3000, 1, 'beam'],
+      // Not 3000: a piece that takes a whole stock length is sold full length, uncut, with no remainder.
+      [3200, 1, 'beam'],
     ],
   });
   const boards = await boardsOf(t.db, job.planId);
@@ -247,7 +248,7 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     const other = await releasedJob(t.db, {
       reference: 'J-T9',
       sectionId: section.id,
-      pieces: [[400, 1, 'block']],
+      pieces: [[300, 1, 'block']],
       releaseIt: false,
     });
     const otherBoards = await boardsOf(t.db, other.planId);
