@@ -20,6 +20,8 @@ export const ACTIONS = {
   'plans:read': ['owner', 'yard_hand'],
   /** The saw screens: released plans only, without customer contact details or prices. */
   'saw:read': ['owner', 'saw_operator'],
+  /** The saw queue's progress (references, customer names, boards cut), shown at the saw and in the office. */
+  'saw:progress': ['owner', 'yard_hand', 'saw_operator'],
   'mail:send': ['owner', 'yard_hand'],
   'mail:outbox': ['owner'],
   'saw:cut': ['owner', 'saw_operator'],

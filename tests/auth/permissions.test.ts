@@ -19,6 +19,7 @@ const expected: Record<Action, { owner: boolean; yard_hand: boolean; saw_operato
   'plans:release': { owner: true, yard_hand: true, saw_operator: false },
   'plans:read': { owner: true, yard_hand: true, saw_operator: false },
   'saw:read': { owner: true, yard_hand: false, saw_operator: true },
+  'saw:progress': { owner: true, yard_hand: true, saw_operator: true },
   'mail:send': { owner: true, yard_hand: true, saw_operator: false },
   'mail:outbox': { owner: true, yard_hand: false, saw_operator: false },
   'saw:cut': { owner: true, yard_hand: false, saw_operator: true },
