@@ -1,13 +1,22 @@
-// The running server owns the data folder, so backups are asked of it over a Unix socket beside the
-// folder. The socket file is private to the server's OS user (mode 0600): only that user (or root),
+// The running server owns the data folder, so backups are asked of it over a Unix socket in the OS
+// temp folder, named from the folder's real path. Not beside the folder: that is often inside the
+// project, where the CSS build's file scan would try to read the socket and fail. The socket file is private to the server's OS user (mode 0600): only that user (or root),
 // who could read the data folder anyway, can ask; nothing listens on the network.
+import { createHash } from 'node:crypto';
 import { chmodSync, rmSync } from 'node:fs';
 import net from 'node:net';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import type { PGlite } from '@electric-sql/pglite';
 import { takeSnapshot } from './backup';
 import { realDataDir } from './data-dir-lock';
 
-export const backupSocketPath = (dataDir: string) => `${realDataDir(dataDir)}.backup.sock`;
+/** Short (Unix socket paths are limited to about 108 bytes) and the same for every path to one folder. */
+export const backupSocketPath = (dataDir: string) =>
+  path.join(
+    tmpdir(),
+    `kerfwise-backup-${createHash('sha256').update(realDataDir(dataDir)).digest('hex').slice(0, 16)}.sock`,
+  );
 
 /** Answers each connection with one snapshot: a JSON header line, then the gzip bytes. */
 export function serveBackups(dataDir: string, client: PGlite): Promise<net.Server> {
