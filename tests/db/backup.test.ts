@@ -75,9 +75,9 @@ describe('backup and restore', () => {
     restored.release();
 
     const jobsInBackup = (got.jobs as { reference: string }[]).filter((j) => j.reference.startsWith('J-BK-'));
-    const itemsInBackup = (got.job_items as { jobId: number }[]).filter((i) =>
+    const itemsInBackup = (got.job_items as { job_id: number }[]).filter((i) =>
       (got.jobs as { id: number; reference: string }[]).some(
-        (j) => j.id === i.jobId && j.reference.startsWith('J-BK-'),
+        (j) => j.id === i.job_id && j.reference.startsWith('J-BK-'),
       ),
     );
     expect(itemsInBackup).toHaveLength(jobsInBackup.length); // no job without its item
@@ -90,7 +90,7 @@ describe('backup and restore', () => {
     );
     const liveJobIds = new Set(liveJobs.map((j) => j.id));
     live.jobs = liveJobs;
-    live.job_items = (live.job_items as { jobId: number }[]).filter((i) => liveJobIds.has(i.jobId));
+    live.job_items = (live.job_items as { job_id: number }[]).filter((i) => liveJobIds.has(i.job_id));
     expect(Object.keys(got)).toEqual(Object.keys(live));
     for (const name of Object.keys(live)) expect(got[name], name).toEqual(live[name]);
     expect(got.users.length).toBeGreaterThan(0);
