@@ -7,6 +7,7 @@ import { solvePatternLp } from '@/solver/column-generation';
 import { buildModel } from '@/solver/model';
 import type { SolveInput } from '@/solver/types';
 import { randomCuts, toSolveInput, triplets } from './perfect-fit';
+import { PAPER_ROLL_WIDTH, paperRolls } from './paper-rolls';
 
 function lpOf(input: SolveInput, stopAtCost?: number) {
   const model = buildModel(input);
@@ -34,27 +35,13 @@ describe('pattern LP on perfect-fit instances equals the optimum by construction
 
 describe('pattern LP on a published example', () => {
   it("paper rolls (Wikipedia, 'Cutting stock problem'): LP value 72.917", () => {
-    const widths: [number, number][] = [
-      [1380, 22],
-      [1520, 25],
-      [1560, 12],
-      [1710, 14],
-      [1820, 18],
-      [1880, 18],
-      [1930, 20],
-      [2000, 10],
-      [2050, 12],
-      [2100, 14],
-      [2140, 16],
-      [2150, 18],
-      [2200, 20],
-    ];
+    const widths = paperRolls;
     const input: SolveInput = {
       kerf: 0,
       trim: 0,
       minOffcut: 0,
       timeLimitMs: 20_000,
-      stock: [{ id: 'roll', length: 5600, cost: 1, available: null }],
+      stock: [{ id: 'roll', length: PAPER_ROLL_WIDTH, cost: 1, available: null }],
       offcuts: [],
       pieces: widths.map(([length, quantity]) => ({ id: `w${length}`, length, quantity })),
     };
