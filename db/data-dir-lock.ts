@@ -25,13 +25,24 @@ export function lockFilePath(dataDir: string): string {
   return `${realDataDir(dataDir)}.lock`;
 }
 
+/**
+ * A process that exited but was never reaped (a zombie, common in containers whose first process
+ * does not reap orphans) still answers kill(pid, 0), yet holds nothing: Linux's /proc says 'Z'.
+ */
+function isZombie(pid: number): boolean {
+  const stat = readRaw(`/proc/${pid}/stat`);
+  if (!stat) return false;
+  // The state follows the command name, which is in parentheses and may itself hold spaces.
+  return stat.slice(stat.lastIndexOf(')') + 2, stat.lastIndexOf(')') + 3) === 'Z';
+}
+
 function isAlive(pid: number): boolean {
   try {
     process.kill(pid, 0);
-    return true;
   } catch (error) {
     return (error as NodeJS.ErrnoException).code === 'EPERM';
   }
+  return !isZombie(pid);
 }
 
 function readRaw(file: string): string | null {

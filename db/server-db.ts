@@ -10,6 +10,12 @@ type Cache = { kerfwiseDb?: Promise<ServerDb> };
 const cache = globalThis as unknown as Cache;
 
 export function getServerDb(): Promise<ServerDb> {
+  // A build that opened the folder would leave its lock behind for the server started after it.
+  if (process.env.NEXT_PHASE === 'phase-production-build') {
+    return Promise.reject(
+      new Error('The database is not opened while building: render this page per request.'),
+    );
+  }
   cache.kerfwiseDb ??= openDatabase(dataDirPath()).then(
     async ({ db, client }) => {
       await prepareYard(db, getEnv());

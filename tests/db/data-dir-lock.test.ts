@@ -56,6 +56,26 @@ describe('data folder lock', () => {
     expect(dataDirHolder(dir)).toBeNull();
   });
 
+  it('takes over a lock whose process exited but was never reaped (a zombie)', async () => {
+    // The shell starts a short-lived child, then becomes `sleep`, which never reaps it: for a few
+    // seconds the child's pid answers kill(pid, 0) although the process is gone.
+    const parent = spawn('sh', ['-c', 'sleep 0 & echo $!; exec sleep 5'], {
+      stdio: ['ignore', 'pipe', 'ignore'],
+    });
+    const [chunk] = (await once(parent.stdout, 'data')) as [Buffer];
+    const zombiePid = Number(String(chunk).trim());
+    await new Promise((resolve) => setTimeout(resolve, 300)); // let `sleep 0` exit
+    try {
+      expect(() => process.kill(zombiePid, 0)).not.toThrow();
+      const dir = path.join(root, 'zombie');
+      writeFileSync(lockFilePath(dir), String(zombiePid));
+      expect(dataDirHolder(dir)).toBeNull();
+      acquireDataDirLock(dir)();
+    } finally {
+      parent.kill();
+    }
+  });
+
   it('keys the lock on the real folder, so a symlinked path shares it', () => {
     const dir = path.join(root, 'real');
     mkdirSync(dir);
