@@ -17,8 +17,10 @@ export default defineConfig({
     exclude: ['tests/e2e/**', 'node_modules/**'],
     environment: 'node',
     testTimeout: 30_000,
-    hookTimeout: 60_000,
+    // The first file to need the demo yard seeds it for the whole run; on a busy machine that is slow.
+    hookTimeout: 300_000,
     pool: 'forks',
     setupFiles: ['tests/support/setup.ts'],
+    globalSetup: ['tests/support/global-setup.ts'],
   },
 });

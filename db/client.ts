@@ -1,12 +1,10 @@
-// Opens the embedded Postgres (PGlite) through Drizzle, migrated and seeded, once per process.
-import { mkdirSync } from 'node:fs';
+// Opens the embedded Postgres (PGlite) through Drizzle, migrated, once per process.
 import path from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle, type PgliteDatabase } from 'drizzle-orm/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
 import * as schema from './schema';
-import { acquireDataDirLock } from './data-dir-lock';
-import { seedDemoYard } from './seed';
+import { acquireDataDirLock, realDataDir } from './data-dir-lock';
 
 export type Db = PgliteDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -19,15 +17,15 @@ export function wrapClient(client: PGlite): Db {
   return drizzle({ client, schema });
 }
 
-/** Opens a data folder (or memory when dir is null), applies migrations and seeds an empty yard. */
-export async function openDatabase(dir: string | null, options: { seed?: boolean } = {}) {
-  if (dir) {
-    mkdirSync(path.dirname(dir), { recursive: true });
-    acquireDataDirLock(dir);
-  }
-  const client = dir ? new PGlite(dir) : new PGlite();
+/**
+ * Opens a data folder (or memory when dir is null) and applies migrations. The folder's lock is
+ * taken first and held until the process exits (or `release` is called after `client.close()`).
+ * Seeding is separate (db/prepare-yard.ts): production starts with no users.
+ */
+export async function openDatabase(dir: string | null) {
+  const release = dir ? acquireDataDirLock(dir) : () => {};
+  const client = dir ? new PGlite(realDataDir(dir)) : new PGlite();
   const db = wrapClient(client);
   await migrate(db, { migrationsFolder });
-  if (options.seed ?? true) await seedDemoYard(db);
-  return { client, db };
+  return { client, db, release };
 }

@@ -1,26 +1,13 @@
-// The one database client of the server process, opened lazily so `next build` never touches it.
+// The one database client of the server process, opened at start-up so `next build` never touches it.
 import 'server-only';
-import { dataDirPath } from '@/lib/env';
-import { openDatabase, type Db } from './client';
+import { getServerDb, setServerDbForTests } from './server-db';
+import type { Db } from './client';
 
 export type { Db, DbOrTx, Tx } from './client';
 
-type Cache = { kerfwiseDb?: Promise<Db> };
-const cache = globalThis as unknown as Cache;
-
-export function getDb(): Promise<Db> {
-  // Cached on globalThis: hot reloads would otherwise open a second PGlite on the same folder.
-  cache.kerfwiseDb ??= openDatabase(dataDirPath()).then(
-    ({ db }) => db,
-    (error: unknown) => {
-      cache.kerfwiseDb = undefined; // let the next request try again
-      throw error;
-    },
-  );
-  return cache.kerfwiseDb;
+export async function getDb(): Promise<Db> {
+  return (await getServerDb()).db;
 }
 
 /** Tests point the server code at an in-memory database. */
-export function setDbForTests(db: Db | undefined): void {
-  cache.kerfwiseDb = db ? Promise.resolve(db) : undefined;
-}
+export const setDbForTests = setServerDbForTests;

@@ -11,6 +11,15 @@ const envSchema = z.object({
   KERFWISE_MAIL_FROM: z.string().default('Kerfwise <cutting@yard.test>'),
   // Development and tests: the local mail catcher's HTTP address, so the outbox can show caught mail.
   KERFWISE_MAIL_CATCHER_URL: z.string().url().optional(),
+  // Seed the demo yard (demo users with a known password) into an empty database at start.
+  KERFWISE_DEMO: z
+    .enum(['0', '1', 'true', 'false', ''])
+    .optional()
+    .transform((v) => v === '1' || v === 'true'),
+  // Create the first owner at start when the database has no accounts yet.
+  KERFWISE_OWNER_EMAIL: z.string().optional(),
+  KERFWISE_OWNER_PASSWORD: z.string().optional(),
+  KERFWISE_OWNER_NAME: z.string().optional(),
   // The payment service. Leave KERFWISE_PAYMENTS_API_URL unset to use the real service's own address;
   // development and tests point it at the local fake (scripts/payment-fake.ts).
   KERFWISE_PAYMENTS_API_URL: z.string().url().optional(),
