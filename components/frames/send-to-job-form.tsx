@@ -3,9 +3,12 @@
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { CustomerPicker } from '@/components/customers/customer-picker';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
+import type { CustomerChoice } from '@/lib/queries/customers';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { sendScheduleToJobRequest, type SendToJobRequest } from '@/lib/queries/frames';
 
@@ -60,7 +63,7 @@ export function SendToJobForm({
     } else
       send.mutate({
         newJob: {
-          customerName: String(form.get('customerName') ?? ''),
+          ...(readCustomerChoice(form) as CustomerChoice),
           customerEmail: String(form.get('customerEmail') ?? ''),
           reference: String(form.get('reference') ?? '') || undefined,
           dueDate: String(form.get('dueDate') ?? '') || undefined,
@@ -87,9 +90,7 @@ export function SendToJobForm({
       </fieldset>
       {target === 'new' ? (
         <div className="grid gap-3 sm:grid-cols-2">
-          <Field label="Customer" error={error('newJob.customerName')}>
-            {(p) => <input {...p} name="customerName" defaultValue={customerName} autoComplete="off" />}
-          </Field>
+          <CustomerPicker suggestedName={customerName} error={(path) => error(`newJob.${path}`)} />
           <Field label="Customer e-mail" error={error('newJob.customerEmail')}>
             {(p) => (
               <input

@@ -1,28 +1,30 @@
 'use client';
 
 import { useState } from 'react';
+import { CustomerPicker } from '@/components/customers/customer-picker';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
 import { ApiError } from '@/lib/queries/fetch-json';
 import type { JobDetailsBody } from '@/lib/queries/jobs';
 
-type Values = { customer: string; reference: string; dueDate: string; customerEmail: string; notes: string };
-const fieldNames: (keyof Values)[] = ['customer', 'reference', 'dueDate', 'customerEmail', 'notes'];
+type Values = { reference: string; dueDate: string; customerEmail: string; notes: string };
+const fieldNames: (keyof Values)[] = ['reference', 'dueDate', 'customerEmail', 'notes'];
 
-/** Customer, reference, due date, e-mail and notes: used to create a job and to edit one. */
+/** Customer (picked, or new inline), reference, due date, e-mail and notes: to create or edit a job. */
 export function JobDetailsForm({
   initial,
   submitLabel,
   onSubmit,
   testId,
 }: {
-  initial?: Partial<Values>;
+  initial?: Partial<Values> & { customer?: { id: number; name: string } | null };
   submitLabel: string;
   onSubmit: (body: JobDetailsBody) => Promise<unknown>;
   testId?: string;
 }) {
-  const [errors, setErrors] = useState<Partial<Record<keyof Values | 'form', string>>>({});
+  const [errors, setErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
 
   async function submit(e: React.FormEvent<HTMLFormElement>) {
@@ -33,7 +35,7 @@ export function JobDetailsForm({
     setErrors({});
     try {
       await onSubmit({
-        customer: v.customer,
+        ...readCustomerChoice(data),
         reference: v.reference || undefined,
         dueDate: v.dueDate || null,
         customerEmail: v.customerEmail,
@@ -60,7 +62,7 @@ export function JobDetailsForm({
   );
   return (
     <form onSubmit={submit} className="grid gap-4 sm:grid-cols-2" data-testid={testId} noValidate>
-      {input('customer', 'Customer')}
+      <CustomerPicker current={initial?.customer} error={(path) => errors[path]} />
       {input('reference', 'Reference', 'text', initial ? undefined : 'Leave empty for the next J-number.')}
       {input('dueDate', 'Due date', 'date')}
       {input('customerEmail', 'Customer e-mail', 'email')}

@@ -59,7 +59,7 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
         <Card>
           <JobDetailsForm
             initial={{
-              customer: j.customerName,
+              customer: j.customerId ? { id: j.customerId, name: j.customerName } : null,
               reference: j.reference,
               dueDate: j.dueDate ?? '',
               customerEmail: j.customerEmail,

@@ -3,12 +3,23 @@ import { eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db';
 import { customers } from '@/db/schema';
 import { AppError } from '@/lib/errors';
+import type { CreateCustomerBody } from '@/lib/validations/customers';
+import { createCustomer } from './create-customer';
 
-/** The customer a job is for: the chosen record, or the one with this name, or a new retail one. */
+/**
+ * The customer a job is for: the chosen record, a new record made inline with the job (same
+ * transaction, so a refused job leaves no stray customer), or the one with this name, or a new retail one.
+ */
 export async function resolveJobCustomer(
   tx: DbOrTx,
-  { customerId, name, email }: { customerId?: number; name?: string; email?: string },
+  {
+    customerId,
+    newCustomer,
+    name,
+    email,
+  }: { customerId?: number; newCustomer?: CreateCustomerBody; name?: string; email?: string },
 ) {
+  if (newCustomer) return createCustomer({ body: newCustomer }, tx);
   if (customerId !== undefined) {
     const [customer] = await tx.select().from(customers).where(eq(customers.id, customerId));
     if (!customer) throw new AppError('invalid', 'That customer does not exist; choose another or add them.');

@@ -2,6 +2,7 @@ import 'server-only';
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import { getDb, type Tx } from '@/db';
 import { jobItems, jobs, plans } from '@/db/schema';
+import { resolveJobCustomer } from '@/lib/customers/resolve-job-customer';
 import { AppError, notFound } from '@/lib/errors';
 import { generateFrameItems } from '@/lib/frames';
 import type { SendScheduleToJobBody } from '@/lib/validations/frames';
@@ -86,12 +87,20 @@ export async function sendScheduleToJob({
       const [taken] = await tx.select({ id: jobs.id }).from(jobs).where(eq(jobs.reference, reference));
       if (taken)
         throw new AppError('conflict', `There is already a job ${reference}; choose another reference.`);
+      const customer = await resolveJobCustomer(tx, {
+        customerId: newJob.customerId,
+        newCustomer: newJob.newCustomer,
+        name: newJob.customerName,
+        email: newJob.customerEmail,
+      });
       const [job] = await tx
         .insert(jobs)
         .values({
           reference,
-          customerName: newJob.customerName,
-          customerEmail: newJob.customerEmail ?? schedule.customerEmail,
+          customerId: customer.id,
+          customerName: customer.name,
+          customerPhone: customer.phone,
+          customerEmail: newJob.customerEmail || customer.email || schedule.customerEmail,
           dueDate: newJob.dueDate || null,
           notes: `Cut list from frame schedule "${schedule.name}".`,
           frameScheduleId: scheduleId,

@@ -16,6 +16,7 @@ export async function createJob({ body, userId }: { body: CreateJobBody; userId:
     if (clash) throw new AppError('conflict', `A job with reference ${reference} already exists.`);
     const customer = await resolveJobCustomer(tx, {
       customerId: body.customerId,
+      newCustomer: body.newCustomer,
       name: body.customer,
       email: body.customerEmail,
     });

@@ -13,8 +13,12 @@ export async function updateJob({ jobId, body }: { jobId: number; body: UpdateJo
     const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId));
     if (!job) throw notFound('That job');
     const changes: Partial<NewJob> = { updatedAt: new Date() };
-    if (body.customerId !== undefined || body.customer !== undefined) {
-      const customer = await resolveJobCustomer(tx, { customerId: body.customerId, name: body.customer });
+    if (body.customerId !== undefined || body.newCustomer !== undefined || body.customer !== undefined) {
+      const customer = await resolveJobCustomer(tx, {
+        customerId: body.customerId,
+        newCustomer: body.newCustomer,
+        name: body.customer,
+      });
       Object.assign(changes, {
         customerId: customer.id,
         customerName: customer.name,

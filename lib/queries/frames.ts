@@ -1,5 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { FrameItem, FrameSchedulePanel, FrameSchedulePanelInput } from '@/lib/frames';
+import type { CustomerChoice } from './customers';
 import { fetchJson } from './fetch-json';
 
 export type FrameUnit = 'mm' | 'imperial';
@@ -28,7 +29,7 @@ export type SaveFrameScheduleRequest = {
 };
 export type SendToJobRequest = { ifAlreadySent?: 'replace' | 'add' } & (
   | { jobId: number }
-  | { newJob: { customerName: string; customerEmail?: string; reference?: string; dueDate?: string } }
+  | { newJob: CustomerChoice & { customerEmail?: string; reference?: string; dueDate?: string } }
 );
 
 export const frameScheduleQuery = (id: number) =>

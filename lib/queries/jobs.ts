@@ -2,6 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import type { JobListShow, JobStatus, PlanStatus } from '@/db/enums';
 import type { PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
 import type { PaymentState } from '@/lib/quotes/payment-state';
+import type { NewCustomerBody } from './customers';
 import { fetchJson } from './fetch-json';
 
 export type JobFilters = {
@@ -27,6 +28,7 @@ export type JobListRow = {
 };
 
 export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount' | 'quoteNumber' | 'paymentState'> & {
+  customerId: number | null;
   notes: string;
   createdAt: string;
   updatedAt: string;
@@ -68,7 +70,7 @@ export const jobsQuery = (filters: JobFilters) =>
 export const jobQuery = (jobId: number) =>
   queryOptions({ queryKey: ['job', jobId], queryFn: () => fetchJson<JobDetail>(`/api/jobs/${jobId}`) });
 
-export type JobDetailsBody = {
+export type JobDetailsBody = Partial<{ customerId: number; newCustomer: NewCustomerBody }> & {
   customer?: string;
   reference?: string;
   dueDate?: string | null;

@@ -27,7 +27,7 @@ const tradeTermsMessage = {
   path: ['account'],
 };
 
-/** POST /api/customers */
+/** POST /api/customers, and a customer made inline with a new job */
 export const createCustomerBodySchema = customerFields.refine(tradeTermsOnlyForTrade, tradeTermsMessage);
 export type CreateCustomerBody = z.infer<typeof createCustomerBodySchema>;
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { createCustomerBodySchema } from './customers';
 import { findGeometryIssues, frameSchedulePanelSchema, frameUnitSchema } from '@/lib/frames';
 
 /** A saved frame schedule: a name, who it is for, how lengths are shown, and its panels (may be none yet). */
@@ -42,17 +43,25 @@ export const sendScheduleToJobBodySchema = z
       .optional(),
     newJob: z
       .object({
+        // The new job's customer: a record, a record made with the job, or a name (found or made retail).
+        customerId: z.number().int().positive().max(2_147_483_647).optional(),
+        newCustomer: createCustomerBodySchema.optional(),
         customerName: z
           .string({ error: 'Give the customer name' })
           .trim()
           .min(1, { error: 'Give the customer name' })
-          .max(120, { error: 'Customer name must be at most 120 characters' }),
+          .max(120, { error: 'Customer name must be at most 120 characters' })
+          .optional(),
         customerEmail: z
           .union([z.email({ error: 'Give an e-mail address like name@example.com' }), z.literal('')])
           .optional(),
         reference: z.string().trim().max(40, { error: 'Reference must be at most 40 characters' }).optional(),
         dueDate: z.union([dueDateSchema, z.literal('')]).optional(),
       })
+      .refine(
+        (j) => [j.customerId, j.newCustomer, j.customerName].filter((x) => x !== undefined).length === 1,
+        { error: 'Choose a customer or enter a new one', path: ['customerId'] },
+      )
       .optional(),
     // When the job already holds this schedule's pieces: swap them for the new set, or add another set.
     ifAlreadySent: z.enum(['replace', 'add'], { error: 'Choose replace or add' }).optional(),

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { JOB_LIST_SHOWS, JOB_STATUSES } from '@/db/enums';
 import { lengthInputSchema } from '@/lib/units/length-input-schema';
+import { createCustomerBodySchema } from './customers';
 import { dbIdSchema } from './db-id';
 
 const dueDate = z.string().refine(isCalendarDate, 'Use a real date like 2026-12-24.');
@@ -20,11 +21,13 @@ const deliveryChargePence = z.number().int('The delivery charge is in whole penc
 
 /**
  * POST /api/jobs. The reference is generated (next J-number) when left out. The customer is a
- * record (`customerId`) or a name, which finds that customer or makes a new retail one.
+ * record (`customerId`), a new record made with the job (`newCustomer`), or a name, which finds
+ * that customer or makes a new retail one.
  */
 export const createJobBodySchema = z
   .object({
     customerId: z.number().int().positive().optional(),
+    newCustomer: createCustomerBodySchema.optional(),
     customer: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
     deliveryChargePence: deliveryChargePence.optional(),
     reference: z
@@ -37,9 +40,9 @@ export const createJobBodySchema = z
     customerEmail: email.optional(),
     notes: z.string().max(2000).optional(),
   })
-  .refine((v) => v.customerId !== undefined || v.customer !== undefined, {
+  .refine((v) => [v.customerId, v.newCustomer, v.customer].filter((x) => x !== undefined).length === 1, {
     message: 'Choose a customer or enter a new one.',
-    path: ['customer'],
+    path: ['customerId'],
   });
 export type CreateJobBody = z.infer<typeof createJobBodySchema>;
 
@@ -51,6 +54,7 @@ export const updateJobBodySchema = z
     dueDate: dueDate.nullable(),
     customerEmail: email,
     customerId: z.number().int().positive(),
+    newCustomer: createCustomerBodySchema,
     deliveryChargePence,
     notes: z.string().max(2000),
     status: z.enum(['cancelled', 'draft'], { message: 'A job can only be cancelled or reopened here.' }),

@@ -5,7 +5,7 @@ import { POST as preview } from '@/app/api/frames/preview/route';
 import { DELETE as remove } from '@/app/api/frames/[scheduleId]/route';
 import { POST as send } from '@/app/api/frames/[scheduleId]/send-to-job/route';
 import { POST as plan } from '@/app/api/jobs/[jobId]/plans/route';
-import { jobItems, jobs, plans } from '@/db/schema';
+import { customers, jobItems, jobs, plans } from '@/db/schema';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 import { leanToPanels, sectionIdOf } from './helpers';
@@ -139,6 +139,26 @@ describe('POST /api/frames/[scheduleId]/send-to-job', () => {
     const refused = await call(remove, { method: 'DELETE', params: { scheduleId: String(scheduleId) } });
     expect(refused.status).toBe(409);
     expect(refused.json.error).toContain('J-1005');
+  });
+
+  it('makes the new job for a chosen customer record or a new one, so the quote knows the account', async () => {
+    const [trade] = await t.db
+      .insert(customers)
+      .values({ name: 'Rook Lane Builders', account: 'trade', creditDays: 30, phone: '01632 960 222' })
+      .returning();
+    const picked = await sendTo({ newJob: { customerId: trade.id } });
+    expect(picked.status).toBe(201);
+    const [job] = await t.db.select().from(jobs).where(eq(jobs.id, picked.json.jobId));
+    expect(job).toMatchObject({
+      customerId: trade.id,
+      customerName: 'Rook Lane Builders',
+      customerPhone: '01632 960 222',
+    });
+    const made = await sendTo({ newJob: { newCustomer: { name: 'Mabli Trewin', account: 'retail' } } });
+    const [second] = await t.db.select().from(jobs).where(eq(jobs.id, made.json.jobId));
+    const [record] = await t.db.select().from(customers).where(eq(customers.id, second.customerId!));
+    expect(record.name).toBe('Mabli Trewin');
+    expect((await sendTo({ newJob: {} })).status).toBe(422);
   });
 
   it('refuses a schedule with no pieces yet', async () => {

@@ -1,3 +1,4 @@
+import { eq } from 'drizzle-orm';
 import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { GET as listJobs, POST as createJob } from '@/app/api/jobs/route';
 import { GET as getJob, PATCH as patchJob } from '@/app/api/jobs/[jobId]/route';
@@ -5,6 +6,7 @@ import { POST as addItem } from '@/app/api/jobs/[jobId]/items/route';
 import { DELETE as deleteItem, PATCH as patchItem } from '@/app/api/jobs/[jobId]/items/[itemId]/route';
 import { GET as jobPlans, POST as planJob } from '@/app/api/jobs/[jobId]/plans/route';
 import { GET as listSections } from '@/app/api/sections/route';
+import { customers } from '@/db/schema';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 
@@ -56,6 +58,38 @@ describe('POST /api/jobs', () => {
     expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['customer', 'dueDate']);
     actAs(AS.saw);
     expect((await create({ customer: 'A' })).status).toBe(403);
+  });
+});
+
+describe('POST /api/jobs with a customer', () => {
+  it('links a chosen customer record, or makes a new one inline in the same transaction', async () => {
+    const [existing] = await t.db.select().from(customers).limit(1);
+    const picked = await create({ customerId: existing.id });
+    expect(picked.status).toBe(201);
+    expect(picked.json.job).toMatchObject({ customerId: existing.id, customerName: existing.name });
+
+    const newCustomer = { name: 'Tamsin Oakes Joinery', account: 'trade', phone: '01632 960 111' };
+    const made = await create({ newCustomer });
+    expect(made.status).toBe(201);
+    const [record] = await t.db.select().from(customers).where(eq(customers.id, made.json.job.customerId));
+    expect(record).toMatchObject({ ...newCustomer, creditDays: 30 });
+    expect(made.json.job.customerPhone).toBe('01632 960 111');
+  });
+
+  it('leaves no stray customer when the job is refused, and takes only one way of naming the customer', async () => {
+    const before = (await t.db.select().from(customers)).length;
+    const clash = await create({
+      newCustomer: { name: 'Ivo Penrose', account: 'retail' },
+      reference: 'J-1001',
+    });
+    expect(clash.status).toBe(409);
+    expect((await t.db.select().from(customers)).length).toBe(before);
+    const both = await create({ customerId: 1, newCustomer: { name: 'Ivo Penrose', account: 'retail' } });
+    expect(both.status).toBe(422);
+    expect(both.json.issues.map((i: { path: string }) => i.path)).toEqual(['customerId']);
+    const unnamed = await create({ newCustomer: { name: '', account: 'retail' } });
+    expect(unnamed.json.issues.map((i: { path: string }) => i.path)).toEqual(['newCustomer.name']);
+    expect((await t.db.select().from(customers)).length).toBe(before);
   });
 });
 
