@@ -1,6 +1,7 @@
 import { formatPence } from '@/lib/format/money';
 import type { PaymentsOverview } from '@/lib/quotes/get-payments-overview';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 
 export function QuoteStateTable({ rows }: { rows: PaymentsOverview['outstanding'] }) {
   if (!rows.length) return <p>None.</p>;
@@ -24,7 +25,7 @@ export function QuoteStateTable({ rows }: { rows: PaymentsOverview['outstanding'
             <td className="py-1.5 pr-3 font-mono">{formatPence(r.grossPence)}</td>
             <td className="py-1.5 pr-3 font-mono">{formatPence(r.paidPence)}</td>
             <td className="py-1.5 pr-3 font-mono">{formatPence(r.balancePence)}</td>
-            <td className="py-1.5 pr-3">{new Date(r.validUntil).toLocaleDateString('en-GB')}</td>
+            <td className="py-1.5 pr-3">{formatCustomerDate(r.validUntil)}</td>
           </tr>
         ))}
       </tbody>

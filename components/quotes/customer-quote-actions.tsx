@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 import { formatPence } from '@/lib/format/money';
 import { fetchJson } from '@/lib/queries/fetch-json';
 import type { CustomerQuote } from '@/lib/quotes/get-customer-quote';
@@ -100,7 +101,7 @@ export function CustomerQuoteActions({ token, data }: { token: string; data: Cus
       data-testid="pay-section"
     >
       <p>
-        Accepted by {quote.acceptedName} on {new Date(quote.acceptedAt).toLocaleString('en-GB')}.
+        Accepted by {quote.acceptedName} on {formatCustomerDate(quote.acceptedAt)}.
       </p>
       {canPay && (
         <div className="flex flex-col gap-2 sm:flex-row">

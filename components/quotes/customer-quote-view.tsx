@@ -4,6 +4,7 @@ import type { CustomerQuote } from '@/lib/quotes/get-customer-quote';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { CustomerQuoteActions } from './customer-quote-actions';
 import { QuoteTable } from './quote-table';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 
 export function CustomerQuoteView({
   token,
@@ -25,7 +26,7 @@ export function CustomerQuoteView({
           Quote {quote.number} for {job.customerName}
         </h1>
         <p className="text-bark-soft">
-          Job {job.reference} · valid until {new Date(quote.validUntil).toLocaleDateString('en-GB')}
+          Job {job.reference} · valid until {formatCustomerDate(quote.validUntil)}
           {data.expired && !quote.acceptedAt ? ' (expired)' : ''}
         </p>
       </header>

@@ -8,6 +8,7 @@ import { formatPence } from '@/lib/format/money';
 import { createQuoteLinkRequest, revokeQuoteLinksRequest, type PlanViewData } from '@/lib/queries/plans';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { QuoteTable } from './quote-table';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 
 /** The plan's quote for the office: figures, acceptance and payment, and the customer's link. */
 export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: boolean }) {
@@ -32,7 +33,7 @@ export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: b
         <h2 className="text-xl font-bold">Quote {quote.number}</h2>
         <p className="text-sm text-bark-soft">
           {quote.account === 'trade' ? 'Trade account, prices ex VAT' : 'Retail, prices include VAT'} · valid
-          until {new Date(quote.validUntil).toLocaleDateString('en-GB')}
+          until {formatCustomerDate(quote.validUntil)}
         </p>
       </div>
       <QuoteTable quote={quote} />
@@ -73,7 +74,7 @@ export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: b
               {link.url}
             </a>
           </p>
-          <p className="text-sm">Expires {new Date(link.expiresAt).toLocaleDateString('en-GB')}.</p>
+          <p className="text-sm">Expires {formatCustomerDate(link.expiresAt)}.</p>
         </Notice>
       )}
       {message && <Notice tone={message.tone}>{message.text}</Notice>}

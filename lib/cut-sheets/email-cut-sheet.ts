@@ -4,6 +4,7 @@ import { formatPence } from '@/lib/format/money';
 import { sendMail } from '@/lib/mail/send-mail';
 import { createQuoteLink } from '@/lib/quotes/quote-links';
 import { renderCutSheet } from './render-cut-sheet';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 
 const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 // A yard hand who writes their own greeting should not get a second one above it.
@@ -51,7 +52,7 @@ export async function emailCutSheet({
           `VAT at ${quote.vatRatePercent} %: ${formatPence(quote.vatPence)}`,
           `Total to pay: ${formatPence(quote.grossPence)}`,
         ]),
-    `Valid until ${quote.validUntil.slice(0, 10)}.`,
+    `Valid until ${formatCustomerDate(quote.validUntil)}.`,
     '',
     `To accept the quote and pay, open: ${link.url}`,
     'Cut timber cannot be returned, so we start cutting once the quote is accepted and paid.',

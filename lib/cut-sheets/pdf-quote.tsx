@@ -2,6 +2,7 @@
 import { StyleSheet, Text, View } from '@react-pdf/renderer';
 import { formatPence } from '@/lib/format/money';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 
 const s = StyleSheet.create({
   h2: { fontSize: 13, fontFamily: 'Helvetica-Bold', marginTop: 14, marginBottom: 6 },
@@ -28,8 +29,8 @@ export function PdfQuote({ quote }: { quote: QuoteView }) {
     <View wrap={false}>
       <Text style={s.h2}>Quote {quote.number}</Text>
       <Text style={s.muted}>
-        Valid until {quote.validUntil.slice(0, 10)} · {retail ? 'prices include VAT' : 'prices exclude VAT'}{' '}
-        at {quote.vatRatePercent} %
+        Valid until {formatCustomerDate(quote.validUntil)} ·{' '}
+        {retail ? 'prices include VAT' : 'prices exclude VAT'} at {quote.vatRatePercent} %
       </Text>
       {quote.lines.map((line, i) => (
         <Row

@@ -1,5 +1,5 @@
 // A local stand-in for the hosted payment service, for development and tests. It answers the SDK
-// calls Kerfwise makes (Checkout Sessions create and retrieve, Refunds create), shows its own card
+// calls Kerfwise makes (Checkout Sessions create and retrieve, Refunds create, each refund announced by a refund.created event), shows its own card
 // page, and posts signed webhook events to the app. State lives in memory.
 import { randomBytes } from 'node:crypto';
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
@@ -160,7 +160,10 @@ export async function startPaymentFake(options: PaymentFakeOptions) {
         currency: 'gbp',
         payment_intent: intent,
         status: 'succeeded',
+        metadata: strings(form.metadata),
       };
+      // The service tells the app by webhook, as it does for payments; the ledger is written there.
+      await emit('refund.created', refund);
       return send(res, 200, refund);
     }
     return apiError(res, 404, `Unrecognised request URL (${req.method}: ${path}).`);

@@ -1,14 +1,16 @@
 // The owner's view of money: the payments ledger, balances outstanding on accepted quotes, quotes
-// awaiting acceptance and quotes that expired unaccepted. Only quotes of live plans count.
+// awaiting acceptance, quotes that expired unaccepted, and cancelled jobs still holding the
+// customer's money (to refund). Only quotes of live plans count.
 import 'server-only';
-import { desc, eq, inArray } from 'drizzle-orm';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { jobs, payments, plans, quotes } from '@/db/schema';
 import { paidPence, paymentState } from './payment-state';
 
 export async function getPaymentsOverview(now = new Date()) {
   const db = await getDb();
-  const [ledger, live] = await Promise.all([
+  const paidSum = sql<number>`sum(${payments.amountPence})::int`;
+  const [ledger, live, refundsDue] = await Promise.all([
     db
       .select({ payment: payments, reference: jobs.reference, customer: jobs.customerName })
       .from(payments)
@@ -26,6 +28,14 @@ export async function getPaymentsOverview(now = new Date()) {
       .innerJoin(plans, eq(plans.id, quotes.planId))
       .innerJoin(jobs, eq(jobs.id, quotes.jobId))
       .where(inArray(plans.status, ['planned', 'released', 'done'])),
+    db
+      .select({ jobId: jobs.id, reference: jobs.reference, customer: jobs.customerName, paidPence: paidSum })
+      .from(payments)
+      .innerJoin(jobs, eq(jobs.id, payments.jobId))
+      .where(and(eq(jobs.status, 'cancelled'), eq(payments.status, 'succeeded')))
+      .groupBy(jobs.id, jobs.reference, jobs.customerName)
+      .having(sql`${paidSum} > 0`)
+      .orderBy(jobs.reference),
   ]);
   const jobIds = [...new Set(live.map((q) => q.quote.jobId))];
   const allPayments = jobIds.length
@@ -58,6 +68,7 @@ export async function getPaymentsOverview(now = new Date()) {
     outstanding: rows.filter((r) => r.state !== 'not_accepted' && r.balancePence > 0),
     awaitingAcceptance: rows.filter((r) => r.state === 'not_accepted' && new Date(r.validUntil) > now),
     expired: rows.filter((r) => r.state === 'not_accepted' && new Date(r.validUntil) <= now),
+    refundsDue,
   };
 }
 export type PaymentsOverview = Awaited<ReturnType<typeof getPaymentsOverview>>;

@@ -4,7 +4,7 @@ import 'server-only';
 import { eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import { getDb } from '@/db';
-import { payments, quotes } from '@/db/schema';
+import { jobs, payments, quotes } from '@/db/schema';
 import { getEnv } from '@/lib/env';
 import { paymentClient } from '@/lib/payments/payment-client';
 import { PAYMENT_KINDS, type PaymentKind } from '@/db/enums';
@@ -58,6 +58,8 @@ export async function recordPaymentEvent(event: Stripe.Event) {
       paymentIntentId: intent.id,
       note: intent.last_payment_error?.message ?? 'Card payment failed',
     };
+  } else if (event.type === 'refund.created') {
+    return recordRefund(event.id, event.data.object);
   } else {
     return { recorded: false, reason: `ignored ${event.type}` };
   }
@@ -76,6 +78,34 @@ export async function recordPaymentEvent(event: Stripe.Event) {
       byName: quote.acceptedName ?? '',
       eventId: event.id,
       ...row,
+    })
+    .onConflictDoNothing({ target: payments.eventId })
+    .returning({ id: payments.id });
+  return inserted.length ? { recorded: true } : { recorded: false, reason: 'already recorded' };
+}
+
+/** A refund the owner asked for: a negative ledger row against the job named in its metadata. */
+async function recordRefund(eventId: string, refund: Stripe.Refund) {
+  if (refund.status !== 'succeeded') return { recorded: false, reason: `refund ${refund.status}` };
+  const jobId = Number(refund.metadata?.jobId);
+  const userId = Number(refund.metadata?.userId);
+  const db = await getDb();
+  const [job] = Number.isSafeInteger(jobId) ? await db.select().from(jobs).where(eq(jobs.id, jobId)) : [];
+  if (!job) return { recorded: false, reason: 'no such job' };
+  const intent =
+    typeof refund.payment_intent === 'string' ? refund.payment_intent : refund.payment_intent?.id;
+  const inserted = await db
+    .insert(payments)
+    .values({
+      jobId,
+      quoteId: null,
+      kind: 'refund',
+      status: 'succeeded',
+      amountPence: -refund.amount,
+      userId: Number.isSafeInteger(userId) && userId > 0 ? userId : null,
+      paymentIntentId: intent,
+      eventId,
+      note: refund.metadata?.reason ?? 'Refund',
     })
     .onConflictDoNothing({ target: payments.eventId })
     .returning({ id: payments.id });

@@ -1,5 +1,5 @@
-// The owner refunds what a cancelled job paid, through the payment service's SDK; each refund is a
-// negative row in the ledger with who and why.
+// The owner refunds what a cancelled job paid, through the payment service's SDK. The service
+// confirms each refund by a signed webhook event, which writes a negative ledger row with who and why.
 import 'server-only';
 import { eq } from 'drizzle-orm';
 import { getDb } from '@/db';
@@ -28,29 +28,23 @@ export async function refundJob({
   }
   const due = [...byIntent].filter(([, amount]) => amount > 0);
   if (!due.length) throw new AppError('conflict', `Job ${job.reference} has no card payment left to refund.`);
-  let refunded = 0;
+  let requested = 0;
   for (const [intent, amount] of due) {
-    let refund;
     try {
-      refund = await paymentClient().refunds.create({ payment_intent: intent, amount });
+      const refund = await paymentClient().refunds.create({
+        payment_intent: intent,
+        amount,
+        // The webhook writes the ledger row from these, once the service confirms the refund.
+        metadata: { jobId: String(jobId), userId: String(userId), reason },
+      });
+      requested += refund.amount;
     } catch (error) {
       const why = error instanceof Error ? error.message : String(error);
       throw new AppError(
         'unavailable',
-        `The payment service refused the refund (${why}). ${refunded ? 'Some refunds went through and are recorded.' : 'Nothing was refunded.'}`,
+        `The payment service refused the refund (${why}). ${requested ? 'Some refunds went through; the ledger shows them once the service confirms.' : 'Nothing was refunded.'}`,
       );
     }
-    await db.insert(payments).values({
-      jobId,
-      quoteId: null,
-      kind: 'refund',
-      status: 'succeeded',
-      amountPence: -refund.amount,
-      userId,
-      paymentIntentId: intent,
-      note: reason,
-    });
-    refunded += refund.amount;
   }
-  return { refundedPence: refunded };
+  return { requestedPence: requested };
 }

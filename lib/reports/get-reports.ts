@@ -1,7 +1,7 @@
 // Thin data access for the owner's reports: read the rows, hand them to the pure computations.
 import 'server-only';
 import { and, eq, gte, inArray, lt, ne } from 'drizzle-orm';
-import { getDb } from '@/db';
+import { getDb, type DbOrTx } from '@/db';
 import {
   jobs,
   offcuts,
@@ -122,9 +122,14 @@ export async function getSavingsReport(range: ReportRange) {
     .from(plans)
     .innerJoin(jobs, eq(jobs.id, plans.jobId))
     .where(and(ne(plans.status, 'superseded'), gte(plans.createdAt, start), lt(plans.createdAt, end)));
+  const rackPence = await getRackOffcutPenceByPlan(
+    db,
+    rows.map((r) => r.planId),
+  );
   const planRows = rows.map((r) => {
     const t = r.totals as PlanTotals;
     return {
+      rackOffcutPence: rackPence.get(r.planId) ?? 0,
       planId: r.planId,
       jobReference: r.jobReference,
       customerName: r.customerName,
@@ -165,4 +170,20 @@ export async function getStockReport(range: ReportRange) {
     start,
     end,
   });
+}
+
+/** Per plan: the rack offcuts its boards used, at each section's cost per metre, in whole pence. */
+async function getRackOffcutPenceByPlan(db: DbOrTx, planIds: number[]) {
+  if (!planIds.length) return new Map<number, number>();
+  const [used, perMetre] = await Promise.all([
+    db
+      .select({ planId: planBoards.planId, sectionId: planBoards.sectionId, lengthMm: planBoards.lengthMm })
+      .from(planBoards)
+      .where(and(inArray(planBoards.planId, planIds), eq(planBoards.source, 'offcut'))),
+    getSectionPencePerMetre(db),
+  ]);
+  const exact = new Map<number, number>();
+  for (const b of used)
+    exact.set(b.planId, (exact.get(b.planId) ?? 0) + (b.lengthMm * (perMetre.get(b.sectionId) ?? 0)) / 1000);
+  return new Map([...exact].map(([planId, pence]) => [planId, Math.round(pence)]));
 }

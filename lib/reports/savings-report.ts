@@ -1,4 +1,6 @@
-// What Kerfwise saved: for each planned job, new stock in its plan against a plain longest-first plan.
+// What Kerfwise saved: for each planned job, the timber its plan used against a plain longest-first
+// plan of new stock. Rack offcuts the plan used are timber an earlier customer already paid for, not
+// a saving: they count at the section's cost per metre, so only better cutting shows as saved.
 export type PlannedJobRow = {
   planId: number;
   jobReference: string;
@@ -6,6 +8,8 @@ export type PlannedJobRow = {
   plannedAt: Date;
   stockBoards: number;
   stockCostPence: number;
+  /** Rack offcuts the plan used, valued at the section's cost per metre. */
+  rackOffcutPence: number;
   baselineBoards: number;
   baselineCostPence: number;
 };
@@ -24,6 +28,7 @@ export type SavingsReport = {
     baselineBoards: number;
     savedBoards: number;
     stockCostPence: number;
+    rackOffcutPence: number;
     baselineCostPence: number;
     savedPence: number;
   };
@@ -43,7 +48,7 @@ export function computeSavingsReport({
     .filter((p) => p.plannedAt >= start && p.plannedAt < end)
     .sort((a, b) => a.plannedAt.getTime() - b.plannedAt.getTime() || a.planId - b.planId)
     .map((p) => {
-      const savedPence = p.baselineCostPence - p.stockCostPence;
+      const savedPence = p.baselineCostPence - p.stockCostPence - p.rackOffcutPence;
       running += savedPence;
       return { ...p, savedBoards: p.baselineBoards - p.stockBoards, savedPence, runningSavedPence: running };
     });
@@ -53,6 +58,7 @@ export function computeSavingsReport({
       | 'baselineBoards'
       | 'savedBoards'
       | 'stockCostPence'
+      | 'rackOffcutPence'
       | 'baselineCostPence'
       | 'savedPence',
   ) => jobs.reduce((n, j) => n + j[key], 0);
@@ -64,6 +70,7 @@ export function computeSavingsReport({
       baselineBoards: sum('baselineBoards'),
       savedBoards: sum('savedBoards'),
       stockCostPence: sum('stockCostPence'),
+      rackOffcutPence: sum('rackOffcutPence'),
       baselineCostPence: sum('baselineCostPence'),
       savedPence: sum('savedPence'),
     },

@@ -7,6 +7,8 @@ import { GET as openLink } from '@/app/api/quote-links/[token]/route';
 import { POST as accept } from '@/app/api/quote-links/[token]/accept/route';
 import { POST as pay } from '@/app/api/quote-links/[token]/pay/route';
 import { POST as webhook } from '@/app/api/payments/webhook/route';
+import { POST as refund } from '@/app/api/jobs/[jobId]/refund/route';
+import { PATCH as patchJob } from '@/app/api/jobs/[jobId]/route';
 import * as schema from '@/db/schema';
 import { TEST_CARDS } from '@/lib/payments/payment-fake';
 import { signWebhookPayload } from '@/lib/payments/sign-webhook';
@@ -230,5 +232,55 @@ describe('paying through the payment service', () => {
         .status,
     ).toBe(200);
     expect(await ledger(jobId)).toHaveLength(2); // only the correctly signed one counted
+  });
+
+  it('the owner refunds a cancelled job through the service; its webhook writes the ledger once', async () => {
+    const { planId, jobId } = await plannedJobFor(t.db, 'retail', 'J-Q8');
+    const { token } = await linkFor(planId);
+    actAs(AS.nobody);
+    await call(accept, { method: 'POST', ...tok(token), body: { name: 'Robin', nonReturnable: true } });
+    await payWithCard(token, TEST_CARDS.approved);
+    const [deposit] = await ledger(jobId);
+    const refundBody = {
+      method: 'POST',
+      params: { jobId: String(jobId) },
+      body: { reason: 'Customer cancelled' },
+    };
+
+    actAs(AS.owner);
+    const early = await call(refund, refundBody);
+    expect(early.status).toBe(409); // the job must be cancelled first
+    expect(early.json.error).toMatch(/Cancel job J-Q8/);
+    actAs(AS.hand);
+    expect(
+      (await call(patchJob, { ...refundBody, method: 'PATCH', body: { status: 'cancelled' } })).status,
+    ).toBe(200);
+    expect((await call(refund, refundBody)).status).toBe(403);
+
+    actAs(AS.owner);
+    fake.delivered.length = 0;
+    const done = await call(refund, refundBody);
+    expect(done.status).toBe(200);
+    expect(done.json.requestedPence).toBe(deposit.amountPence);
+    expect(fake.delivered.map((d) => JSON.parse(d.payload).type)).toEqual(['refund.created']);
+    const rows = await ledger(jobId);
+    expect(rows.find((r) => r.kind === 'refund')).toMatchObject({
+      amountPence: -deposit.amountPence,
+      userId: AS.owner,
+      note: 'Customer cancelled',
+      status: 'succeeded',
+    });
+    expect(rows.reduce((sum, r) => sum + (r.status === 'succeeded' ? r.amountPence : 0), 0)).toBe(0);
+
+    const [event] = fake.delivered;
+    await call(webhook, {
+      method: 'POST',
+      body: event.payload,
+      headers: { 'stripe-signature': event.signature },
+    });
+    expect(await ledger(jobId)).toHaveLength(rows.length); // a replayed refund event changes nothing
+    const again = await call(refund, refundBody);
+    expect(again.status).toBe(409);
+    expect(again.json.error).toMatch(/no card payment left/);
   });
 });

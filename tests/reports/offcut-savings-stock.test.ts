@@ -94,6 +94,7 @@ describe('savings report', () => {
     stockCostPence: number,
     baselineBoards: number,
     baselineCostPence: number,
+    rackOffcutPence = 0,
   ): PlannedJobRow => ({
     planId,
     jobReference: `J-${planId}`,
@@ -103,6 +104,7 @@ describe('savings report', () => {
     stockCostPence,
     baselineBoards,
     baselineCostPence,
+    rackOffcutPence,
   });
 
   it('sets each plan against its longest-first plan, with a running total', () => {
@@ -128,9 +130,18 @@ describe('savings report', () => {
       baselineBoards: 25,
       savedBoards: 3,
       stockCostPence: 12_000,
+      rackOffcutPence: 0,
       baselineCostPence: 13_700,
       savedPence: 1700,
     });
+  });
+
+  it('does not count rack offcuts, which an earlier customer paid for, as saved', () => {
+    // New stock 4000 p plus rack offcuts worth 900 p at cost, against 4500 p of new stock in the plain
+    // plan: 4500 − 4000 − 900 = −400 p. Counting the offcuts as free would have claimed 500 p saved.
+    const report = computeSavingsReport({ start, end, plans: [row(5, '2026-09-09', 7, 4000, 8, 4500, 900)] });
+    expect(report.jobs[0].savedPence).toBe(-400);
+    expect(report.totals).toMatchObject({ rackOffcutPence: 900, savedPence: -400 });
   });
 });
 

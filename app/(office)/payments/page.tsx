@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { AccessDenied } from '@/components/layout/access-denied';
 import { PaymentLedger } from '@/components/payments/payment-ledger';
+import { RefundDueList } from '@/components/payments/refund-due-list';
 import { QuoteStateTable } from '@/components/payments/quote-state-table';
 import { Card } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
@@ -30,6 +31,10 @@ export default async function PaymentsPage() {
             <QuoteStateTable rows={rows} />
           </Card>
         ))}
+        <Card>
+          <h2 className="mb-3 text-xl font-bold">Cancelled jobs to refund</h2>
+          <RefundDueList rows={overview.refundsDue} />
+        </Card>
         <Card className="overflow-x-auto">
           <h2 className="mb-3 text-xl font-bold">Payments ledger</h2>
           <PaymentLedger rows={overview.payments} />
