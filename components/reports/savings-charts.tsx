@@ -11,6 +11,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 import { formatPence } from '@/lib/format/money';
 import type { SavingsReport } from '@/lib/reports/savings-report';
 import { ChartPanel } from './chart-panel';
@@ -33,7 +34,7 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
       lead={
         t.jobs === 0
           ? undefined
-          : `Across ${t.jobs} planned jobs a plain longest-first plan would have used ${t.baselineBoards} new boards (${formatPence(t.baselineCostPence)}); Kerfwise used ${t.stockBoards} (${formatPence(t.stockCostPence)}): ${t.savedBoards} boards and ${formatPence(t.savedPence)} saved.`
+          : `Across ${t.jobs} planned jobs a plain longest-first plan would have used ${t.baselineBoards} new boards (${formatPence(t.baselineCostPence)}); Kerfwise used ${t.stockBoards} (${formatPence(t.stockCostPence)}) and rack offcuts worth ${formatPence(t.rackOffcutPence)} at cost, which earlier customers paid for and so count as spent, not saved: ${formatPence(t.savedPence)} saved.`
       }
       rows={report.jobs}
       empty={t.jobs === 0}
@@ -44,12 +45,13 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
         {
           key: 'plannedAt',
           label: 'Planned',
-          format: (v) => new Date(v as unknown as string).toLocaleDateString('en-GB'),
+          format: (v) => formatCustomerDate(new Date(v as unknown as string).toISOString()),
         },
         { key: 'baselineBoards', label: 'Longest-first boards' },
         { key: 'stockBoards', label: 'Kerfwise boards' },
         { key: 'baselineCostPence', label: 'Longest-first cost', format: money },
-        { key: 'stockCostPence', label: 'Kerfwise cost', format: money },
+        { key: 'stockCostPence', label: 'Kerfwise new stock', format: money },
+        { key: 'rackOffcutPence', label: 'Rack offcuts at cost', format: money },
         { key: 'savedPence', label: 'Saved', format: money },
         { key: 'runningSavedPence', label: 'Running total', format: money },
       ]}

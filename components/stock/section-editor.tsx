@@ -6,9 +6,20 @@ import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/queries/fetch-json';
+import { SectionTradeFields, type TradeDraft } from './section-trade-fields';
 import { saveSectionRequest, type SectionInput, type SectionRow } from '@/lib/queries/stock';
 
-type LengthDraft = { id?: number; lengthMm: string; price: string; unlimited: boolean; active: boolean };
+type LengthDraft = {
+  id?: number;
+  lengthMm: string;
+  price: string;
+  cost: string;
+  unlimited: boolean;
+  active: boolean;
+};
+const poundsText = (pence: number | null) => (pence === null ? '' : (pence / 100).toFixed(2));
+const toPence = (pounds: string) => (pounds.trim() === '' ? null : Math.round(Number(pounds) * 100));
+const toMm = (text: string) => (text.trim() === '' ? null : Number(text));
 const TEXT_FIELDS = [
   ['name', 'Name'],
   ['code', 'Code'],
@@ -28,11 +39,19 @@ function toDraft(s: SectionRow | null) {
       thicknessMm: String(s?.thicknessMm ?? ''),
       widthMm: String(s?.widthMm ?? ''),
     },
+    trade: {
+      finish: s?.finish ?? 'sawn',
+      finishedThicknessMm: String(s?.finishedThicknessMm ?? ''),
+      finishedWidthMm: String(s?.finishedWidthMm ?? ''),
+      moisture: s?.moisture ?? 'kiln_dried',
+      minKeepMm: String(s?.minKeepMm ?? ''),
+    } satisfies TradeDraft as TradeDraft,
     active: s?.active ?? true,
     lengths: (s?.lengths ?? []).map((l): LengthDraft => ({
       id: l.id,
       lengthMm: String(l.lengthMm),
       price: (l.pricePence / 100).toFixed(2),
+      cost: poundsText(l.costPence),
       unlimited: l.onHand === null,
       active: l.active,
     })),
@@ -49,11 +68,17 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
         ...draft.fields,
         thicknessMm: Number(draft.fields.thicknessMm),
         widthMm: Number(draft.fields.widthMm),
+        finish: draft.trade.finish,
+        moisture: draft.trade.moisture,
+        finishedThicknessMm: toMm(draft.trade.finishedThicknessMm),
+        finishedWidthMm: toMm(draft.trade.finishedWidthMm),
+        minKeepMm: toMm(draft.trade.minKeepMm),
         active: draft.active,
         lengths: draft.lengths.map((l) => ({
           id: l.id,
           lengthMm: Number(l.lengthMm),
           pricePence: Math.round(Number(l.price) * 100),
+          costPence: toPence(l.cost),
           unlimited: l.unlimited,
           active: l.active,
         })),
@@ -122,6 +147,11 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
           Sold (active)
         </label>
       </div>
+      <SectionTradeFields
+        draft={draft.trade}
+        onChange={(change) => setDraft({ ...draft, trade: { ...draft.trade, ...change } })}
+        issue={issue}
+      />
       <fieldset className="space-y-2">
         <legend className="font-semibold">Stock lengths sold</legend>
         {draft.lengths.map((l, i) => (
@@ -141,6 +171,16 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
               step="0.01"
               value={l.price}
               onChange={(e) => setLength(i, { price: e.target.value })}
+            />
+            <span className="text-sm">cost £</span>
+            <input
+              aria-label={`Cost of length ${i + 1} in pounds`}
+              className={`${inputClass} w-28`}
+              type="number"
+              step="0.01"
+              placeholder="not entered"
+              value={l.cost}
+              onChange={(e) => setLength(i, { cost: e.target.value })}
             />
             <label className="flex items-center gap-1 text-sm">
               <input
@@ -169,7 +209,10 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
           onClick={() =>
             setDraft({
               ...draft,
-              lengths: [...draft.lengths, { lengthMm: '', price: '', unlimited: false, active: true }],
+              lengths: [
+                ...draft.lengths,
+                { lengthMm: '', price: '', cost: '', unlimited: false, active: true },
+              ],
             })
           }
         >

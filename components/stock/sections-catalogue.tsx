@@ -7,7 +7,8 @@ import type { DisplayUnit } from '@/db/enums';
 import { formatPence } from '@/lib/format/money';
 import type { SectionRow } from '@/lib/queries/stock';
 import { SectionEditor } from './section-editor';
-import { lengthText, onHandText } from './stock-length-label';
+import { MOISTURE_LABEL } from './section-trade-fields';
+import { lengthText, marginText, onHandText } from './stock-length-label';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { cn } from '@/lib/cn';
 
@@ -62,12 +63,25 @@ export function SectionsCatalogue({
                 <td className="p-3">
                   <div className="font-semibold">{s.name}</div>
                   <div className="text-sm text-bark-soft">
-                    {s.thicknessMm} × {s.widthMm} mm · {s.code}
+                    {s.thicknessMm} × {s.widthMm} mm
+                    {s.finishedThicknessMm || s.finishedWidthMm
+                      ? ` (finished ${s.finishedThicknessMm ?? s.thicknessMm} × ${s.finishedWidthMm ?? s.widthMm})`
+                      : ''}{' '}
+                    · {s.code}
                     {s.active ? '' : ' · not sold'}
                   </div>
                 </td>
                 <td className="p-3 text-sm">
-                  {[s.species, s.grade, s.treatment].filter(Boolean).join(' · ')}
+                  {[
+                    s.species,
+                    s.grade,
+                    s.finish === 'planed' ? 'planed' : 'sawn',
+                    MOISTURE_LABEL[s.moisture],
+                    s.treatment,
+                    s.minKeepMm ? `keeps offcuts from ${lengthText(s.minKeepMm, unit)}` : '',
+                  ]
+                    .filter(Boolean)
+                    .join(' · ')}
                 </td>
                 <td className="p-3">
                   <ul className="flex flex-wrap gap-2 text-sm">
@@ -78,7 +92,9 @@ export function SectionsCatalogue({
                         data-testid={`stock-length-${l.id}`}
                       >
                         <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span> ·{' '}
-                        {formatPence(l.pricePence)} · {onHandText(l)}
+                        {formatPence(l.pricePence)}
+                        {l.costPence !== null &&
+                          ` (cost ${formatPence(l.costPence)}, ${marginText(l)})`} · {onHandText(l)}
                       </li>
                     ))}
                   </ul>

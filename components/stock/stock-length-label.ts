@@ -6,6 +6,12 @@ import type { SectionRow, StockLengthRow } from '@/lib/queries/stock';
 export const lengthText = (mm: number, unit: DisplayUnit) =>
   unit === 'mm' ? `${formatLength(mm, unit)} mm` : formatLength(mm, unit);
 
+/** Margin on the selling price, e.g. "38 % margin" (price 960 p, cost 600 p). */
+export const marginText = (l: Pick<StockLengthRow, 'pricePence' | 'costPence'>) =>
+  l.costPence === null || l.pricePence === 0
+    ? ''
+    : `${Math.round((100 * (l.pricePence - l.costPence)) / l.pricePence)} % margin`;
+
 export const onHandText = (l: Pick<StockLengthRow, 'onHand'>) =>
   l.onHand === null ? 'unlimited' : `${l.onHand} on hand`;
 

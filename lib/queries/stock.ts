@@ -1,10 +1,13 @@
 import { queryOptions } from '@tanstack/react-query';
+import type { MoistureState } from '@/db/enums';
 import { fetchJson } from './fetch-json';
 
 export type StockLengthRow = {
   id: number;
   lengthMm: number;
   pricePence: number;
+  /** Owner only; null when not entered or not shown. */
+  costPence: number | null;
   onHand: number | null;
   active: boolean;
 };
@@ -17,6 +20,11 @@ export type SectionRow = {
   species: string;
   grade: string;
   treatment: string;
+  finish: 'sawn' | 'planed';
+  finishedThicknessMm: number | null;
+  finishedWidthMm: number | null;
+  moisture: MoistureState;
+  minKeepMm: number | null;
   active: boolean;
   lengths: StockLengthRow[];
 };
@@ -31,7 +39,14 @@ export type MovementRow = {
   userName: string | null;
 };
 export type SectionInput = Omit<SectionRow, 'id' | 'lengths'> & {
-  lengths: { id?: number; lengthMm: number; pricePence: number; unlimited: boolean; active: boolean }[];
+  lengths: {
+    id?: number;
+    lengthMm: number;
+    pricePence: number;
+    costPence: number | null;
+    unlimited: boolean;
+    active: boolean;
+  }[];
 };
 
 export const sectionsQuery = () =>

@@ -5,8 +5,8 @@ import { sections, stockLengths } from '@/db/schema';
 
 export type SectionWithLengths = Awaited<ReturnType<typeof listSections>>[number];
 
-/** The sections catalogue with each section's stock lengths, shortest first. */
-export async function listSections() {
+/** The sections catalogue with each section's stock lengths, shortest first. Cost prices only when asked (owner). */
+export async function listSections({ withCost = false }: { withCost?: boolean } = {}) {
   const db = await getDb();
   const [sectionRows, lengthRows] = await Promise.all([
     db.select().from(sections).orderBy(asc(sections.name)),
@@ -21,6 +21,11 @@ export async function listSections() {
     species: s.species,
     grade: s.grade,
     treatment: s.treatment,
+    finish: s.finish,
+    finishedThicknessMm: s.finishedThicknessMm,
+    finishedWidthMm: s.finishedWidthMm,
+    moisture: s.moisture,
+    minKeepMm: s.minKeepMm,
     active: s.active,
     lengths: lengthRows
       .filter((l) => l.sectionId === s.id)
@@ -28,6 +33,7 @@ export async function listSections() {
         id: l.id,
         lengthMm: l.lengthMm,
         pricePence: l.pricePence,
+        costPence: withCost ? l.costPence : null,
         onHand: l.onHand,
         active: l.active,
       })),

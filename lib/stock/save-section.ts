@@ -18,6 +18,7 @@ async function saveLengths(tx: Tx, sectionId: number, lengths: SectionBody['leng
         sectionId,
         lengthMm: input.lengthMm,
         pricePence: input.pricePence,
+        costPence: input.costPence ?? null,
         onHand: input.unlimited ? null : 0,
         active: input.active,
       });
@@ -29,6 +30,7 @@ async function saveLengths(tx: Tx, sectionId: number, lengths: SectionBody['leng
       .set({
         lengthMm: input.lengthMm,
         pricePence: input.pricePence,
+        costPence: input.costPence,
         active: input.active,
         ...(input.unlimited ? { onHand: null } : {}),
       })

@@ -235,6 +235,67 @@ describe('sections catalogue', () => {
   });
 });
 
+describe('section trade details and cost prices', () => {
+  // Planed 22 × 100 finishing at about 18 × 94: common practice, no published source.
+  const planed = {
+    ...sectionBody,
+    code: 'P22100',
+    name: '22×100 planed',
+    thicknessMm: 22,
+    widthMm: 100,
+    finish: 'planed',
+    finishedThicknessMm: 18,
+    finishedWidthMm: 94,
+    moisture: 'green',
+    minKeepMm: 600,
+    lengths: [{ lengthMm: 4800, pricePence: 960, costPence: 600, unlimited: true }],
+  };
+  const find = async () =>
+    (await call(getSections)).json.sections.find((s: { code: string }) => s.code === 'P22100');
+
+  it('the owner sets surface, finished size, moisture, shortest keep and cost; only the owner sees cost', async () => {
+    actAs(AS.owner);
+    expect((await call(postSection, { method: 'POST', body: planed })).status).toBe(201);
+    const saved = await find();
+    expect(saved).toMatchObject({
+      finish: 'planed',
+      finishedThicknessMm: 18,
+      finishedWidthMm: 94,
+      moisture: 'green',
+      minKeepMm: 600,
+    });
+    expect(saved.lengths[0]).toMatchObject({ pricePence: 960, costPence: 600 });
+    actAs(AS.hand);
+    expect((await find()).lengths[0].costPence).toBeNull();
+
+    actAs(AS.owner);
+    const older = Object.fromEntries(
+      Object.entries(planed).filter(([key]) => !['finish', 'moisture', 'minKeepMm'].includes(key)),
+    ); // a client that sends none of them
+    const edited = await call(patchSection, {
+      method: 'PATCH',
+      params: { sectionId: String(saved.id) },
+      body: { ...older, lengths: [{ ...planed.lengths[0], id: saved.lengths[0].id, costPence: null }] },
+    });
+    expect(edited.status).toBe(200);
+    expect(await find()).toMatchObject({ finish: 'planed', moisture: 'green', minKeepMm: 600 });
+    expect((await find()).lengths[0].costPence).toBeNull();
+  });
+
+  it('refuses a finished size above the nominal one and an unknown moisture, with field messages', async () => {
+    actAs(AS.owner);
+    const bad = await call(postSection, {
+      method: 'POST',
+      body: { ...planed, finishedWidthMm: 104, moisture: 'damp' },
+    });
+    expect(bad.status).toBe(422);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['moisture']);
+    const wide = await call(postSection, { method: 'POST', body: { ...planed, finishedWidthMm: 104 } });
+    expect(wide.json.issues.map((i: { path: string }) => i.path)).toEqual(['finishedWidthMm']);
+    expect(await find()).toBeUndefined();
+  });
+});
+
 describe('plan stock check', () => {
   it('lists the lengths a pending plan needs more of than are on hand', async () => {
     const l = await countedLength();
