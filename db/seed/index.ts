@@ -59,6 +59,8 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
           sectionId: section.id,
           lengthMm,
           pricePence: Math.round((s.pencePerMetre * lengthMm) / 1000),
+          // The demo yard buys at about 70 % of its selling price (an invented figure).
+          costPence: Math.round((0.7 * s.pencePerMetre * lengthMm) / 1000),
           onHand: s.unlimited ? null : 10 + Math.floor(random() * 50),
         })),
       );

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { HeadlineFigures } from '@/components/reports/headline-figures';
+import { MarginCharts } from '@/components/reports/margin-charts';
 import { OffcutCharts } from '@/components/reports/offcut-charts';
 import { ReportRangeForm } from '@/components/reports/report-range-form';
 import { SavingsCharts } from '@/components/reports/savings-charts';
@@ -9,6 +10,7 @@ import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { getOffcutReport, getSavingsReport, getStockReport, getWasteReport } from '@/lib/reports/get-reports';
+import { getMarginReport } from '@/lib/reports/get-margin-report';
 import { readReportRange } from '@/lib/reports/report-range';
 import { getYardSettings } from '@/lib/yard/yard-settings';
 
@@ -21,11 +23,12 @@ export default async function ReportsPage({
 }) {
   await requirePageUser('reports:read');
   const { range, problem } = readReportRange(await searchParams);
-  const [waste, offcuts, savings, stock, settings] = await Promise.all([
+  const [waste, offcuts, savings, stock, margin, settings] = await Promise.all([
     getWasteReport(range),
     getOffcutReport(range),
     getSavingsReport(range),
     getStockReport(range),
+    getMarginReport(range),
     getYardSettings(),
   ]);
   const today = readReportRange({}).range.to;
@@ -33,7 +36,7 @@ export default async function ReportsPage({
     <>
       <PageHeader
         title="Reports"
-        lead="What the yard's cutting really costs: waste, the offcut rack, what planning saved, and stock against use."
+        lead="What the yard's cutting really costs: waste, the offcut rack, what planning saved, margin at cost, and stock against use. Timber is valued at cost price where one is entered."
       />
       <div className="space-y-8">
         <ReportRangeForm range={range} today={today} />
@@ -50,6 +53,10 @@ export default async function ReportsPage({
         <section className="space-y-3">
           <h2 className="text-2xl font-bold">Savings</h2>
           <SavingsCharts report={savings} />
+        </section>
+        <section className="space-y-3">
+          <h2 className="text-2xl font-bold">Margin</h2>
+          <MarginCharts report={margin} />
         </section>
         <section className="space-y-3">
           <h2 className="text-2xl font-bold">Stock</h2>
