@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import type { DisplayUnit } from '@/db/enums';
+import type { Region } from '@/db/enums';
 import { receiveStockRequest, type SectionRow } from '@/lib/queries/stock';
 import { stockLengthChoices } from './stock-length-label';
 
@@ -13,12 +13,12 @@ type Line = { stockLengthId: string; quantity: string };
 const emptyLine: Line = { stockLengthId: '', quantity: '' };
 
 /** A delivery: a reference and one line per stock length received. */
-export function ReceiveForm({ sections, unit }: { sections: SectionRow[]; unit: DisplayUnit }) {
+export function ReceiveForm({ sections, region }: { sections: SectionRow[]; region: Region }) {
   const queryClient = useQueryClient();
   const [reference, setReference] = useState('');
   const [lines, setLines] = useState<Line[]>([emptyLine]);
   const [done, setDone] = useState<string | null>(null);
-  const choices = stockLengthChoices(sections, unit);
+  const choices = stockLengthChoices(sections, region);
   const receive = useMutation({
     mutationFn: () =>
       receiveStockRequest({

@@ -3,7 +3,8 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Card, cardClass } from '@/components/ui/field';
-import type { DisplayUnit } from '@/db/enums';
+import type { DisplayUnit, Region } from '@/db/enums';
+import { stockLengthName } from '@/lib/units/stock-length-name';
 import { formatPence } from '@/lib/format/money';
 import type { SectionRow } from '@/lib/queries/stock';
 import { SectionEditor } from './section-editor';
@@ -16,10 +17,12 @@ import { cn } from '@/lib/cn';
 export function SectionsCatalogue({
   sections,
   unit,
+  region,
   canEdit,
 }: {
   sections: SectionRow[];
   unit: DisplayUnit;
+  region: Region;
   canEdit: boolean;
 }) {
   const [editing, setEditing] = useState<SectionRow | 'new' | null>(null);
@@ -91,7 +94,7 @@ export function SectionsCatalogue({
                         className={`rounded-md px-2 py-1 ${l.onHand === 0 ? 'bg-brick-light text-brick' : 'bg-shaving'} ${l.active ? '' : 'line-through'}`}
                         data-testid={`stock-length-${l.id}`}
                       >
-                        <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span> ·{' '}
+                        <span className="font-semibold">{stockLengthName(l.lengthMm, region)}</span> ·{' '}
                         {formatPence(l.pricePence)}
                         {l.costPence !== null &&
                           ` (cost ${formatPence(l.costPence)}, ${marginText(l)})`} · {onHandText(l)}

@@ -3,7 +3,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import type { DisplayUnit } from '@/db/enums';
+import type { DisplayUnit, Region } from '@/db/enums';
 import { sectionsQuery } from '@/lib/queries/stock';
 import { ReceiveForm } from './receive-form';
 import { RecentMovements } from './recent-movements';
@@ -12,11 +12,13 @@ import { StocktakeForm } from './stocktake-form';
 
 export function StockManager({
   unit,
+  region,
   canEditSections,
   canReceive,
   canAdjust,
 }: {
   unit: DisplayUnit;
+  region: Region;
   canEditSections: boolean;
   canReceive: boolean;
   canAdjust: boolean;
@@ -31,20 +33,20 @@ export function StockManager({
           {canReceive && (
             <Card>
               <h2 className="mb-4 text-xl font-bold">Receive a delivery</h2>
-              <ReceiveForm sections={sections.data} unit={unit} />
+              <ReceiveForm sections={sections.data} region={region} />
             </Card>
           )}
           {canAdjust && (
             <Card>
               <h2 className="mb-4 text-xl font-bold">Stocktake</h2>
-              <StocktakeForm sections={sections.data} unit={unit} />
+              <StocktakeForm sections={sections.data} region={region} />
             </Card>
           )}
         </div>
       )}
       <section>
         <h2 className="mb-3 text-xl font-bold">Sections catalogue</h2>
-        <SectionsCatalogue sections={sections.data} unit={unit} canEdit={canEditSections} />
+        <SectionsCatalogue sections={sections.data} unit={unit} region={region} canEdit={canEditSections} />
       </section>
       {canReceive && (
         <section>

@@ -1,16 +1,16 @@
 'use client';
 
-import { lengthText } from './stock-length-label';
+import { stockLengthName } from '@/lib/units/stock-length-name';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import type { DisplayUnit } from '@/db/enums';
+import type { Region } from '@/db/enums';
 import { stocktakeRequest, type SectionRow } from '@/lib/queries/stock';
 
 /** Counted boards per stock length of one section; only lengths whose count changed are sent. */
-export function StocktakeForm({ sections, unit }: { sections: SectionRow[]; unit: DisplayUnit }) {
+export function StocktakeForm({ sections, region }: { sections: SectionRow[]; region: Region }) {
   const queryClient = useQueryClient();
   const [sectionId, setSectionId] = useState('');
   const [counts, setCounts] = useState<Record<number, string>>({});
@@ -76,13 +76,13 @@ export function StocktakeForm({ sections, unit }: { sections: SectionRow[]; unit
               className="flex items-center justify-between gap-3 rounded-lg bg-shaving px-3 py-2"
             >
               <span>
-                <span className="font-semibold">{lengthText(l.lengthMm, unit)}</span>
+                <span className="font-semibold">{stockLengthName(l.lengthMm, region)}</span>
                 <span className="block text-sm text-bark-soft">
                   {l.onHand === null ? 'Unlimited — a count starts counting it' : `Records say ${l.onHand}`}
                 </span>
               </span>
               <input
-                aria-label={`Counted ${lengthText(l.lengthMm, unit)}`}
+                aria-label={`Counted ${stockLengthName(l.lengthMm, region)}`}
                 className={`${inputClass} w-24`}
                 type="number"
                 min={0}

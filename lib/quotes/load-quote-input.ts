@@ -56,6 +56,7 @@ export async function loadQuoteInput(db: DbOrTx, planId: number) {
     discountPercent: account === 'trade' ? (customer?.discountPercent ?? 0) : 0,
     vatRateBasisPoints: yard.vatRateBasisPoints,
     depositPercent: yard.depositPercent,
+    region: yard.region,
   };
   return { plan, job, customer: customer ?? null, yard, input };
 }

@@ -1,8 +1,8 @@
 // Prices a plan as a quote, all in whole pence: new stock at the yard's board prices (less a trade
 // discount), rack offcuts at the offcut rate, cutting, delivery, a minimum-charge top-up, then VAT.
 // Pure: the caller reads the plan's boards and the yard's prices.
-import type { AccountKind } from '@/db/enums';
-import { formatMillimetres } from '@/lib/units';
+import type { AccountKind, Region } from '@/db/enums';
+import { stockLengthName } from '@/lib/units/stock-length-name';
 import type { QuoteFigures, QuoteLine } from './quote-shapes';
 import { grossOf, vatInGross, vatOnNet } from './vat';
 
@@ -30,6 +30,8 @@ export type PriceQuoteInput = {
   discountPercent: number;
   vatRateBasisPoints: number;
   depositPercent: number;
+  /** Names stock lengths the region's way ("4.8 m", "16 ft"); UK when left out. */
+  region?: Region;
 };
 
 const roundDiv = (numerator: number, denominator: number) =>
@@ -51,7 +53,7 @@ function timberLines(input: PriceQuoteInput): QuoteLine[] {
     }
     for (const g of groups.values()) {
       lines.push({
-        description: `${name}, ${formatMillimetres(g.lengthMm)} mm stock length`,
+        description: `${name}, ${stockLengthName(g.lengthMm, input.region ?? 'uk')} stock length`,
         quantity: g.count,
         unit: 'board',
         unitPence: g.pricePence,

@@ -8,14 +8,14 @@ test.describe('the owner runs the stock, the rack and the reports', () => {
     await signIn(page, DEMO.owner);
     await page.goto('/stock');
     const row = page.getByTestId('section-row-T47100');
-    const chip = row.locator('li', { hasText: /^4800 mm ·/ });
+    const chip = row.locator('li', { hasText: /^4\.8 m ·/ });
     const before = Number((await chip.innerText()).match(/(\d+) on hand/)![1]);
 
     const form = page.getByTestId('receive-form');
     await form.getByLabel('Delivery note or reference').fill('DN-5521 Northwood Timber');
     await form
       .getByLabel('Stock length, line 1')
-      .selectOption({ label: `47×100 C24 treated — 4800 mm (${before} on hand)` });
+      .selectOption({ label: `47×100 C24 treated — 4.8 m (${before} on hand)` });
     await form.getByLabel('Boards received, line 1').fill('12');
     await form.getByRole('button', { name: 'Receive delivery' }).click();
     await expect(page.getByTestId('receive-done')).toContainText('Received 12 boards');

@@ -80,6 +80,23 @@ describe('a quote priced on the published example', () => {
   });
 });
 
+describe('stock lengths on quote lines', () => {
+  it('are named the region’s way: "4.8 m" in the UK, "16 ft" in North America', () => {
+    // Trade usage, common practice, no published source; 16 ft = 4876.8 mm (1 in = 25.4 mm, 1959 agreement).
+    const board = {
+      sectionId: 1,
+      sectionName: '47×100',
+      source: 'stock' as const,
+      pricePence: 9_60,
+      cuts: 0,
+    };
+    const uk = priceQuote({ ...base, boards: [{ ...board, lengthMm: 4800 }] });
+    expect(uk.lines[0].description).toBe('47×100, 4.8 m stock length');
+    const na = priceQuote({ ...base, region: 'na', boards: [{ ...board, lengthMm: 4877 }] });
+    expect(na.lines[0].description).toBe('47×100, 16 ft stock length');
+  });
+});
+
 describe('quote lines in whole pence', () => {
   it('charges rack offcuts at the offcut rate of the section’s cheapest price per metre', () => {
     // 3 offcuts, 6.66 m in all; cheapest stock £9.60 for 4.8 m = £2.00/m; 50 % → £1.00/m → £6.66.

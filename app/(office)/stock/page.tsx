@@ -18,6 +18,7 @@ export default async function StockPage() {
       />
       <StockManager
         unit={settings.displayUnit}
+        region={settings.region}
         canEditSections={can(user.role, 'sections:edit')}
         canReceive={can(user.role, 'stock:receive')}
         canAdjust={can(user.role, 'stock:adjust')}
