@@ -115,16 +115,18 @@ export async function seedHistory(
     const plannedAt = new Date(
       start.getTime() + Math.round(((j + 0.5) * (HISTORY_DAYS - 3) * DAY_MS) / PAST_JOBS) + 9 * HOUR_MS,
     );
+    // The yard is shut on Sundays: a job that would fall on one is cut on the Monday.
+    if (plannedAt.getUTCDay() === 0) plannedAt.setTime(plannedAt.getTime() + DAY_MS);
     const doneAt = new Date(plannedAt.getTime() + 5 * HOUR_MS);
     const kind = pick(pastJobKinds);
 
-    // A delivery the evening before tops up whatever runs low.
+    // A delivery first thing that morning tops up whatever runs low.
     for (const [id, count] of onHand) {
       if (count >= REORDER_BELOW) continue;
       const l = lengthById.get(id)!;
       onHand.set(id, count + DELIVERY_SIZE);
       rows.movements.push({
-        at: new Date(plannedAt.getTime() - 14 * HOUR_MS),
+        at: new Date(plannedAt.getTime() - 2 * HOUR_MS),
         kind: 'receipt',
         userId: userIds.hand,
         sectionId: l.sectionId,

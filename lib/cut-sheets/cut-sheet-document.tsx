@@ -1,6 +1,7 @@
 // The PDF cut sheet: job, pieces by section, board diagrams and the price.
 import { formatCustomerDate } from '@/lib/format/customer-date';
 import { Document, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
+import { angleLine } from '@/lib/plans/angle-line';
 import { groupIdenticalBoards } from '@/lib/plans/group-boards';
 import type { PlanViewData } from '@/lib/queries/plans';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
@@ -62,11 +63,19 @@ export function CutSheetDocument({
         </Text>
         {plan.sections.map((section) => {
           const boards = plan.boards.filter((b) => b.sectionId === section.sectionId);
-          const pieces = new Map<string, { label: string; lengthMm: number; count: number }>();
+          const pieces = new Map<
+            string,
+            { label: string; lengthMm: number; count: number; angle: string | null }
+          >();
           for (const b of boards)
             for (const p of b.pieces) {
               const key = `${p.lengthMm}|${p.label}`;
-              const e = pieces.get(key) ?? { label: p.label, lengthMm: p.lengthMm, count: 0 };
+              const e = pieces.get(key) ?? {
+                label: p.label,
+                lengthMm: p.lengthMm,
+                count: 0,
+                angle: angleLine(p, format),
+              };
               e.count += 1;
               pieces.set(key, e);
             }
@@ -77,7 +86,10 @@ export function CutSheetDocument({
                 .sort((a, b) => b.lengthMm - a.lengthMm)
                 .map((p) => (
                   <View key={`${p.lengthMm}|${p.label}`} style={s.row}>
-                    <Text style={s.cell}>{p.label || 'piece'}</Text>
+                    <Text style={s.cell}>
+                      {p.label || 'piece'}
+                      {p.angle ? `\n${p.angle}` : ''}
+                    </Text>
                     <Text style={s.num}>{format(p.lengthMm)}</Text>
                     <Text style={s.num}>× {p.count}</Text>
                   </View>

@@ -34,7 +34,8 @@ const panelBase = {
 const studFraming = {
   centres: mm('Stud centres', 100, 1200),
   bottomPlate: z.boolean({ error: 'Bottom plate must be yes or no' }).default(true),
-  topPlate: z.enum(['single', 'double'], { error: 'Top plate must be single or double' }).default('double'),
+  // Left out: the region's habit, a single head plate in the UK and a double top plate in North America.
+  topPlate: z.enum(['single', 'double'], { error: 'Top plate must be single or double' }).optional(),
   nogginRows: count('Noggin rows', 0, 5).default(0),
 };
 

@@ -29,7 +29,7 @@ export function buildStudWallFrame(
   const rise = getWallHeightAt(wall, L) - getWallHeightAt(wall, 0);
   const slope = Math.atan2(rise, L);
   const plateDepth = t / Math.cos(slope); // vertical depth of a sloping plate
-  const plates = wall.topPlate === 'double' ? 2 : 1;
+  const plates = (wall.topPlate ?? (ctx.region === 'uk' ? 'single' : 'double')) === 'double' ? 2 : 1;
   const base = wall.bottomPlate ? t : 0;
   const topAngle = rise !== 0 ? roundAngle(toDegrees(Math.abs(slope))) : undefined;
   const heightAt = (x: number) => getWallHeightAt(wall, x);

@@ -37,6 +37,19 @@ describe('seeded yard history', () => {
     }
   });
 
+  it('keeps the yard’s week: no job planned and no delivery taken on a Sunday', async () => {
+    const plans = await db.select().from(schema.plans).where(eq(schema.plans.status, 'done'));
+    const receipts = await db
+      .select()
+      .from(schema.stockMovements)
+      .where(eq(schema.stockMovements.kind, 'receipt'));
+    expect(receipts.length).toBeGreaterThan(0);
+    const sundays = [...plans.map((p) => p.createdAt), ...receipts.map((r) => r.at)].filter(
+      (at) => at.getUTCDay() === 0,
+    );
+    expect(sundays).toEqual([]);
+  });
+
   it('every kept remainder of a cut board became a rack offcut with an offcut_made movement', async () => {
     const cut = and(eq(schema.planBoards.keepRemainder, true), eq(schema.planBoards.status, 'done'));
     const [{ kept }] = await db

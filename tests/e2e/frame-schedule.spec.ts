@@ -82,7 +82,7 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
   });
 
   await editor.previewUpToDate();
-  await expect(editor.row('front wall stud')).toContainText('1759'); // 1900 less a bottom plate and two top plates of 47
+  await expect(editor.row('front wall stud')).toContainText('1806'); // 1900 less a sole plate and the UK's single head plate, 47 each
   // A UK yard (the default region) calls the piece over an opening a lintel.
   await expect(editor.row('side door lintel')).toBeVisible();
   await expect(editor.row('roof rafter')).toContainText('11.3°');
@@ -102,7 +102,9 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
 
   const scheduleUrl = page.url();
   const send = page.getByTestId('send-to-job-form');
-  await expect(send.getByLabel('Customer', { exact: true })).toHaveValue('Nell Ashdown');
+  // The schedule's customer has no record yet: the job is sent with a new one of that name.
+  await expect(send.getByLabel('Customer', { exact: true })).toHaveValue('new');
+  await expect(send.getByLabel('Customer name')).toHaveValue('Nell Ashdown');
   await send.getByRole('button', { name: 'Send cut list to job' }).click();
   await expect(page).toHaveURL(/\/jobs\/\d+$/);
   const jobId = Number(/\/jobs\/(\d+)$/.exec(page.url())![1]);

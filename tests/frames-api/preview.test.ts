@@ -39,7 +39,8 @@ describe('POST /api/frames/preview', () => {
     });
     expect(res.status).toBe(200);
     const studs = res.json.items.find((i: { label: string }) => i.label === 'back wall stud');
-    expect(studs).toMatchObject({ sectionId: stud, quantity: 9, length: 2400 - 3 * 47 });
+    // The demo yard is in the UK: a sole plate and a single head plate, so studs are 2400 − 2 × 47.
+    expect(studs).toMatchObject({ sectionId: stud, quantity: 9, length: 2400 - 2 * 47 });
     expect(res.json.notice).toBe(FRAME_STRUCTURE_NOTICE);
     expect(res.json.warnings).toEqual([]);
   });

@@ -52,12 +52,10 @@ describe('frame schedules CRUD', () => {
       unit: 'imperial',
       jobs: [],
     });
-    // Defaults are filled in on save: a wall gets a bottom plate and a double top plate.
-    expect(created.json.schedule.panels[0]).toMatchObject({
-      bottomPlate: true,
-      topPlate: 'double',
-      nogginRows: 0,
-    });
+    // Defaults are filled in on save: a wall gets a bottom plate; its top plate is left to the
+    // yard's region (single head plate in the UK, double top plate in North America).
+    expect(created.json.schedule.panels[0]).toMatchObject({ bottomPlate: true, nogginRows: 0 });
+    expect(created.json.schedule.panels[0].topPlate).toBeUndefined();
 
     const edited = await call(update, {
       method: 'PUT',

@@ -50,6 +50,24 @@ describe('piece names by region', () => {
   });
 });
 
+describe('head plates by region when the panel does not say', () => {
+  // A single head plate is the UK habit; North American platform framing doubles the top plate
+  // (8 ft wall: stud + bottom plate + two top plates, TRADE.md) — common practice, no published source.
+  const plainWall = () =>
+    parsePanels([
+      { kind: 'wall', id: 'w', name: 'back', sectionId: 1, length: 2400, height: 2100, centres: 600 },
+    ]);
+  const plates = (region: 'uk' | 'na', name: string) =>
+    generateFrameItems(plainWall(), { sections, region })
+      .items.filter((i) => i.label === `back ${name}`)
+      .reduce((n, i) => n + i.quantity, 0);
+
+  it('a UK yard gets one head plate, a North American yard two top plates', () => {
+    expect(plates('uk', 'head plate')).toBe(1);
+    expect(plates('na', 'top plate')).toBe(2);
+  });
+});
+
 describe('tiny pieces', () => {
   it('warns about a short stud above the lintel with the usual fix, naming its mark', () => {
     // Wall 2100 high less a 47 mm head plate; door 1900 high with a 100 mm lintel on top leaves
