@@ -27,7 +27,7 @@ export function HeadlineFigures({
     {
       label: 'Saved by planning',
       value: formatPence(savings.totals.savedPence),
-      note: `new stock over ${savings.totals.jobs} jobs against a longest-first plan`,
+      note: `over ${savings.totals.jobs} jobs against a longest-first plan; rack offcuts count at cost, not as saved`,
     },
     {
       label: 'On the rack',

@@ -156,32 +156,38 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
         <legend className="font-semibold">Stock lengths sold</legend>
         {draft.lengths.map((l, i) => (
           <div key={l.id ?? `new-${i}`} className="flex flex-wrap items-center gap-3">
-            <input
-              aria-label={`Length ${i + 1} in mm`}
-              className={`${inputClass} w-28`}
-              type="number"
-              value={l.lengthMm}
-              onChange={(e) => setLength(i, { lengthMm: e.target.value })}
-            />
+            <div className="w-28 shrink-0">
+              <input
+                aria-label={`Length ${i + 1} in mm`}
+                className={inputClass}
+                type="number"
+                value={l.lengthMm}
+                onChange={(e) => setLength(i, { lengthMm: e.target.value })}
+              />
+            </div>
             <span className="text-sm">mm at £</span>
-            <input
-              aria-label={`Price of length ${i + 1} in pounds`}
-              className={`${inputClass} w-28`}
-              type="number"
-              step="0.01"
-              value={l.price}
-              onChange={(e) => setLength(i, { price: e.target.value })}
-            />
+            <div className="w-28 shrink-0">
+              <input
+                aria-label={`Price of length ${i + 1} in pounds`}
+                className={inputClass}
+                type="number"
+                step="0.01"
+                value={l.price}
+                onChange={(e) => setLength(i, { price: e.target.value })}
+              />
+            </div>
             <span className="text-sm">cost £</span>
-            <input
-              aria-label={`Cost of length ${i + 1} in pounds`}
-              className={`${inputClass} w-28`}
-              type="number"
-              step="0.01"
-              placeholder="not entered"
-              value={l.cost}
-              onChange={(e) => setLength(i, { cost: e.target.value })}
-            />
+            <div className="w-28 shrink-0">
+              <input
+                aria-label={`Cost of length ${i + 1} in pounds`}
+                className={inputClass}
+                type="number"
+                step="0.01"
+                placeholder="not entered"
+                value={l.cost}
+                onChange={(e) => setLength(i, { cost: e.target.value })}
+              />
+            </div>
             <label className="flex items-center gap-1 text-sm">
               <input
                 type="checkbox"
