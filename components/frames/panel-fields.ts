@@ -46,6 +46,8 @@ const studFraming: FieldSpec[] = [
     label: 'Top plate',
     type: 'choice',
     options: [
+      // Left empty, the region decides: a single head plate in the UK, a double top plate in North America.
+      ['', "The region's habit"],
       ['double', 'Double'],
       ['single', 'Single'],
     ],
@@ -183,14 +185,14 @@ export const PANEL_FIELDS: Record<PanelKind, FieldSpec[]> = {
 
 /** Starting values in millimetres for a new panel, so it previews at once. */
 export const NEW_PANEL_VALUES: Record<PanelKind, Record<string, number | string | boolean>> = {
-  wall: { length: 2400, height: 2100, centres: 400, bottomPlate: true, topPlate: 'double', nogginRows: 1 },
+  wall: { length: 2400, height: 2100, centres: 400, bottomPlate: true, topPlate: '', nogginRows: 1 },
   sloped_wall: {
     length: 1800,
     lowHeight: 1900,
     highHeight: 2200,
     centres: 400,
     bottomPlate: true,
-    topPlate: 'double',
+    topPlate: '',
     nogginRows: 1,
   },
   opening: { position: 300, width: 760, height: 1800 },
