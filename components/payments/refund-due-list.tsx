@@ -13,7 +13,7 @@ type Row = PaymentsOverview['refundsDue'][number];
 
 /** Cancelled jobs still holding the customer's money; the owner refunds each with a reason. */
 export function RefundDueList({ rows }: { rows: Row[] }) {
-  if (!rows.length) return <p>None.</p>;
+  if (!rows.length) return <p data-testid="refunds-due">No cancelled job holds a payment.</p>;
   return (
     <ul className="divide-y divide-sand" data-testid="refunds-due">
       {rows.map((row) => (
