@@ -28,6 +28,8 @@ export function exactStep(
   plans: Packing[],
   lpPool: Pattern[],
   budget: SearchBudget,
+  /** A cost already proven cheapest: only phase 2 (tidying among plans of this cost) runs. */
+  provenCost: number | null = null,
 ): Packing | null {
   const highs = highsEngine();
   if (!highs || demand.every((d) => d === 0)) return null;
@@ -62,11 +64,15 @@ export function exactStep(
   };
 
   const costs = columns.map((c) => model.bins[c.bin].costUnits);
-  const first = solveWith(costs, null);
-  if (!first) return null;
-  let packing = toPacking(model, columns, first, demand);
-  if (!isValid(model, packing, demand, limits)) return null;
-  const cost = first.reduce((s, x, c) => s + x * costs[c], 0);
+  let packing: Packing | null = null;
+  let cost = provenCost ?? 0;
+  if (provenCost === null) {
+    const first = solveWith(costs, null);
+    if (!first) return null;
+    packing = toPacking(model, columns, first, demand);
+    if (!isValid(model, packing, demand, limits)) return null;
+    cost = first.reduce((s, x, c) => s + x * costs[c], 0);
+  }
   // Among plans of this cost: less scrap, then offcuts before new stock, then fewer kept remainders.
   const prefer = columns.map((c) => {
     const board = makeBoard(model, c.bin, c.items);
