@@ -8,7 +8,7 @@
 // callback stops HiGHS at our own deadline, because its own clock is checked too rarely here.
 
 import { boardFits, isFullLength, isOpenBoard } from './board-fit';
-import { highsEngine } from './highs-engine';
+import { highsEngine, runUntil } from './highs-engine';
 import type { Model } from './model';
 import { costStep } from './money';
 import { makeBoard, type PackedBoard, type Packing } from './packing';
@@ -175,12 +175,7 @@ export function arcFlowStep(
       time_limit: Math.max(0.05, (deadline - performance.now()) / 1000),
     });
     if (start) mip.setSolution({ colValue: start });
-    const stop = (event: { interrupt(): void }) => {
-      if (performance.now() > deadline) event.interrupt();
-      return undefined;
-    };
-    const codes = highs.constants.callbackType;
-    mip.run({ [codes.mipInterrupt]: stop, [codes.simplexInterrupt]: stop });
+    runUntil(highs, mip, deadline);
     const status = mip.getModelStatus();
     const dual = Number(mip.info.get('mip_dual_bound'));
     const proven = status === highs.constants.modelStatus.optimal;
