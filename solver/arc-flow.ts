@@ -14,7 +14,7 @@ import { costStep } from './money';
 import { makeBoard, type PackedBoard, type Packing } from './packing';
 
 /** Graphs above this many arcs are not built (memory and time on a shared 2-core machine). */
-const MAX_ARCS = 250_000;
+const MAX_ARCS = 30_000;
 
 export interface ArcFlowResult {
   /** Cheapest plan HiGHS found (checked with the engine's own fit rules), or null. */

@@ -56,7 +56,7 @@ export function solve(input: SolveInput): SolvePlan {
     if (exact.proven) costCap = scorePacking(model, best).cost;
   };
   // With several board kinds (a yard's job) the integer model goes first; with one kind the own
-  // searches below close most jobs faster, and the integer model gets what time is left.
+  // searches and the pattern step close most jobs faster, and the integer model gets what is left.
   const severalKinds = model.bins.length > 1;
   if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
     const lengthTarget = bound.boards;
@@ -75,7 +75,6 @@ export function solve(input: SolveInput): SolvePlan {
       consider(improvePacking(model, best, bound, guide, budget, lengthTarget));
     }
   }
-  if (!severalKinds) runArcFlow();
   // The pattern step: cheaper when the bound is not met, and tidier (offcuts, scrap) when it is.
   const unusedOffcuts = model.bins.some(
     (b, j) => b.source === 'offcut' && !best.boards.some((pb) => pb.bin === j),
@@ -84,6 +83,7 @@ export function solve(input: SolveInput): SolvePlan {
     const plans = [...firstPlans, ffd, byHand, best];
     consider(exactStep(model, demand, limits, plans, lpPool, budget, costCap));
   }
+  if (!severalKinds) runArcFlow();
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
   return buildPlan(model, best, bound, {
     timeMs: Math.round(performance.now() - started),
