@@ -1,6 +1,7 @@
-// Loads HiGHS and warms it up once per process or worker thread. WebAssembly starts on a quick
-// baseline compiler and optimises the functions that run often, so the first integer models are
-// several times slower than later ones; one small model solved here moves that cost to start-up.
+// Loads HiGHS, and on request warms it up. WebAssembly starts on a quick baseline compiler and
+// optimises the functions that run often, so the first integer models in a process are several times
+// slower than later ones; a small model solved at start-up moves that cost out of the first job. Worth
+// it for a long-lived process (the bench, a worker kept for many jobs), not for one job per thread.
 
 import { arcFlowStep } from './arc-flow';
 import { sequentialFill } from './greedy-fill';
@@ -36,8 +37,13 @@ const WARM_UP_JOB: SolveInput = {
 let warmed: Promise<void> | null = null;
 
 /** Loads the integer step; after it, `solve()` proves the cheapest plan where time allows. */
-export function prepareSolver(): Promise<void> {
-  warmed ??= loadHighs().then(() => {
+export async function prepareSolver(options: { warmUp?: boolean } = {}): Promise<void> {
+  await loadHighs();
+  if (options.warmUp) await warmUp();
+}
+
+function warmUp(): Promise<void> {
+  warmed ??= Promise.resolve().then(() => {
     const model = buildModel(WARM_UP_JOB);
     const demand = model.items.map((it) => it.count);
     const limits = model.bins.map((b) => b.limit);

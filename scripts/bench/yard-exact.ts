@@ -9,7 +9,7 @@ import { generateSizedYardJob } from './yard-jobs';
 const pence = (x: number) => Math.round(x * 100);
 
 export async function runYardExact(count: number, median: (xs: number[]) => number): Promise<string> {
-  await prepareSolver();
+  await prepareSolver({ warmUp: true });
   const times: number[] = [];
   const cpuTimes: number[] = [];
   let peakRss = 0;
