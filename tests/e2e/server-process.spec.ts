@@ -1,0 +1,162 @@
+// The production server as a process: it answers while a plan is solved, it refuses to share its data
+// folder, and a kill -9 in the middle of writes loses nothing that was acknowledged.
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { PGlite } from '@electric-sql/pglite';
+import { expect, test, type APIRequestContext } from '@playwright/test';
+import { DEMO, signIn } from './support/sign-in';
+import { startProcess, startServer, stopServer, waitForHealth } from './support/own-server';
+
+// The same port and folder as the server in playwright.config.ts.
+const PORT = Number(process.env.PW_PORT ?? 3107);
+const MAIN_DATA_DIR = `.data-e2e-${PORT}`;
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+async function newJob(request: APIRequestContext, customer: string): Promise<number> {
+  const response = await request.post('/api/jobs', { data: { customer } });
+  expect(response.status()).toBe(201);
+  return (await response.json()).job.id;
+}
+
+test('the health check answers within 200 ms while a 540-piece plan is being solved', async ({
+  page,
+  baseURL,
+}) => {
+  test.setTimeout(180_000);
+  await signIn(page, DEMO.hand);
+  const jobId = await newJob(page.request, 'Long solve check');
+  // 180 different lengths, three of each: many distinct lengths keep the search busy.
+  const rows = Array.from({ length: 180 }, (_, i) => `T47100,${301 + ((i * 7919) % 2400)},3,p${i}`);
+  const imported = await page.request.post(`/api/jobs/${jobId}/items/import`, {
+    data: ['section,length,quantity,label', ...rows].join('\n'),
+    headers: { 'content-type': 'text/csv' },
+  });
+  expect(imported.status()).toBe(200);
+
+  const started = Date.now();
+  let solving = true;
+  const planning = page.request
+    .post(`/api/jobs/${jobId}/plans`, { data: { timeLimitMs: 6000 }, timeout: 120_000 })
+    .finally(() => (solving = false));
+  const answers: number[] = [];
+  await sleep(500); // the request has reached the solver
+  while (solving) {
+    const asked = performance.now();
+    const health = await fetch(`${baseURL}/api/health`);
+    if (!solving) break; // this answer may have waited for the plan being stored, not solved
+    expect(health.status).toBe(200);
+    answers.push(performance.now() - asked);
+    await sleep(100);
+  }
+  const planned = await planning;
+  expect(planned.status()).toBe(201);
+  const solveMs = Date.now() - started;
+  console.log(
+    `[reliability] health during a ${solveMs} ms plan: ${answers.length} answers, slowest ${Math.round(Math.max(...answers))} ms`,
+  );
+  expect(solveMs).toBeGreaterThan(2000); // the solve really was long
+  expect(answers.length).toBeGreaterThan(5);
+  // On the request thread the health check would wait for the whole solve.
+  expect(Math.max(...answers)).toBeLessThan(200);
+});
+
+test('a second server and db:reset are both refused while the server holds its data folder', async ({
+  page,
+  baseURL,
+}) => {
+  test.setTimeout(120_000);
+  const second = startServer(MAIN_DATA_DIR, PORT + 7);
+  expect(await second.exited).toBe(1);
+  expect(second.output()).toMatch(/data folder .* is already open in process \d+/);
+
+  const reset = startProcess('node_modules/.bin/tsx', ['scripts/db-reset.ts'], {
+    ...process.env,
+    KERFWISE_DATA_DIR: MAIN_DATA_DIR,
+  });
+  expect(await reset.exited).toBe(1);
+  expect(reset.output()).toMatch(/already open in process \d+/);
+
+  // The running server still has its data.
+  expect((await fetch(`${baseURL}/api/health`)).status).toBe(200);
+  await signIn(page, DEMO.hand);
+  const { jobs } = await (await page.request.get('/api/jobs')).json();
+  expect(jobs.length).toBeGreaterThan(0);
+});
+
+test('kill -9 during writes, three times: every acknowledged write survives and on hand equals the movements', async ({
+  browser,
+}) => {
+  test.setTimeout(300_000);
+  const dataDir = mkdtempSync(path.join(tmpdir(), 'kerfwise-kill-'));
+  const port = PORT + 9;
+  const jobIds: number[] = [];
+  const receipts: string[] = [];
+  for (let round = 1; round <= 3; round++) {
+    const server = startServer(dataDir, port); // rounds 2 and 3 take over the killed server's lock
+    await waitForHealth(server);
+    const context = await browser.newContext({ baseURL: server.baseURL });
+    const page = await context.newPage();
+    await signIn(page, DEMO.owner);
+    for (const id of jobIds) expect((await page.request.get(`/api/jobs/${id}`)).status()).toBe(200);
+    const { sections } = await (await page.request.get('/api/sections')).json();
+    const counted = sections.flatMap((s: { lengths: { id: number; onHand: number | null }[] }) =>
+      s.lengths.filter((l) => l.onHand !== null),
+    )[0];
+
+    // Two lanes of writes (a job, a stock receipt) until the server dies under them.
+    let acknowledged = 0;
+    const lane = async (name: string) => {
+      for (let i = 0; i < 40; i++) {
+        const reference = `Kill ${round}-${name}-${i}`;
+        try {
+          if (name === 'jobs') {
+            const response = await page.request.post('/api/jobs', { data: { customer: reference } });
+            if (response.status() !== 201) return;
+            jobIds.push((await response.json()).job.id);
+          } else {
+            const response = await page.request.post('/api/stock/receipts', {
+              data: { reference, lines: [{ stockLengthId: counted.id, quantity: 2 }] },
+            });
+            if (response.status() !== 201) return;
+            receipts.push(reference);
+          }
+          acknowledged++;
+        } catch {
+          return; // the connection died with the server
+        }
+      }
+    };
+    const lanes = Promise.all([lane('jobs'), lane('receipts')]);
+    while (acknowledged < 8 + round * 3) await sleep(5);
+    await stopServer(server, 'SIGKILL');
+    await lanes;
+    await context.close();
+  }
+
+  // A clean start and stop, then look inside the folder.
+  const last = startServer(dataDir, port);
+  await waitForHealth(last);
+  await stopServer(last);
+  const db = new PGlite(dataDir);
+  try {
+    const stored = await db.query<{ id: number }>('select id from jobs');
+    expect(stored.rows.map((r) => r.id)).toEqual(expect.arrayContaining(jobIds));
+    const received = await db.query<{ reason: string | null }>(
+      "select reason from stock_movements where kind = 'receipt'",
+    );
+    const texts = received.rows.map((r) => r.reason ?? '').join('\n');
+    for (const reference of receipts) expect(texts).toContain(reference);
+    const ledger = await db.query<{ on_hand: number; total: number }>(
+      `select sl.on_hand, coalesce(sum(m.quantity_delta), 0)::int as total
+         from stock_lengths sl left join stock_movements m on m.stock_length_id = sl.id
+        where sl.on_hand is not null group by sl.id`,
+    );
+    for (const row of ledger.rows) expect(row.on_hand).toBe(row.total);
+    console.log(
+      `[reliability] kill -9 restarts: 3, acknowledged ${jobIds.length} jobs and ${receipts.length} receipts, all stored; ${ledger.rows.length} counted lengths balanced`,
+    );
+  } finally {
+    await db.close();
+  }
+});
