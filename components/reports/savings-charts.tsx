@@ -11,6 +11,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { formatCustomerDate } from '@/lib/format/customer-date';
 import { formatPence } from '@/lib/format/money';
 import type { SavingsReport } from '@/lib/reports/savings-report';
 import { ChartPanel } from './chart-panel';
@@ -44,7 +45,8 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
         {
           key: 'plannedAt',
           label: 'Planned',
-          format: (v) => new Date(v as unknown as string).toLocaleDateString('en-GB'),
+          // The day in UTC, as the reports count days: the same on the server and in any browser.
+          format: (v) => formatCustomerDate(new Date(v as unknown as string).toISOString()),
         },
         { key: 'baselineBoards', label: 'Longest-first boards' },
         { key: 'stockBoards', label: 'Kerfwise boards' },

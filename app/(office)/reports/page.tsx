@@ -1,7 +1,9 @@
 import type { Metadata } from 'next';
+import { Suspense } from 'react';
 import { HeadlineFigures } from '@/components/reports/headline-figures';
 import { OffcutCharts } from '@/components/reports/offcut-charts';
 import { ReportRangeForm } from '@/components/reports/report-range-form';
+import { ReportSkeleton } from '@/components/reports/report-skeleton';
 import { SavingsCharts } from '@/components/reports/savings-charts';
 import { StockReportView } from '@/components/reports/stock-report-view';
 import { WasteCharts } from '@/components/reports/waste-charts';
@@ -14,6 +16,13 @@ import { getYardSettings } from '@/lib/yard/yard-settings';
 
 export const metadata: Metadata = { title: 'Reports' };
 
+type Reports = {
+  waste: ReturnType<typeof getWasteReport>;
+  offcuts: ReturnType<typeof getOffcutReport>;
+  savings: ReturnType<typeof getSavingsReport>;
+  stock: ReturnType<typeof getStockReport>;
+};
+
 export default async function ReportsPage({
   searchParams,
 }: {
@@ -21,13 +30,13 @@ export default async function ReportsPage({
 }) {
   await requirePageUser('reports:read');
   const { range, problem } = readReportRange(await searchParams);
-  const [waste, offcuts, savings, stock, settings] = await Promise.all([
-    getWasteReport(range),
-    getOffcutReport(range),
-    getSavingsReport(range),
-    getStockReport(range),
-    getYardSettings(),
-  ]);
+  // Started together, shown as each arrives: every report streams in its own Suspense boundary.
+  const reports: Reports = {
+    waste: getWasteReport(range),
+    offcuts: getOffcutReport(range),
+    savings: getSavingsReport(range),
+    stock: getStockReport(range),
+  };
   const today = readReportRange({}).range.to;
   return (
     <>
@@ -38,24 +47,53 @@ export default async function ReportsPage({
       <div className="space-y-8">
         <ReportRangeForm range={range} today={today} />
         {problem && <Notice tone="warning">{problem}</Notice>}
-        <HeadlineFigures waste={waste} offcuts={offcuts} savings={savings} />
-        <section className="space-y-3">
-          <h2 className="text-2xl font-bold">Waste and yield</h2>
-          <WasteCharts report={waste} />
-        </section>
-        <section className="space-y-3">
-          <h2 className="text-2xl font-bold">Offcuts</h2>
-          <OffcutCharts report={offcuts} clearAfterDays={settings.clearOffcutsAfterDays} />
-        </section>
-        <section className="space-y-3">
-          <h2 className="text-2xl font-bold">Savings</h2>
-          <SavingsCharts report={savings} />
-        </section>
-        <section className="space-y-3">
-          <h2 className="text-2xl font-bold">Stock</h2>
-          <StockReportView report={stock} />
-        </section>
+        <Suspense fallback={<ReportSkeleton />}>
+          <Headline reports={reports} />
+        </Suspense>
+        <ReportSection title="Waste and yield">
+          <Waste reports={reports} />
+        </ReportSection>
+        <ReportSection title="Offcuts">
+          <Offcuts reports={reports} />
+        </ReportSection>
+        <ReportSection title="Savings">
+          <Savings reports={reports} />
+        </ReportSection>
+        <ReportSection title="Stock">
+          <Stock reports={reports} />
+        </ReportSection>
       </div>
     </>
   );
+}
+
+function ReportSection({ title, children }: { title: string; children: React.ReactNode }) {
+  return (
+    <section className="space-y-3">
+      <h2 className="text-2xl font-bold">{title}</h2>
+      <Suspense fallback={<ReportSkeleton />}>{children}</Suspense>
+    </section>
+  );
+}
+
+async function Headline({ reports }: { reports: Reports }) {
+  const [waste, offcuts, savings] = await Promise.all([reports.waste, reports.offcuts, reports.savings]);
+  return <HeadlineFigures waste={waste} offcuts={offcuts} savings={savings} />;
+}
+
+async function Waste({ reports }: { reports: Reports }) {
+  return <WasteCharts report={await reports.waste} />;
+}
+
+async function Offcuts({ reports }: { reports: Reports }) {
+  const [report, settings] = await Promise.all([reports.offcuts, getYardSettings()]);
+  return <OffcutCharts report={report} clearAfterDays={settings.clearOffcutsAfterDays} />;
+}
+
+async function Savings({ reports }: { reports: Reports }) {
+  return <SavingsCharts report={await reports.savings} />;
+}
+
+async function Stock({ reports }: { reports: Reports }) {
+  return <StockReportView report={await reports.stock} />;
 }
