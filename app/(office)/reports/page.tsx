@@ -32,10 +32,10 @@ export default async function ReportsPage({
   const { range, problem } = readReportRange(await searchParams);
   // Started together, shown as each arrives: every report streams in its own Suspense boundary.
   const reports: Reports = {
-    waste: getWasteReport(range),
-    offcuts: getOffcutReport(range),
-    savings: getSavingsReport(range),
-    stock: getStockReport(range),
+    waste: started(getWasteReport(range)),
+    offcuts: started(getOffcutReport(range)),
+    savings: started(getSavingsReport(range)),
+    stock: started(getStockReport(range)),
   };
   const today = readReportRange({}).range.to;
   return (
@@ -65,6 +65,13 @@ export default async function ReportsPage({
       </div>
     </>
   );
+}
+
+/** A read started now and awaited later by its section: a failure reaches that section's error page
+ *  then, and is never reported as unhandled before the section awaits it. */
+function started<T>(read: Promise<T>): Promise<T> {
+  read.catch(() => undefined);
+  return read;
 }
 
 function ReportSection({ title, children }: { title: string; children: React.ReactNode }) {
