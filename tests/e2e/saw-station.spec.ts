@@ -85,6 +85,8 @@ test.describe('the saw station in portrait (768×1024, touch)', () => {
     page,
     browser,
   }) => {
+    // A long walk (re-plan, every board, labels, rack): more than the default minute on a busy machine.
+    test.setTimeout(180_000);
     // The yard hand releases J-1003, which uses rack offcuts.
     const office = await officePage(browser);
     const { jobs } = await (await office.request.get('/api/jobs?q=J-1003')).json();
