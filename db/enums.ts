@@ -26,6 +26,7 @@ export const MOVEMENT_KINDS = [
   'receipt', // a delivery of stock lengths
   'stocktake', // a counted correction of on-hand stock
   'stock_cut', // a stock length taken to the saw for a plan
+  'counted_short', // a board cut that the count said was not there: +1 so on hand stays 0; the owner recounts
   'offcut_made', // a kept remainder tagged and put on the rack
   'offcut_imported', // an existing rack piece entered from a CSV
   'offcut_reserved',

@@ -6,6 +6,7 @@ import { useDropzone } from 'react-dropzone';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { xlsxToTsv } from '@/lib/cut-lists/read-xlsx';
 import { buildYardCutListTemplate } from '@/lib/cut-lists/yard-template';
 import { cn } from '@/lib/cn';
 import { ApiError } from '@/lib/queries/fetch-json';
@@ -17,9 +18,11 @@ import { ImportErrors, type RowError } from './import-errors';
 type Outcome =
   { kind: 'done'; text: string } | { kind: 'errors'; summary: string; errors: RowError[] } | null;
 
+const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
+
 /**
- * Import a cut list from a CSV file (drop or pick) or text pasted from a spreadsheet. The file is
- * read and sent as text; the server checks every row, so the page never parses large files itself.
+ * Import a cut list from a CSV or .xlsx file (drop or pick) or text pasted from a spreadsheet. A
+ * workbook's first sheet is turned into tab-separated text here; the server checks every row.
  */
 export function CutListImport({ jobId }: { jobId: number }) {
   const queryClient = useQueryClient();
@@ -55,9 +58,25 @@ export function CutListImport({ jobId }: { jobId: number }) {
   const dropzone = useDropzone({
     multiple: false,
     maxSize: MAX_IMPORT_BYTES,
-    accept: { 'text/csv': ['.csv'], 'text/plain': ['.txt', '.tsv'], 'text/tab-separated-values': ['.tsv'] },
+    accept: {
+      'text/csv': ['.csv'],
+      'text/plain': ['.txt', '.tsv'],
+      'text/tab-separated-values': ['.tsv'],
+      [XLSX]: ['.xlsx'],
+    },
     disabled: busy,
-    onDropAccepted: async ([file]) => send(await file.text(), file.name),
+    onDropAccepted: async ([file]) => {
+      if (!file.name.toLowerCase().endsWith('.xlsx')) return send(await file.text(), file.name);
+      const text = await xlsxToTsv(await file.arrayBuffer()).catch(() => null);
+      if (text !== null) return send(text, file.name);
+      setOutcome({
+        kind: 'errors',
+        summary: `${file.name} was not read.`,
+        errors: [
+          { line: 1, column: null, message: 'This is not a workbook we can open; save it as .xlsx or CSV.' },
+        ],
+      });
+    },
     onDropRejected: ([rejection]) =>
       setOutcome({
         kind: 'errors',
@@ -84,7 +103,7 @@ export function CutListImport({ jobId }: { jobId: number }) {
       >
         <input {...dropzone.getInputProps()} aria-label="Cut list file" />
         <p className="font-semibold">
-          {busy ? 'Checking every row…' : 'Drop a cut list CSV here, or click to choose one'}
+          {busy ? 'Checking every row…' : 'Drop a cut list (CSV or .xlsx) here, or click to choose one'}
         </p>
         <p className="mt-1 text-sm text-bark-soft">
           Columns section, length, quantity, label, note. Lengths in mm (2400), metres (2.4m) or feet-inches
@@ -132,7 +151,23 @@ export function CutListImport({ jobId }: { jobId: number }) {
         </div>
       </details>
       {outcome?.kind === 'done' && <Notice data-testid="import-done">{outcome.text}</Notice>}
-      {outcome?.kind === 'errors' && <ImportErrors summary={outcome.summary} errors={outcome.errors} />}
+      {outcome?.kind === 'errors' && (
+        <div className="grid gap-4 md:grid-cols-[1fr_16rem]">
+          <ImportErrors summary={outcome.summary} errors={outcome.errors} />
+          {outcome.errors.some((e) => e.column === 'section') && sections.data && (
+            <section className="rounded-lg border-2 border-grain bg-white p-3" data-testid="valid-sections">
+              <h3 className="font-semibold">Sections this yard cuts</h3>
+              <ul className="mt-1 space-y-0.5 text-sm">
+                {sections.data.map((s) => (
+                  <li key={s.id}>
+                    <span className="font-mono font-semibold">{s.code}</span> {s.name}
+                  </li>
+                ))}
+              </ul>
+            </section>
+          )}
+        </div>
+      )}
     </div>
   );
 }

@@ -13,6 +13,7 @@ export const officeNav: NavItem[] = [
   { href: '/rack', label: 'Offcut rack', action: 'offcuts:edit' },
   { href: '/stock', label: 'Stock', action: 'stock:receive' },
   { href: '/reports', label: 'Reports', action: 'reports:read' },
+  { href: '/outbox', label: 'Outbox', action: 'mail:outbox' },
   { href: '/saw', label: 'Saw queue', action: 'saw:read' },
   { href: '/users', label: 'Users', action: 'users:manage' },
   { href: '/settings', label: 'Yard settings', action: 'settings:edit' },

@@ -45,7 +45,8 @@ export function BoardDiagram({
               height={HEIGHT}
               fill={INK}
             >
-              <title>kerf {format(part.lengthMm)}</title>
+              {/* One string child: React renders a <title> with several children empty on the server. */}
+              <title>{`kerf ${format(part.lengthMm)}`}</title>
             </rect>
           );
         }

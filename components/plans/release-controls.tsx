@@ -25,12 +25,15 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
   const [taken, setTaken] = useState<Taken[]>([]);
   const [needsPayment, setNeedsPayment] = useState(false);
   const [reason, setReason] = useState('');
+  // The stock count cannot cover the plan: the yard hand confirms before it goes to the saw.
+  const [stockShort, setStockShort] = useState(false);
 
   async function act(request: () => Promise<unknown>) {
     setBusy(true);
     setError(null);
     setTaken([]);
     setNeedsPayment(false);
+    setStockShort(false);
     try {
       await request();
       await Promise.all([
@@ -41,9 +44,11 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
     } catch (e) {
       setError((e as Error).message);
       if (e instanceof ApiError && e.status === 409) {
-        const details = (e.body as { details?: { offcuts?: Taken[]; missing?: string } })?.details;
+        const details = (e.body as { details?: { offcuts?: Taken[]; missing?: string; reason?: string } })
+          ?.details;
         setTaken(details?.offcuts ?? []);
         setNeedsPayment(Boolean(details?.missing));
+        setStockShort(details?.reason === 'stock_short');
       }
     } finally {
       setBusy(false);
@@ -115,12 +120,23 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
               </Button>
             </>
           )}
+          {stockShort && (
+            <Button
+              className="mt-2"
+              variant="secondary"
+              disabled={busy}
+              onClick={() => act(() => releasePlanRequest(plan.id, { confirmShortfall: true }))}
+              data-testid="confirm-shortfall"
+            >
+              The boards are in the yard: release anyway
+            </Button>
+          )}
           {needsPayment && isOwner && (
             <form
               className="mt-3 flex flex-wrap items-end gap-2"
               onSubmit={(e) => {
                 e.preventDefault();
-                void act(() => releasePlanRequest(plan.id, reason));
+                void act(() => releasePlanRequest(plan.id, { override: reason }));
               }}
             >
               <label className="flex min-w-64 flex-1 flex-col text-sm font-semibold text-bark">

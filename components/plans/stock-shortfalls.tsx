@@ -31,7 +31,10 @@ export function StockShortfalls({ planId }: { planId: number }) {
           </li>
         ))}
       </ul>
-      <p className="mt-1">Receive more stock, or plan again without that length, before releasing.</p>
+      <p className="mt-1">
+        Receive more stock or plan again without that length; release anyway only once you have seen the
+        boards in the yard.
+      </p>
     </Notice>
   );
 }

@@ -45,6 +45,7 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
         {
           key: 'plannedAt',
           label: 'Planned',
+          // The day in UTC, as the reports count days: the same on the server and in any browser.
           format: (v) => formatCustomerDate(new Date(v as unknown as string).toISOString()),
         },
         { key: 'baselineBoards', label: 'Longest-first boards' },

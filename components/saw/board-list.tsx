@@ -2,8 +2,9 @@
 import { sawLength } from './format-saw-length';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
+import { TagCode } from './tag-code';
 
-const STATE = { pending: 'to cut', done: 'cut', defective: 'bad' } as const;
+const STATE = { pending: 'to cut', done: 'cut', defective: 'bad, not cut' } as const;
 
 export function BoardList({
   boards,
@@ -35,12 +36,20 @@ export function BoardList({
           >
             <span className="w-7 font-bold">{b.boardNo}</span>
             <span className="flex-1 leading-tight">
-              <span className="block">{b.source === 'offcut' ? `Offcut ${b.offcut?.tag}` : 'New stock'}</span>
+              <span className="block">
+                {b.source === 'offcut' && b.offcut ? (
+                  <>
+                    Offcut <TagCode tag={b.offcut.tag} />
+                  </>
+                ) : (
+                  'New stock'
+                )}
+              </span>
               <span className="block text-sm">
                 {sawLength(b.lengthMm, unit)} · {b.pieces.length} {b.pieces.length === 1 ? 'piece' : 'pieces'}
               </span>
             </span>
-            <span className="text-sm font-semibold uppercase">{STATE[b.status]}</span>
+            <span className="text-right text-sm font-semibold uppercase">{STATE[b.status]}</span>
           </button>
         </li>
       ))}

@@ -3,6 +3,7 @@ import { sawLength } from './format-saw-length';
 import { angleLine } from '@/lib/plans/angle-line';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
+import { TagCode } from './tag-code';
 
 type Unit = 'mm' | 'imperial';
 
@@ -12,7 +13,7 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
     <p className="text-2xl font-bold text-bark" data-testid="fetch-line">
       {board.source === 'offcut' && board.offcut ? (
         <>
-          Fetch offcut <span className="rounded bg-amber px-2 text-white">{board.offcut.tag}</span> from{' '}
+          Fetch offcut <TagCode tag={board.offcut.tag} className="rounded bg-amber px-2 text-white" /> from{' '}
           {board.offcut.location || 'the rack'}
           <span className="block text-lg font-semibold text-bark-soft">
             {board.section.name} · {len(board.lengthMm)} · no trim
@@ -47,7 +48,15 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
         <span className="text-base text-bark-soft">Saw on the waste side of each mark.</span>
       </li>
       {board.pieces.map((p, i) => {
-        const state = board.status !== 'pending' || i < nextCut ? 'done' : i === nextCut ? 'next' : 'todo';
+        // A bad board's pieces were never cut: they show as not cut, not struck through.
+        const state =
+          board.status === 'defective'
+            ? 'not-cut'
+            : board.status === 'done' || i < nextCut
+              ? 'done'
+              : i === nextCut
+                ? 'next'
+                : 'todo';
         const angle = angleLine(p, len);
         return (
           <li
@@ -58,7 +67,7 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
               'grid min-h-14 grid-cols-[2rem_1fr_auto] items-center gap-x-3 rounded-lg border-2 px-3 py-1',
               state === 'next' && 'border-spruce bg-spruce-light ring-4 ring-spruce/30',
               state === 'done' && 'border-grain bg-shaving text-bark-soft line-through decoration-2',
-              state === 'todo' && 'border-grain bg-white',
+              (state === 'todo' || state === 'not-cut') && 'border-grain bg-white',
             )}
           >
             <span className="text-lg font-bold">{i + 1}</span>
@@ -89,10 +98,15 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
 }
 
 export function LeftOver({ board, unit }: { board: SawBoard; unit: Unit }) {
-  if (board.remainderMm <= 0) return <p className="text-lg font-semibold">Nothing left over.</p>;
+  if (board.remainderMm <= 0)
+    return (
+      <p className="text-lg font-semibold" data-testid="left-over">
+        Nothing left over.
+      </p>
+    );
   const len = sawLength(board.remainderMm, unit);
   return board.keepRemainder ? (
-    <p className="rounded-lg bg-amber px-4 py-3 text-xl font-bold text-white" data-testid="left-over">
+    <p className="rounded-lg bg-amber px-4 py-2 text-xl font-bold text-white" data-testid="left-over">
       Keep {len}: it gets a tag when you confirm — label it and rack it.
       {board.section.treated && (
         <span className="block text-base font-semibold">
@@ -101,7 +115,7 @@ export function LeftOver({ board, unit }: { board: SawBoard; unit: Unit }) {
       )}
     </p>
   ) : (
-    <p className="rounded-lg bg-brick px-4 py-3 text-xl font-bold text-white" data-testid="left-over">
+    <p className="rounded-lg bg-brick px-4 py-2 text-xl font-bold text-white" data-testid="left-over">
       Scrap {len}
       {board.section.treated
         ? ' — treated: into the treated-waste skip; never burnt, never bedding, mulch or compost'

@@ -3,6 +3,7 @@ import { Button } from '@/components/ui/button';
 import type { SawBoard } from '@/lib/queries/saw';
 import { BoardDrawing } from './board-drawing';
 import { CutList, FetchLine, LeftOver } from './board-steps';
+import { SectionChange } from './section-change';
 
 type Props = {
   board: SawBoard;
@@ -14,6 +15,10 @@ type Props = {
   onNextCut: () => void;
   onDone: () => void;
   onDefect: () => void;
+  /** The section of the board before this one, when it differs. */
+  sectionChangedFrom: string | null;
+  /** Shown above the buttons, e.g. the question about a board the count says is gone. */
+  question?: React.ReactNode;
 };
 
 export function CurrentBoard({
@@ -26,6 +31,8 @@ export function CurrentBoard({
   onNextCut,
   onDone,
   onDefect,
+  sectionChangedFrom,
+  question,
 }: Props) {
   const allMarked = nextCut >= board.pieces.length;
   return (
@@ -37,32 +44,40 @@ export function CurrentBoard({
       <h2 className="text-lg font-bold uppercase tracking-wide text-bark-soft">
         Board {board.boardNo} of {total}
       </h2>
+      {sectionChangedFrom && <SectionChange from={sectionChangedFrom} to={board.section.name} />}
       <FetchLine board={board} unit={unit} />
       <BoardDrawing board={board} kerfMm={kerfMm} nextCut={allMarked ? null : nextCut} />
       <CutList board={board} unit={unit} nextCut={nextCut} />
-      <LeftOver board={board} unit={unit} />
-      <div className="sticky bottom-0 -mx-4 grid grid-cols-[1fr_1fr_auto] gap-3 border-t-2 border-grain bg-white px-4 py-3">
-        <Button
-          variant="secondary"
-          size="lg"
-          className="min-h-16 text-xl"
-          onClick={onNextCut}
-          disabled={allMarked}
-        >
-          {allMarked ? 'All cuts made' : `Cut ${nextCut + 1} made`}
-        </Button>
-        <Button
-          size="lg"
-          className="min-h-16 text-xl"
-          onClick={onDone}
-          disabled={busy}
-          data-testid="board-done"
-        >
-          Board {board.boardNo} done
-        </Button>
-        <Button variant="danger" size="lg" className="min-h-16" onClick={onDefect} disabled={busy}>
-          Board is bad…
-        </Button>
+      {/* Keep or scrap sits in the sticky bar, so the bar can never cover it. */}
+      <div
+        className="sticky bottom-0 -mx-4 space-y-3 border-t-2 border-grain bg-white px-4 py-3"
+        data-testid="action-bar"
+      >
+        {question}
+        <LeftOver board={board} unit={unit} />
+        <div className="grid grid-cols-[1fr_1fr_auto] gap-3">
+          <Button
+            variant="secondary"
+            size="lg"
+            className="min-h-16 text-xl"
+            onClick={onNextCut}
+            disabled={allMarked}
+          >
+            {allMarked ? 'All cuts made' : `Cut ${nextCut + 1} made`}
+          </Button>
+          <Button
+            size="lg"
+            className="min-h-16 text-xl"
+            onClick={onDone}
+            disabled={busy}
+            data-testid="board-done"
+          >
+            Board {board.boardNo} done
+          </Button>
+          <Button variant="danger" size="lg" className="min-h-16" onClick={onDefect} disabled={busy}>
+            Board is bad…
+          </Button>
+        </div>
       </div>
     </section>
   );

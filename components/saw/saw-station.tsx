@@ -5,11 +5,14 @@ import { useState } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Notice } from '@/components/ui/notice';
 import { Button } from '@/components/ui/button';
+import { ApiError } from '@/lib/queries/fetch-json';
 import { confirmBoardRequest, reportDefectRequest, sawPlanQuery, undoBoardRequest } from '@/lib/queries/saw';
 import type { ReportDefectBody } from '@/lib/validations/saw';
+import { BoardCountQuestion } from './board-count-question';
 import { BoardList } from './board-list';
 import { CurrentBoard } from './current-board';
 import { DefectForm } from './defect-form';
+import { PastBoard } from './past-board';
 import { SafetyLine } from './safety-line';
 import { StationMessage, type Message } from './station-message';
 
@@ -20,15 +23,19 @@ export function SawStation({ planId }: { planId: number }) {
   const [nextCut, setNextCut] = useState(0);
   const [defectOpen, setDefectOpen] = useState(false);
   const [message, setMessage] = useState<Message | null>(null);
+  // The stock count says this board's length is gone: ask before recording the cut.
+  const [countQuestion, setCountQuestion] = useState<{ boardNo: number; text: string } | null>(null);
   const refresh = () => client.invalidateQueries({ queryKey: ['saw'] });
   const moveOn = () => {
     setPicked(null);
     setNextCut(0);
     setDefectOpen(false);
+    setCountQuestion(null);
   };
 
   const done = useMutation({
-    mutationFn: (boardNo: number) => confirmBoardRequest(planId, boardNo),
+    mutationFn: ({ boardNo, boardThere }: { boardNo: number; boardThere?: true }) =>
+      confirmBoardRequest(planId, boardNo, boardThere),
     // Fresh boards first, then the message: the screen never shows a confirmed board as the next one.
     onSuccess: async (r) => {
       await refresh();
@@ -40,7 +47,11 @@ export function SawStation({ planId }: { planId: number }) {
       });
       moveOn();
     },
-    onError: (e) => setMessage({ kind: 'error', text: e.message }),
+    onError: (e, { boardNo }) => {
+      const details = e instanceof ApiError ? (e.body as { details?: { reason?: string } }).details : null;
+      if (details?.reason === 'board_not_counted') setCountQuestion({ boardNo, text: e.message });
+      else setMessage({ kind: 'error', text: e.message });
+    },
   });
   const undo = useMutation({
     mutationFn: () => undoBoardRequest(planId),
@@ -73,6 +84,11 @@ export function SawStation({ planId }: { planId: number }) {
   const pending = plan.boards.filter((b) => b.status === 'pending');
   const board = plan.boards.find((b) => b.boardNo === picked) ?? pending[0] ?? null;
   const treated = plan.boards.some((b) => b.section.treated);
+  const before = board ? plan.boards.find((b) => b.boardNo === board.boardNo - 1) : undefined;
+  const sectionChangedFrom =
+    board && before && before.section.id !== board.section.id ? before.section.name : null;
+  const cut = plan.boards.filter((b) => b.status === 'done').length;
+  const bad = plan.boards.filter((b) => b.status === 'defective').length;
 
   return (
     <div className="space-y-4">
@@ -87,7 +103,7 @@ export function SawStation({ planId }: { planId: number }) {
           {plan.job.reference} · {plan.job.customerName}
         </h1>
         <p className="text-xl font-bold" data-testid="saw-progress">
-          {plan.progress.boardsDone} of {plan.progress.boards} boards cut
+          {cut} of {plan.boards.length} boards cut{bad > 0 ? ` · ${bad} bad, not cut` : ''}
         </p>
       </header>
       <SafetyLine treated={treated} />
@@ -112,11 +128,29 @@ export function SawStation({ planId }: { planId: number }) {
               nextCut={nextCut}
               busy={done.isPending}
               onNextCut={() => setNextCut((n) => n + 1)}
-              onDone={() => done.mutate(board.boardNo)}
+              onDone={() => done.mutate({ boardNo: board.boardNo })}
               onDefect={() => setDefectOpen(true)}
+              sectionChangedFrom={sectionChangedFrom}
+              question={
+                countQuestion?.boardNo === board.boardNo && (
+                  <BoardCountQuestion
+                    text={countQuestion.text}
+                    busy={done.isPending}
+                    onYes={() => done.mutate({ boardNo: board.boardNo, boardThere: true })}
+                    onNo={() => setCountQuestion(null)}
+                  />
+                )
+              }
             />
+          ) : board ? (
+            <PastBoard board={board} unit={plan.displayUnit} onNext={moveOn} />
           ) : (
-            <AllCut planId={planId} hasBoards={plan.boards.length > 0} onUndo={() => undo.mutate()} />
+            <AllCut
+              planId={planId}
+              hasBoards={plan.boards.length > 0}
+              anyBad={bad > 0}
+              onUndo={() => undo.mutate()}
+            />
           )}
         </div>
         <BoardList
@@ -134,14 +168,28 @@ export function SawStation({ planId }: { planId: number }) {
   );
 }
 
-function AllCut({ planId, hasBoards, onUndo }: { planId: number; hasBoards: boolean; onUndo: () => void }) {
+function AllCut({
+  planId,
+  hasBoards,
+  anyBad,
+  onUndo,
+}: {
+  planId: number;
+  hasBoards: boolean;
+  anyBad: boolean;
+  onUndo: () => void;
+}) {
   return (
     <section
       className="space-y-4 rounded-xl border-2 border-spruce bg-spruce-light p-6"
       data-testid="plan-finished"
     >
       <h2 className="text-3xl font-bold text-spruce-dark">
-        {hasBoards ? 'Every board is cut.' : 'This plan has no boards.'}
+        {!hasBoards
+          ? 'This plan has no boards.'
+          : anyBad
+            ? 'Every sound board is cut.'
+            : 'Every board is cut.'}
       </h2>
       <p className="text-lg">Label and rack the kept offcuts, then take the next job from the queue.</p>
       <div className="flex flex-wrap gap-3">

@@ -2,6 +2,7 @@
 import Link from 'next/link';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { TagCode } from './tag-code';
 
 export type Message =
   | { kind: 'done'; boardNo: number; offcut: { id: number; tag: string } | null; finished: boolean }
@@ -21,7 +22,8 @@ const labelLink = (offcut: { id: number; tag: string }) => (
     className="inline-flex min-h-12 items-center rounded-lg bg-amber px-4 font-bold text-white"
     data-testid="print-label"
   >
-    Print label {offcut.tag}
+    Print label&nbsp;
+    <TagCode tag={offcut.tag} />
   </Link>
 );
 
@@ -60,7 +62,13 @@ export function StationMessage({
   return (
     <Notice className="flex flex-wrap items-center gap-3" data-testid="station-message">
       <span className="flex-1 text-lg font-semibold">
-        Board {message.boardNo} done.{message.offcut ? ` Kept offcut tagged ${message.offcut.tag}.` : ''}
+        Board {message.boardNo} done.
+        {message.offcut && (
+          <>
+            {' '}
+            Kept offcut tagged <TagCode tag={message.offcut.tag} />.
+          </>
+        )}
       </span>
       {message.offcut && labelLink(message.offcut)}
       <Button variant="secondary" onClick={onUndo} disabled={undoBusy}>

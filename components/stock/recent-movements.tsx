@@ -9,9 +9,16 @@ import { stockMovementsQuery } from '@/lib/queries/stock';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { cn } from '@/lib/cn';
 
-const KIND_NAMES: Record<string, string> = { receipt: 'Delivery', stocktake: 'Stocktake' };
+const KIND_NAMES: Record<string, string> = {
+  receipt: 'Delivery',
+  stocktake: 'Stocktake',
+  stock_cut: 'Cut at the saw',
+  counted_short: 'Cut, count was short',
+  board_undone: 'Cut taken back',
+  defect: 'Bad board',
+};
 
-/** The audit trail of deliveries and counts: who, when and why. */
+/** The audit trail of deliveries, counts and what the saw used: who, when and why. */
 export function RecentMovements({ unit }: { unit: DisplayUnit }) {
   const movements = useQuery(stockMovementsQuery());
   if (movements.error) return <Notice tone="error">{movements.error.message}</Notice>;

@@ -8,18 +8,34 @@ import { ROLES, type Role } from '@/db/enums';
 import { updateUserRequest, type UserRow as User } from '@/lib/queries/users';
 import { ROLE_NAMES } from './role-names';
 
+type Changes = Parameters<typeof updateUserRequest>[1];
+/** A role change or a disabling waits here until the owner confirms it. */
+type Pending = { changes: Changes; question: string; yes: string; saved: string };
+
 export function UserRow({ user, onError }: { user: User; onError: (message: string | null) => void }) {
   const queryClient = useQueryClient();
   const [password, setPassword] = useState('');
+  const [pending, setPending] = useState<Pending | null>(null);
+  const [saved, setSaved] = useState<string | null>(null);
   const update = useMutation({
-    mutationFn: (changes: Parameters<typeof updateUserRequest>[1]) => updateUserRequest(user.id, changes),
-    onSuccess: () => {
+    mutationFn: ({ changes }: { changes: Changes; saved: string }) => updateUserRequest(user.id, changes),
+    onSuccess: (_, { saved }) => {
       onError(null);
       setPassword('');
+      setPending(null);
+      setSaved(saved);
       return queryClient.invalidateQueries({ queryKey: ['users'] });
     },
     onError: (error) => onError(error.message),
   });
+  const save = (changes: Changes, savedText: string) => {
+    setSaved(null);
+    update.mutate({ changes, saved: savedText });
+  };
+  const ask = (next: Pending) => {
+    setSaved(null);
+    setPending(next);
+  };
 
   return (
     <tr className="border-t border-shaving align-middle" data-testid={`user-row-${user.email}`}>
@@ -32,8 +48,16 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
           aria-label={`Role of ${user.name}`}
           className={inputClass}
           value={user.role}
-          disabled={update.isPending}
-          onChange={(e) => update.mutate({ role: e.target.value as Role })}
+          disabled={update.isPending || pending !== null}
+          onChange={(e) => {
+            const role = e.target.value as Role;
+            ask({
+              changes: { role },
+              question: `Change ${user.name}'s role to ${ROLE_NAMES[role].toLowerCase()}? What they may see and do changes at their next page.`,
+              yes: 'Change the role',
+              saved: `Saved: ${user.name} is now ${ROLE_NAMES[role].toLowerCase()}.`,
+            });
+          }}
         >
           {ROLES.map((r) => (
             <option key={r} value={r}>
@@ -47,7 +71,7 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
           className="flex gap-2"
           onSubmit={(e) => {
             e.preventDefault();
-            update.mutate({ password });
+            save({ password }, `Saved: ${user.name}'s new password.`);
           }}
         >
           <input
@@ -72,18 +96,53 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
               className="size-5"
               checked={user.canUseSaw}
               disabled={update.isPending}
-              onChange={(e) => update.mutate({ canUseSaw: e.target.checked })}
+              onChange={(e) =>
+                save(
+                  { canUseSaw: e.target.checked },
+                  `Saved: ${user.name} ${e.target.checked ? 'may' : 'may not'} use the saw screen.`,
+                )
+              }
             />
             May use the saw screen
           </label>
         )}
         <Button
           variant={user.disabled ? 'primary' : 'danger'}
-          disabled={update.isPending}
-          onClick={() => update.mutate({ disabled: !user.disabled })}
+          disabled={update.isPending || pending !== null}
+          onClick={() =>
+            user.disabled
+              ? save({ disabled: false }, `Saved: ${user.name} can sign in again.`)
+              : ask({
+                  changes: { disabled: true },
+                  question: `Disable ${user.name}'s account? They are signed out and can no longer sign in.`,
+                  yes: 'Disable the account',
+                  saved: `Saved: ${user.name}'s account is disabled.`,
+                })
+          }
         >
           {user.disabled ? 'Enable' : 'Disable'}
         </Button>
+        {pending && (
+          <div
+            role="alertdialog"
+            aria-label={pending.question}
+            className="mt-2 space-y-2"
+            data-testid="user-confirm"
+          >
+            <p className="text-sm font-semibold">{pending.question}</p>
+            <div className="flex flex-wrap gap-2">
+              <Button disabled={update.isPending} onClick={() => save(pending.changes, pending.saved)}>
+                {pending.yes}
+              </Button>
+              <Button variant="secondary" onClick={() => setPending(null)}>
+                Keep as it is
+              </Button>
+            </div>
+          </div>
+        )}
+        <p role="status" className="mt-2 text-sm font-semibold text-spruce-dark" data-testid="user-saved">
+          {saved}
+        </p>
       </td>
     </tr>
   );

@@ -1,5 +1,5 @@
 import type { ImportError, ImportResult, RowResult } from './import-types';
-import { matchColumns, type ColumnSpec } from './match-columns';
+import { matchColumns, type ColumnIndexes, type ColumnSpec } from './match-columns';
 import { readCsvRows } from './read-csv-rows';
 
 /** Far more than any cut list; stops a wrong file from tying up the server. */
@@ -13,6 +13,8 @@ type ImportRowsInput<T> = {
   /** What one item is called in messages, e.g. "piece" or "offcut". */
   itemName: string;
   readRow: (cell: RowCells, line: number) => RowResult<T>;
+  /** Recognises the columns of rows pasted without a header; null when they are not clear. */
+  guessColumns?: (rows: string[][]) => ColumnIndexes | null;
 };
 
 /**
@@ -24,15 +26,23 @@ export function importRows<T>({
   columns,
   itemName,
   readRow,
+  guessColumns,
 }: ImportRowsInput<T>): ImportResult<T & { line: number }> {
   if (typeof csvText !== 'string' || csvText.trim() === '') {
     return { ok: false, errors: [{ line: 1, column: null, message: 'The file is empty.' }] };
   }
   const { rows, problems } = readCsvRows(csvText);
   const errors: ImportError[] = problems.map((problem) => ({ ...problem, column: null }));
-  const [header, ...body] = rows;
+  const [header] = rows;
   if (!header) return { ok: false, errors: [{ line: 1, column: null, message: 'The file is empty.' }] };
-  const { indexes, errors: headerErrors } = matchColumns(header.cells, columns, header.line);
+  let body = rows.slice(1);
+  let { indexes, errors: headerErrors } = matchColumns(header.cells, columns, header.line);
+  // No header at all (no cell names a column): rows pasted straight from a spreadsheet.
+  const noHeader = headerErrors.length > 0 && Object.keys(indexes).length === 0;
+  const guessed = noHeader && guessColumns ? guessColumns(rows.map((r) => r.cells)) : null;
+  if (guessed) {
+    [indexes, headerErrors, body] = [guessed, [], rows];
+  }
   if (headerErrors.length > 0) return { ok: false, errors: [...headerErrors, ...errors] };
   if (body.length === 0)
     errors.push({
@@ -53,7 +63,9 @@ export function importRows<T>({
     };
   }
 
-  const width = Math.max(...Object.values(indexes).map((index) => (index ?? 0) + 1), header.cells.length);
+  const width = guessed
+    ? Math.max(...rows.map((r) => r.cells.length))
+    : Math.max(...Object.values(indexes).map((index) => (index ?? 0) + 1), header.cells.length);
   const items: Array<T & { line: number }> = [];
   for (const row of body) {
     if (row.cells.slice(width).some((cell) => cell.trim() !== '')) {

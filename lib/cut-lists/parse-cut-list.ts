@@ -2,6 +2,7 @@ import { createFieldCollector, readLengthCell, readQuantityCell, readTextCell } 
 import { importRows } from './import-rows';
 import type { ImportOptions, ImportResult } from './import-types';
 import type { ColumnSpec } from './match-columns';
+import { guessCutListColumns } from './guess-columns';
 import { createSectionLookup } from './section-lookup';
 
 export type CutListItem = {
@@ -28,7 +29,8 @@ export const CUT_LIST_COLUMNS: ColumnSpec[] = [
 ];
 
 /**
- * Reads a cut list (CSV, or tab-separated text pasted from a spreadsheet) into line items.
+ * Reads a cut list (CSV, or tab-separated text pasted from a spreadsheet, with or without a header
+ * row when its columns are recognisable) into line items.
  * Lengths may be mm, metres or feet-inches. All or nothing: any bad row fails the import and every
  * bad row is listed with its line and column.
  */
@@ -38,6 +40,7 @@ export function parseCutList(csvText: string, options: ImportOptions): ImportRes
     csvText,
     columns: CUT_LIST_COLUMNS,
     itemName: 'piece',
+    guessColumns: (rows) => guessCutListColumns(rows, (text) => findSection(text).ok),
     readRow: (cell) => {
       const fields = createFieldCollector();
       const section = findSection(cell('section'));

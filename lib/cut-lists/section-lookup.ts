@@ -1,4 +1,5 @@
 import type { SectionRef } from './import-types';
+import { nearestSection } from './nearest-section';
 
 /** "47 × 100  C24" and "47x100 c24" are the same section. */
 function normaliseSectionText(text: string): string {
@@ -25,11 +26,15 @@ export function createSectionLookup(sections: SectionRef[]): SectionLookup {
     const trimmed = text.trim();
     if (trimmed === '') return { ok: false, message: 'Section is missing.' };
     const found = ids.get(normaliseSectionText(trimmed));
-    if (!found)
+    if (!found) {
+      const near = nearestSection(trimmed, sections);
       return {
         ok: false,
-        message: `Unknown section "${trimmed}". Use a section name or code from the yard's list.`,
+        message: near
+          ? `Unknown section "${trimmed}". Did you mean ${near.name}${near.code ? ` (${near.code})` : ''}?`
+          : `Unknown section "${trimmed}". Use a section name or code from the yard's list.`,
       };
+    }
     if (found.size > 1)
       return { ok: false, message: `"${trimmed}" matches more than one section; use the section code.` };
     return { ok: true, id: [...found][0] };

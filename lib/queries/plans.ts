@@ -4,6 +4,7 @@ import type { CuttingPlanPrice } from '@/lib/pricing/pricing-types';
 import type { BoardPiece, PlanSection, PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import type { PaymentState } from '@/lib/quotes/payment-state';
+import type { ReleasePlanBody } from '@/lib/validations/quotes';
 import { fetchJson } from './fetch-json';
 
 export type PlanBoardView = {
@@ -47,10 +48,10 @@ export type PlanOverrides = Partial<PlanSettings>;
 export const createPlanRequest = (jobId: number, overrides: PlanOverrides = {}) =>
   fetchJson<PlanViewData>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: JSON.stringify(overrides) });
 
-export const releasePlanRequest = (planId: number, override?: string) =>
+export const releasePlanRequest = (planId: number, { override, confirmShortfall }: ReleasePlanBody = {}) =>
   fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, {
     method: 'POST',
-    body: JSON.stringify(override ? { override } : {}),
+    body: JSON.stringify({ override, confirmShortfall }),
   });
 export const createQuoteLinkRequest = (planId: number) =>
   fetchJson<{ url: string; expiresAt: string }>(`/api/plans/${planId}/quote-link`, { method: 'POST' });

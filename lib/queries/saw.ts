@@ -45,8 +45,11 @@ export type BoardDoneAnswer = {
   jobStatus: string;
 };
 
-export const confirmBoardRequest = (planId: number, boardNo: number) =>
-  fetchJson<BoardDoneAnswer>(`/api/plans/${planId}/boards/${boardNo}/done`, { method: 'POST', body: '{}' });
+export const confirmBoardRequest = (planId: number, boardNo: number, boardThere?: true) =>
+  fetchJson<BoardDoneAnswer>(`/api/plans/${planId}/boards/${boardNo}/done`, {
+    method: 'POST',
+    body: JSON.stringify(boardThere ? { boardThere } : {}),
+  });
 
 export const undoBoardRequest = (planId: number) =>
   fetchJson<{ boardNo: number }>(`/api/plans/${planId}/undo-board`, { method: 'POST' });

@@ -18,11 +18,13 @@ export async function confirmBoard({
   boardNo,
   userId,
   location,
+  boardThere,
 }: {
   planId: number;
   boardNo: number;
   userId: number;
   location?: string;
+  boardThere?: boolean;
 }) {
   const db = await getDb();
   return db.transaction(async (tx) => {
@@ -54,6 +56,7 @@ export async function confirmBoard({
         userId,
         at,
         reason: `Cut for ${where}`,
+        boardThere,
       });
     }
     if (board.source === 'offcut' && board.offcutId) {

@@ -1,6 +1,6 @@
 import 'server-only';
 import { and, eq, inArray } from 'drizzle-orm';
-import { getDb } from '@/db';
+import { getDb, type Tx } from '@/db';
 import { planBoards, plans, sections, stockLengths } from '@/db/schema';
 import { notFound } from '@/lib/errors';
 
@@ -16,8 +16,11 @@ export type StockShortfall = {
  * Stock lengths a plan needs more of than the yard holds. Counts the plan's boards of new stock
  * still to cut (pending); unlimited lengths are never short. Shown before release.
  */
-export async function checkPlanStock({ planId }: { planId: number }): Promise<{ short: StockShortfall[] }> {
-  const db = await getDb();
+export async function checkPlanStock(
+  { planId }: { planId: number },
+  tx?: Tx,
+): Promise<{ short: StockShortfall[] }> {
+  const db = tx ?? (await getDb());
   const [plan] = await db.select({ id: plans.id }).from(plans).where(eq(plans.id, planId));
   if (!plan) throw notFound('That plan');
   const boards = await db

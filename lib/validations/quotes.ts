@@ -2,8 +2,13 @@ import { z } from 'zod';
 
 /** POST /api/plans/[planId]/release: the owner's reason for releasing an unaccepted or unpaid job. */
 export const releasePlanBodySchema = z
-  .object({ override: z.string().trim().min(3, 'Give a reason for the override.').max(500).optional() })
+  .object({
+    override: z.string().trim().min(3, 'Give a reason for the override.').max(500).optional(),
+    /** Release although the stock count shows too few boards (the yard hand has checked). */
+    confirmShortfall: z.literal(true).optional(),
+  })
   .strict();
+export type ReleasePlanBody = z.input<typeof releasePlanBodySchema>;
 
 /** POST /api/quote-links/[token]/accept */
 export const acceptQuoteBodySchema = z.object({

@@ -9,6 +9,8 @@ export const confirmBoardBodySchema = z
   .object({
     /** Where the kept remainder goes; defaults to the rack's intake spot. */
     location: z.string().trim().min(1).max(60).optional(),
+    /** The operator confirms a new stock board is in their hands though the stock count shows none. */
+    boardThere: z.literal(true).optional(),
   })
   .strict();
 export type ConfirmBoardBody = z.infer<typeof confirmBoardBodySchema>;

@@ -126,6 +126,23 @@ describe('role checks on every stock endpoint', () => {
 });
 
 describe('receipts and stocktakes', () => {
+  it('the movements list shows what the saw cut beside deliveries and counts', async () => {
+    const l = await countedLength();
+    await t.db.insert(schema.stockMovements).values({
+      kind: 'stock_cut',
+      sectionId: l.sectionId,
+      stockLengthId: l.id,
+      lengthMm: l.lengthMm,
+      quantityDelta: -1,
+      reason: 'Cut for job J-T9, board 1',
+      at: new Date(Date.now() + 60_000),
+    });
+    actAs(AS.owner);
+    const res = await call(getMovements);
+    expect(res.status).toBe(200);
+    expect(res.json.movements[0]).toMatchObject({ kind: 'stock_cut', quantityDelta: -1 });
+  });
+
   it('a delivery raises on-hand and records who, when and why', async () => {
     const l = await countedLength();
     actAs(AS.hand);

@@ -31,6 +31,9 @@ const PAGES: PageCheck[] = [
   { path: '/rack', roles: OFFICE },
   { path: '/stock', roles: OFFICE },
   { path: '/outbox', roles: OFFICE },
+  { path: '/customers', roles: OFFICE },
+  { path: '/payments', roles: ['owner'] },
+  { path: '/account', roles: ['owner', 'hand', 'saw'] },
   { path: '/reports', roles: ['owner'] },
   { path: '/users', roles: ['owner'] },
   { path: '/settings', roles: ['owner'] },
@@ -38,12 +41,17 @@ const PAGES: PageCheck[] = [
   { path: '/saw/find', roles: ['owner', 'saw'], saw: true },
   { path: '/saw/{sawPlanId}', roles: ['owner', 'saw'], saw: true },
   { path: '/labels/offcuts?plan={sawPlanId}', roles: ['owner', 'hand', 'saw'] },
+  // The customer's own quote page (no sign-in), opened here in the owner's browser.
+  { path: '/q/{quoteToken}', roles: ['owner'] },
+  { path: '/jobs/999999', roles: ['hand'] },
+  { path: '/saw/999999', roles: ['saw'], saw: true },
+  { path: '/no-such-page', roles: ['owner'] },
 ];
 
 const DESKTOP = { width: 1280, height: 900 };
 const TABLET = { width: 768, height: 1024 };
 
-let ids: Ids;
+let ids: Ids & { quoteToken: string };
 const signedIn: Partial<Record<Role, string>> = {};
 
 // Each role signs in once; every page is then its own test.
@@ -51,7 +59,12 @@ test.beforeAll(async ({ browser }, info) => {
   for (const role of Object.keys(DEMO) as Role[]) {
     const page = await browser.newPage();
     await signIn(page, DEMO[role]);
-    if (role === 'owner') ids = await findDemoIds(page);
+    if (role === 'owner') {
+      const found = await findDemoIds(page);
+      const link = await page.request.post(`/api/plans/${found.planId}/quote-link`);
+      expect(link.status()).toBe(201);
+      ids = { ...found, quoteToken: new URL((await link.json()).url).pathname.split('/').pop()! };
+    }
     signedIn[role] = info.outputPath(`${role}.json`);
     await page.context().storageState({ path: signedIn[role] });
     await page.close();
@@ -72,7 +85,7 @@ for (const role of Object.keys(DEMO) as Role[]) {
         hasTouch: check.saw,
       });
       const page = await context.newPage();
-      await page.goto(check.path.replace(/\{(\w+)\}/g, (_, key: keyof Ids) => String(ids[key])));
+      await page.goto(check.path.replace(/\{(\w+)\}/g, (_, key: keyof typeof ids) => String(ids[key])));
       await settle(page);
       await openDisclosures(page);
       const found = await axeViolations(page, { enhancedContrast: check.saw });

@@ -74,3 +74,22 @@ test('the skip link takes the focus past the header to the content', async ({ pa
   const next = await tab(page);
   expect(next?.where).toBe('main');
 });
+
+test('a date field shows its ring on every part Tab walks: day, month, year and calendar button', async ({
+  page,
+}) => {
+  await signIn(page, DEMO.owner);
+  await page.goto('/reports');
+  await settle(page);
+  await page.getByTestId('report-range').locator('input[type="date"]').first().focus();
+  await page.keyboard.press('Shift+Tab');
+  const stops: TabStop[] = [];
+  for (let i = 0; i < 10; i++) {
+    const stop = await tab(page);
+    if (stop) stops.push(stop);
+  }
+  const dateParts = stops.filter((s) => s.name.startsWith('input[date]'));
+  // Two date fields (from, to), each walked part by part.
+  expect(dateParts.length).toBeGreaterThanOrEqual(4);
+  expect(dateParts.filter((s) => s.ringProblem).map((s) => `${s.name}: ${s.ringProblem}`)).toEqual([]);
+});

@@ -56,7 +56,29 @@ test.describe('user management', () => {
     await form.getByRole('button', { name: 'Add account' }).click();
     await expect(page.getByTestId('user-row-sam@yard.test')).toBeVisible();
 
+    // A role change and a disabling are asked about first, and say when they are saved.
+    const sam = page.getByTestId('user-row-sam@yard.test');
+    await sam.getByLabel('Role of Sam Kettering').selectOption('saw_operator');
+    await sam.getByRole('button', { name: 'Keep as it is' }).click();
+    await expect(sam.getByLabel('Role of Sam Kettering')).toHaveValue('yard_hand');
+    await expect(sam.getByTestId('user-saved')).toBeEmpty();
+    await sam.getByLabel('Role of Sam Kettering').selectOption('saw_operator');
+    await expect(sam.getByTestId('user-confirm')).toContainText(
+      "Change Sam Kettering's role to saw operator?",
+    );
+    await sam.getByRole('button', { name: 'Change the role' }).click();
+    await expect(sam.getByTestId('user-saved')).toHaveText('Saved: Sam Kettering is now saw operator.');
+    await expect(sam.getByLabel('Role of Sam Kettering')).toHaveValue('saw_operator');
+    await sam.getByRole('button', { name: 'Disable' }).click();
+    await sam.getByRole('button', { name: 'Disable the account' }).click();
+    await expect(sam.getByTestId('user-saved')).toHaveText("Saved: Sam Kettering's account is disabled.");
+    await expect(sam.getByRole('button', { name: 'Enable' })).toBeVisible();
+
     await page.getByLabel('Role of Maggie Rowntree').selectOption('yard_hand');
+    await page
+      .locator('tr', { has: page.getByLabel('Role of Maggie Rowntree') })
+      .getByRole('button', { name: 'Change the role' })
+      .click();
     await expect(page.getByRole('alert').filter({ hasText: 'at least one active owner' })).toBeVisible();
     await expect(page.getByLabel('Role of Maggie Rowntree')).toHaveValue('owner');
   });

@@ -170,6 +170,38 @@ describe('releasing a plan', () => {
     ).toBe(409);
   });
 
+  it('asks before releasing a plan the stock count cannot cover, and releases once confirmed', async () => {
+    actAs(AS.hand);
+    const { jobIds } = await twoJobsOneOffcut();
+    // A 4000 mm piece needs new stock; the count says there is none of any 47×100 length.
+    await t.db.insert(schema.jobItems).values({
+      jobId: jobIds[0],
+      sectionId: (await t.db.select().from(schema.sections).where(eq(schema.sections.code, 'T47100')))[0].id,
+      lengthMm: 4000,
+      quantity: 1,
+    });
+    const planned = await plan(jobIds[0]);
+    const stockBoard = (planned.json.boards as { source: string; stockLengthId: number }[]).find(
+      (b) => b.source === 'stock',
+    )!;
+    await t.db
+      .update(schema.stockLengths)
+      .set({ onHand: 0 })
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId));
+    const asked = await releaseAsOwner(planned.json.id);
+    expect(asked.status).toBe(409);
+    expect(asked.json.error).toMatch(/Not enough stock on hand.*needs 1, 0 on hand/);
+    expect(asked.json.details.reason).toBe('stock_short');
+    const [still] = await t.db.select().from(schema.plans).where(eq(schema.plans.id, planned.json.id));
+    expect(still.status).toBe('planned');
+    const confirmed = await call(release, {
+      method: 'POST',
+      params: { planId: String(planned.json.id) },
+      body: { override: 'Release test: payment is not under test', confirmShortfall: true },
+    });
+    expect(confirmed.status).toBe(200);
+  });
+
   it('is refused to saw operators', async () => {
     actAs(AS.saw);
     expect((await call(release, { method: 'POST', params: { planId: '1' } })).status).toBe(403);

@@ -159,24 +159,34 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     expect(await countRows()).toEqual(before);
   });
 
-  it('never takes on hand below zero: a board the count missed is recorded as counted short', async () => {
+  it('asks the operator to confirm a board the count says is gone, then flags it for a recount', async () => {
     const { stockBoard, planId } = await twoBoardJob();
     await t.db
       .update(schema.stockLengths)
       .set({ onHand: 0 })
       .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
-    expect((await confirm(planId, stockBoard.boardNo)).status).toBe(200);
+    const stockRows = async () =>
+      (await movementsOf(t.db, planId)).filter((m) => m.stockLengthId === stockBoard.stockLengthId);
+    const asked = await confirm(planId, stockBoard.boardNo);
+    expect(asked.status).toBe(409);
+    expect(asked.json.error).toMatch(/really in your hands/);
+    expect(asked.json.details.reason).toBe('board_not_counted');
+    expect(await stockRows()).toEqual([]);
+    expect((await boardsOf(t.db, planId)).find((b) => b.boardNo === stockBoard.boardNo)!.status).toBe(
+      'pending',
+    );
+
+    expect((await confirm(planId, stockBoard.boardNo, { boardThere: true })).status).toBe(200);
     const [after] = await t.db
       .select()
       .from(schema.stockLengths)
       .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    // Never below zero, and on hand still equals the sum of the movements.
     expect(after.onHand).toBe(0);
-    const rows = (await movementsOf(t.db, planId)).filter(
-      (m) => m.stockLengthId === stockBoard.stockLengthId,
-    );
+    const rows = await stockRows();
     expect(rows.map((m) => [m.kind, m.quantityDelta])).toEqual([
       ['stock_cut', -1],
-      ['stocktake', 1],
+      ['counted_short', 1],
     ]);
     expect(rows.reduce((n, m) => n + m.quantityDelta, 0)).toBe(0);
   });

@@ -62,7 +62,10 @@ export default async function OffcutLabelsPage({ searchParams }: { searchParams:
         <PrintButton />
       </div>
       {offcuts.length === 0 ? (
-        <Notice tone="warning">No offcuts to label. Give their ids, e.g. /labels/offcuts?ids=1,2,3.</Notice>
+        <Notice tone="warning" data-testid="no-labels">
+          No offcuts to label here. Labels are printed from a plan once its boards are cut at the saw, from an
+          offcut found by its tag, or from the offcut rack.
+        </Notice>
       ) : (
         <div className={format === 'a4' ? 'labels-a4' : 'labels-roll'} data-testid="label-sheet">
           {offcuts.map((o) => (

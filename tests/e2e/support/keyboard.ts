@@ -70,11 +70,8 @@ export async function tab(page: Page): Promise<TabStop | null> {
     const style = getComputedStyle(el);
     const ring = parse(style.outlineColor);
     let ringProblem: string | null = null;
-    // Open question: while Tab walks a date field's inner day/month/year parts, Chromium reports no
-    // outline on the field, although the field shows its ring when focused. Not judged here yet.
-    const dateField = el instanceof HTMLInputElement && /^(date|time|datetime-local)$/.test(el.type);
-    if (dateField) ringProblem = null;
-    else if (style.outlineStyle === 'none' || parseFloat(style.outlineWidth) < 2 || !ring || ring.a < 0.5) {
+    // A date field's ring is judged on every inner part Tab walks (day, month, year, calendar button).
+    if (style.outlineStyle === 'none' || parseFloat(style.outlineWidth) < 2 || !ring || ring.a < 0.5) {
       ringProblem = `no outline (${style.outlineStyle} ${style.outlineWidth})`;
     } else {
       const [hi, lo] = [lum(ring), lum(behind)].sort((p, q) => q - p);

@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { SawStation } from '@/components/saw/saw-station';
+import { findOrNotFound } from '@/lib/pages/find-or-not-found';
+import { getSawPlan } from '@/lib/saw/get-saw-plan';
 
 export const metadata: Metadata = { title: 'At the saw' };
 
 export default async function SawPlanPage({ params }: { params: Promise<{ planId: string }> }) {
-  const planId = Number((await params).planId);
-  if (!Number.isSafeInteger(planId) || planId <= 0) notFound();
-  return <SawStation planId={planId} />;
+  const plan = await findOrNotFound((await params).planId, (planId) => getSawPlan({ planId }));
+  return <SawStation planId={plan.id} />;
 }

@@ -1,4 +1,4 @@
-// GET /api/stock/movements – the latest receipts and stocktakes (owner, yard hand)
+// GET /api/stock/movements – the latest changes to stock on hand: deliveries, counts and cuts (owner, yard hand)
 import { NextResponse } from 'next/server';
 import { route } from '@/lib/api/route';
 import { listStockMovements } from '@/lib/stock/list-stock-movements';

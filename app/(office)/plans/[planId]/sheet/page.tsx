@@ -1,12 +1,11 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { CutSheet } from '@/components/plans/cut-sheet';
 import { PrintButton } from '@/components/plans/print-button';
 import { DisplayUnitProvider } from '@/components/units/display-unit';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { AppError } from '@/lib/errors';
 import { getJobById } from '@/lib/jobs/get-job';
+import { findOrNotFound } from '@/lib/pages/find-or-not-found';
 import { getPlanById } from '@/lib/plans/get-plan';
 import { getPlanContext } from '@/lib/plans/get-plan-context';
 import type { PlanViewData } from '@/lib/queries/plans';
@@ -16,15 +15,9 @@ export const metadata: Metadata = { title: 'Cut sheet' };
 
 export default async function CutSheetPage({ params }: { params: Promise<{ planId: string }> }) {
   await requirePageUser('plans:read');
-  const planId = Number((await params).planId);
-  if (!Number.isSafeInteger(planId) || planId <= 0) notFound();
-  const loaded = await Promise.all([
-    getPlanById({ planId }),
-    getPlanContext({ planId }),
-    getYardSettings(),
-  ]).catch((e) => (e instanceof AppError ? null : Promise.reject(e)));
-  if (!loaded) notFound();
-  const [plan, context, yard] = loaded;
+  const [planId, plan, context, yard] = await findOrNotFound((await params).planId, (id) =>
+    Promise.all([id, getPlanById({ planId: id }), getPlanContext({ planId: id }), getYardSettings()]),
+  );
   const { job } = await getJobById({ jobId: plan.jobId });
   return (
     <DisplayUnitProvider yardUnit={yard.displayUnit}>

@@ -1,0 +1,5 @@
+import { PageLoading } from '@/components/layout/page-loading';
+
+export default function GroupLoading() {
+  return <PageLoading />;
+}
