@@ -2,21 +2,25 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
-import { drizzle, type PgliteDatabase } from 'drizzle-orm/pglite';
+import { drizzle } from 'drizzle-orm/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
 import * as schema from './schema';
 import { acquireDataDirLock } from './data-dir-lock';
 import { seedDemoYard } from './seed';
 
-export type Db = PgliteDatabase<typeof schema>;
-export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
-/** Either the database or an open transaction: data-access functions accept both. */
-export type DbOrTx = Db | Tx;
+import type { Db } from './types';
+
+export type { Db, DbOrTx, Tx } from './types';
 
 export const migrationsFolder = path.resolve(/*turbopackIgnore: true*/ process.cwd(), 'drizzle');
 
 export function wrapClient(client: PGlite): Db {
   return drizzle({ client, schema });
+}
+
+/** Applies the migrations folder to an embedded database. */
+export async function migrateEmbedded(client: PGlite): Promise<void> {
+  await migrate(drizzle({ client, schema }), { migrationsFolder });
 }
 
 /** Opens a data folder (or memory when dir is null), applies migrations and seeds an empty yard. */
@@ -27,7 +31,7 @@ export async function openDatabase(dir: string | null, options: { seed?: boolean
   }
   const client = dir ? new PGlite(dir) : new PGlite();
   const db = wrapClient(client);
-  await migrate(db, { migrationsFolder });
+  await migrateEmbedded(client);
   if (options.seed ?? true) await seedDemoYard(db);
   return { client, db };
 }

@@ -53,7 +53,8 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
   it('records the bad board and re-plans its pieces with a plan that passes the independent checker', async () => {
     const planId = await releasedDemoPlanId(t.db);
     const before = await boardsOf(t.db, planId);
-    const bad = before[0];
+    // A board cut from stock: its defect books the replacement length out of stock.
+    const bad = before.find((b) => b.source === 'stock')!;
     actAs(AS.owner);
     const res = await report(planId, bad.boardNo, { reason: 'shake', note: 'along the grain' });
     expect(res.status).toBe(200);
