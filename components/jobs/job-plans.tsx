@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { formatPence } from '@/components/plans/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
-import { createPlanRequest } from '@/lib/queries/plans';
+import { createPlanRequest, describePlanRun } from '@/lib/queries/plans';
 
 /** Plan the job with the yard's settings, list its plans, and pick two to compare. */
 export function JobPlans({
@@ -21,6 +21,7 @@ export function JobPlans({
 }) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
+  const [progress, setProgress] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [picked, setPicked] = useState<number[]>([]);
 
@@ -28,10 +29,11 @@ export function JobPlans({
     setBusy(true);
     setError(null);
     try {
-      const created = await createPlanRequest(jobId);
+      const created = await createPlanRequest(jobId, {}, (run) => setProgress(describePlanRun(run)));
       router.push(`/plans/${created.id}`);
     } catch (e) {
       setError((e as Error).message);
+      setProgress(null);
       setBusy(false);
     }
   }
@@ -42,7 +44,7 @@ export function JobPlans({
     <div className="space-y-4">
       {canPlan && (
         <Button onClick={plan} disabled={busy} size="lg">
-          {busy ? 'Finding the best plan…' : 'Plan this job'}
+          {busy ? (progress ?? 'Finding the best plan…') : 'Plan this job'}
         </Button>
       )}
       {error && <Notice tone="error">{error}</Notice>}
