@@ -1,8 +1,18 @@
 import type { NextConfig } from 'next';
 
 const nextConfig: NextConfig = {
-  // PGlite ships WASM and data files, argon2 a native binary: load both from node_modules at run time.
-  serverExternalPackages: ['@electric-sql/pglite', '@node-rs/argon2', '@react-pdf/renderer'],
+  // PGlite and highs ship WASM files, argon2 a native binary: load them from node_modules at run time.
+  serverExternalPackages: ['@electric-sql/pglite', '@node-rs/argon2', '@react-pdf/renderer', 'tsx', 'highs'],
+  // The solver runs in a worker thread loaded from these files at run time (lib/plans/run-solver.ts),
+  // outside the bundle; list them so a traced (standalone) build carries them too.
+  outputFileTracingIncludes: {
+    '/**': [
+      './lib/plans/solver-worker.mjs',
+      './solver/**/*.ts',
+      './node_modules/tsx/**',
+      './node_modules/highs/**',
+    ],
+  },
   poweredByHeader: false,
 };
 

@@ -9,6 +9,13 @@ const dataDir = `.data-e2e-${PORT}`;
 // otherwise, and lists caught mail over HTTP 10 000 above its SMTP port.
 const SMTP_PORT = Number(process.env.PW_SMTP_PORT ?? PORT - 500);
 const MAIL_CATCHER_URL = `http://127.0.0.1:${SMTP_PORT + 10_000}`;
+// The payment-service fake listens 1000 above the app's port and posts its events to the app.
+const PAYMENTS = {
+  KERFWISE_PAYMENTS_API_URL: `http://127.0.0.1:${PORT + 1000}`,
+  KERFWISE_PAYMENTS_SECRET_KEY: 'sk_test_e2e_only',
+  KERFWISE_PAYMENTS_WEBHOOK_SECRET: 'whsec_e2e_only',
+  KERFWISE_PAYMENTS_FAKE_WEBHOOK_URL: `${baseURL}/api/payments/webhook`,
+};
 
 export default defineConfig({
   testDir: './tests/e2e',
@@ -45,6 +52,13 @@ export default defineConfig({
       env: { KERFWISE_SMTP_PORT: String(SMTP_PORT), KERFWISE_MAIL_CATCHER_URL: MAIL_CATCHER_URL },
     },
     {
+      command: 'npx tsx scripts/payment-fake.ts',
+      url: `${PAYMENTS.KERFWISE_PAYMENTS_API_URL}/health`,
+      timeout: 60_000,
+      reuseExistingServer: false,
+      env: PAYMENTS,
+    },
+    {
       command: `rm -rf ${dataDir} ${dataDir}.lock && npx next build && npx next start -p ${PORT} -H 127.0.0.1`,
       url: `${baseURL}/api/health`,
       timeout: 300_000,
@@ -56,6 +70,7 @@ export default defineConfig({
         NEXT_TELEMETRY_DISABLED: '1',
         KERFWISE_SMTP_PORT: String(SMTP_PORT),
         KERFWISE_MAIL_CATCHER_URL: MAIL_CATCHER_URL,
+        ...PAYMENTS,
       },
     },
   ],

@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from 'next';
+import { SkipLink } from '@/components/layout/skip-link';
 import { Providers } from '@/components/providers';
 import { monoFont, sansFont } from './fonts';
 import './globals.css';
@@ -14,6 +15,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
   return (
     <html lang="en-GB" className={`${sansFont.variable} ${monoFont.variable}`}>
       <body className="min-h-screen">
+        <SkipLink />
         <Providers>{children}</Providers>
       </body>
     </html>

@@ -35,3 +35,15 @@ export const MOVEMENT_KINDS = [
   'defect', // a board found bad at the saw
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
+
+export const REGIONS = ['uk', 'na'] as const;
+export type Region = (typeof REGIONS)[number];
+
+export const MOISTURE_STATES = ['kiln_dried', 'air_dried', 'green'] as const;
+export type MoistureState = (typeof MOISTURE_STATES)[number];
+
+export const ACCOUNT_KINDS = ['retail', 'trade'] as const;
+export type AccountKind = (typeof ACCOUNT_KINDS)[number];
+
+export const PAYMENT_KINDS = ['deposit', 'full', 'balance', 'refund', 'on_account'] as const;
+export type PaymentKind = (typeof PAYMENT_KINDS)[number];

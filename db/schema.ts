@@ -14,13 +14,17 @@ import {
 } from 'drizzle-orm/pg-core';
 
 import {
+  ACCOUNT_KINDS,
   BOARD_STATUSES,
   DISPLAY_UNITS,
   JOB_STATUSES,
+  MOISTURE_STATES,
   MOVEMENT_KINDS,
   OFFCUT_STATUSES,
+  PAYMENT_KINDS,
   PLAN_RUN_STATUSES,
   PLAN_STATUSES,
+  REGIONS,
   ROLES,
 } from './enums';
 
@@ -51,6 +55,23 @@ export const yardSettings = pgTable('yard_settings', {
   perCutChargePence: integer('per_cut_charge_pence').notNull().default(25),
   clearOffcutsAfterDays: integer('clear_offcuts_after_days').notNull().default(90),
   lengthToleranceMm: integer('length_tolerance_mm').notNull().default(2),
+  // Picks piece names and framing defaults: 'uk' (head/sole plate, lintel) or 'na' (top/bottom plate, header).
+  region: text('region', { enum: REGIONS }).notNull().default('uk'),
+  // Shorter pieces are refused on forms and imports: the saw cannot hold them safely.
+  minSafePieceMm: integer('min_safe_piece_mm').notNull().default(150),
+  // Quotes and payment. The VAT rate is in hundredths of a percent (2000 = 20 %).
+  vatRateBasisPoints: integer('vat_rate_basis_points').notNull().default(2000),
+  yardAddress: text('yard_address').notNull().default(''),
+  vatNumber: text('vat_number').notNull().default(''),
+  quoteValidityDays: integer('quote_validity_days').notNull().default(30),
+  minimumChargePence: integer('minimum_charge_pence').notNull().default(0),
+  // Rack offcuts are charged at this share of the section's price per metre of new stock.
+  offcutRatePercent: integer('offcut_rate_percent').notNull().default(50),
+  // Who keeps the kept remainders of boards a customer pays for.
+  remaindersGoTo: text('remainders_go_to', { enum: ['yard', 'customer'] })
+    .notNull()
+    .default('yard'),
+  depositPercent: integer('deposit_percent').notNull().default(50),
   updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
 });
 export type YardSettings = typeof yardSettings.$inferSelect;
@@ -67,6 +88,13 @@ export const sections = pgTable('sections', {
   finish: text('finish', { enum: ['sawn', 'planed'] })
     .notNull()
     .default('sawn'),
+  // Thickness and width above are nominal (what the trade calls it); finished sizes are what it measures.
+  finishedThicknessMm: integer('finished_thickness_mm'),
+  finishedWidthMm: integer('finished_width_mm'),
+  // Kiln dried, air dried or green: apart from treatment (a treated section may be wet from the tank).
+  moisture: text('moisture', { enum: MOISTURE_STATES }).notNull().default('kiln_dried'),
+  // Shortest remainder worth keeping for this section; null: the yard's minimum kept offcut.
+  minKeepMm: integer('min_keep_mm'),
   active: boolean('active').notNull().default(true),
   createdAt: createdAt(),
 });
@@ -82,6 +110,8 @@ export const stockLengths = pgTable(
       .references(() => sections.id),
     lengthMm: integer('length_mm').notNull(),
     pricePence: integer('price_pence').notNull(),
+    // What the yard paid for one length; null: not entered. Reports value waste at cost.
+    costPence: integer('cost_pence'),
     // null: the yard treats this length as always available.
     onHand: integer('on_hand'),
     active: boolean('active').notNull().default(true),
@@ -118,6 +148,7 @@ export const frameSchedules = pgTable('frame_schedules', {
   id: serial('id').primaryKey(),
   name: text('name').notNull(),
   customerName: text('customer_name').notNull().default(''),
+  customerEmail: text('customer_email').notNull().default(''),
   unit: text('unit', { enum: DISPLAY_UNITS }).notNull().default('mm'),
   panels: jsonb('panels')
     .notNull()
@@ -129,9 +160,28 @@ export const frameSchedules = pgTable('frame_schedules', {
 export type FrameSchedule = typeof frameSchedules.$inferSelect;
 export type NewFrameSchedule = typeof frameSchedules.$inferInsert;
 
+export const customers = pgTable('customers', {
+  id: serial('id').primaryKey(),
+  name: text('name').notNull(),
+  contact: text('contact').notNull().default(''),
+  phone: text('phone').notNull().default(''),
+  email: text('email').notNull().default(''),
+  address: text('address').notNull().default(''),
+  account: text('account', { enum: ACCOUNT_KINDS }).notNull().default('retail'),
+  // Trade accounts only: days to pay, and a discount off the yard's prices (whole percent).
+  creditDays: integer('credit_days'),
+  discountPercent: integer('discount_percent').notNull().default(0),
+  createdAt: createdAt(),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+});
+export type Customer = typeof customers.$inferSelect;
+export type NewCustomer = typeof customers.$inferInsert;
+
 export const jobs = pgTable('jobs', {
   id: serial('id').primaryKey(),
   reference: text('reference').notNull().unique(),
+  customerId: integer('customer_id').references(() => customers.id),
+  deliveryChargePence: integer('delivery_charge_pence').notNull().default(0),
   customerName: text('customer_name').notNull(),
   customerEmail: text('customer_email').notNull().default(''),
   customerPhone: text('customer_phone').notNull().default(''),
@@ -162,6 +212,12 @@ export const jobItems = pgTable('job_items', {
   note: text('note').notNull().default(''),
   // Angle of an angled cut in tenths of a degree (frame schedules), null for square cuts.
   angleTenths: integer('angle_tenths'),
+  // Frame piece marks ("1.1, 1.2, 2.3"): the numbers the schedule's drawings show.
+  marks: text('marks').notNull().default(''),
+  // The frame schedule that sent this line, so sending it again can replace its lines.
+  frameScheduleId: integer('frame_schedule_id').references(() => frameSchedules.id, {
+    onDelete: 'set null',
+  }),
   position: integer('position').notNull().default(0),
 });
 export type JobItem = typeof jobItems.$inferSelect;
@@ -183,6 +239,9 @@ export const plans = pgTable('plans', {
   createdBy: integer('created_by').references(() => users.id),
   createdAt: createdAt(),
   releasedAt: timestamp('released_at', { withTimezone: true }),
+  // Set when the owner sent the plan to the saw without acceptance or payment.
+  releaseOverrideReason: text('release_override_reason'),
+  releaseOverrideBy: integer('release_override_by').references(() => users.id),
 });
 export type Plan = typeof plans.$inferSelect;
 export type NewPlan = typeof plans.$inferInsert;
@@ -282,3 +341,73 @@ export const sentMail = pgTable('sent_mail', {
   createdAt: createdAt(),
 });
 export type SentMail = typeof sentMail.$inferSelect;
+
+// One quote per plan: priced in whole pence when first shown, frozen once accepted.
+export const quotes = pgTable('quotes', {
+  id: serial('id').primaryKey(),
+  planId: integer('plan_id')
+    .notNull()
+    .unique()
+    .references(() => plans.id, { onDelete: 'cascade' }),
+  jobId: integer('job_id')
+    .notNull()
+    .references(() => jobs.id, { onDelete: 'cascade' }),
+  number: text('number').notNull().unique(),
+  version: integer('version').notNull(),
+  account: text('account', { enum: ACCOUNT_KINDS }).notNull(),
+  // [{ description, quantity, unit, unitPence, amountPence }] before VAT.
+  lines: jsonb('lines').notNull(),
+  netPence: integer('net_pence').notNull(),
+  vatPence: integer('vat_pence').notNull(),
+  grossPence: integer('gross_pence').notNull(),
+  vatRateBasisPoints: integer('vat_rate_basis_points').notNull(),
+  depositPence: integer('deposit_pence').notNull(),
+  validUntil: timestamp('valid_until', { withTimezone: true }).notNull(),
+  acceptedAt: timestamp('accepted_at', { withTimezone: true }),
+  acceptedName: text('accepted_name'),
+  acceptedIp: text('accepted_ip'),
+  onAccount: boolean('on_account').notNull().default(false),
+  createdAt: createdAt(),
+});
+export type Quote = typeof quotes.$inferSelect;
+
+// A link to a quote for the customer. Only the SHA-256 of the token is stored.
+export const quoteLinks = pgTable('quote_links', {
+  id: serial('id').primaryKey(),
+  quoteId: integer('quote_id')
+    .notNull()
+    .references(() => quotes.id, { onDelete: 'cascade' }),
+  tokenHash: text('token_hash').notNull().unique(),
+  expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+  revokedAt: timestamp('revoked_at', { withTimezone: true }),
+  createdBy: integer('created_by').references(() => users.id),
+  createdAt: createdAt(),
+});
+export type QuoteLink = typeof quoteLinks.$inferSelect;
+
+// The payments ledger: every payment, failed attempt, refund and on-account acceptance is one row.
+export const payments = pgTable(
+  'payments',
+  {
+    id: serial('id').primaryKey(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id, { onDelete: 'cascade' }),
+    quoteId: integer('quote_id').references(() => quotes.id, { onDelete: 'set null' }),
+    kind: text('kind', { enum: PAYMENT_KINDS }).notNull(),
+    status: text('status', { enum: ['succeeded', 'failed'] }).notNull(),
+    // Refunds are negative.
+    amountPence: integer('amount_pence').notNull(),
+    // Who: the customer's typed name or the signed-in user.
+    byName: text('by_name').notNull().default(''),
+    userId: integer('user_id').references(() => users.id),
+    // The payment service's ids; eventId makes webhook handling idempotent.
+    eventId: text('event_id').unique(),
+    checkoutSessionId: text('checkout_session_id'),
+    paymentIntentId: text('payment_intent_id'),
+    note: text('note').notNull().default(''),
+  },
+  (t) => [index('payments_job').on(t.jobId)],
+);
+export type Payment = typeof payments.$inferSelect;

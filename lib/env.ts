@@ -20,6 +20,13 @@ const envSchema = z.object({
   KERFWISE_MAIL_FROM: z.string().default('Kerfwise <cutting@yard.test>'),
   // Development and tests: the local mail catcher's HTTP address, so the outbox can show caught mail.
   KERFWISE_MAIL_CATCHER_URL: z.string().url().optional(),
+  // The payment service. Leave KERFWISE_PAYMENTS_API_URL unset to use the real service's own address;
+  // development and tests point it at the local fake (scripts/payment-fake.ts).
+  KERFWISE_PAYMENTS_API_URL: z.string().url().optional(),
+  KERFWISE_PAYMENTS_SECRET_KEY: z.string().min(1).default('sk_test_kerfwise_local_fake'),
+  KERFWISE_PAYMENTS_WEBHOOK_SECRET: z.string().min(1).default('whsec_kerfwise_local_fake'),
+  // The local fake only: where it posts its signed webhook events.
+  KERFWISE_PAYMENTS_FAKE_WEBHOOK_URL: z.string().url().optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
 });
 

@@ -1,12 +1,13 @@
 // One error type for the whole app; route handlers turn it into an HTTP answer in one place.
 export type ErrorCode =
-  'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'invalid' | 'unavailable';
+  'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'gone' | 'invalid' | 'unavailable';
 
 const STATUS: Record<ErrorCode, number> = {
   unauthenticated: 401,
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  gone: 410,
   invalid: 422,
   unavailable: 503,
 };

@@ -1,4 +1,4 @@
-// `npm run dev`: makes sure a sign-in secret exists, starts the local mail catcher, then serves
+// `npm run dev`: makes sure a sign-in secret exists, starts the local mail catcher and payment fake, then serves
 // Kerfwise on http://localhost:3000. The database is migrated and the demo yard seeded by the server
 // itself on first request.
 import { spawn } from 'node:child_process';
@@ -10,17 +10,26 @@ ensureLocalSecret();
 
 const smtpPort = getEnv().KERFWISE_SMTP_PORT;
 const catcherUrl = getEnv().KERFWISE_MAIL_CATCHER_URL ?? `http://127.0.0.1:${catcherHttpPort(smtpPort)}`;
-const env = { ...process.env, KERFWISE_MAIL_CATCHER_URL: catcherUrl };
+const env = {
+  ...process.env,
+  KERFWISE_MAIL_CATCHER_URL: catcherUrl,
+  KERFWISE_PAYMENTS_API_URL: getEnv().KERFWISE_PAYMENTS_API_URL ?? 'http://127.0.0.1:12111',
+  KERFWISE_PAYMENTS_FAKE_WEBHOOK_URL:
+    getEnv().KERFWISE_PAYMENTS_FAKE_WEBHOOK_URL ?? 'http://localhost:3000/api/payments/webhook',
+};
 
 const catcher = spawn('npx', ['tsx', 'scripts/mail-catcher.ts'], { stdio: 'inherit', env });
+const payments = spawn('npx', ['tsx', 'scripts/payment-fake.ts'], { stdio: 'inherit', env });
 const next = spawn('npx', ['next', 'dev', ...process.argv.slice(2)], { stdio: 'inherit', env });
 next.on('exit', (code) => {
   catcher.kill('SIGTERM');
+  payments.kill('SIGTERM');
   process.exit(code ?? 0);
 });
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
     catcher.kill(signal);
+    payments.kill(signal);
     next.kill(signal);
   });
 }

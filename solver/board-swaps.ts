@@ -2,6 +2,7 @@
 // the cheapest board that still holds them (least scrap on ties), and merge two part-empty boards
 // into one when a single board holds both. Each move lowers cost or scrap, never breaks a rule.
 
+import { boardFits } from './board-fit';
 import type { Model } from './model';
 import { boardScrap, makeBoard, type PackedBoard, type Packing } from './packing';
 
@@ -23,11 +24,11 @@ export function downsizeBoards(model: Model, packing: Packing): Packing {
     let pick = board.bin;
     let pickScrap = boardScrap(model, board);
     model.bins.forEach((bin, j) => {
-      if (left[j] <= 0 || bin.capacity < board.load) return;
-      const cost = bin.cost;
+      if (left[j] <= 0 || !boardFits(model, j, board.items)) return;
+      const cost = bin.costUnits;
       const scrap = boardScrap(model, { bin: j, items: board.items, load: board.load });
-      const pc = model.bins[pick].cost;
-      if (cost < pc - 1e-9 || (Math.abs(cost - pc) <= 1e-9 && scrap < pickScrap)) {
+      const pc = model.bins[pick].costUnits;
+      if (cost < pc || (cost === pc && scrap < pickScrap)) {
         pick = j;
         pickScrap = scrap;
       }
@@ -51,17 +52,17 @@ export function mergeBoards(model: Model, packing: Packing, maxCandidates: numbe
       const a = boards[emptiest[i]];
       const b = boards[emptiest[j]];
       if (!a || !b) continue;
-      const load = a.load + b.load;
-      const before = model.bins[a.bin].cost + model.bins[b.bin].cost;
+      const merged = [...a.items, ...b.items];
+      const before = model.bins[a.bin].costUnits + model.bins[b.bin].costUnits;
       left[a.bin]++;
       left[b.bin]++;
       let pick = -1;
       model.bins.forEach((bin, k) => {
         if (
           left[k] > 0 &&
-          bin.capacity >= load &&
-          bin.cost < before - 1e-9 &&
-          (pick < 0 || bin.cost < model.bins[pick].cost)
+          bin.costUnits < before &&
+          (pick < 0 || bin.costUnits < model.bins[pick].costUnits) &&
+          boardFits(model, k, merged)
         )
           pick = k;
       });
@@ -71,7 +72,7 @@ export function mergeBoards(model: Model, packing: Packing, maxCandidates: numbe
         continue;
       }
       left[pick]--;
-      boards[emptiest[i]] = makeBoard(model, pick, [...a.items, ...b.items]);
+      boards[emptiest[i]] = makeBoard(model, pick, merged);
       boards[emptiest[j]] = null;
     }
   }

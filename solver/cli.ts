@@ -1,6 +1,7 @@
 // Reads one job as JSON on stdin, writes its plan as JSON on stdout. Bad input: exit 2, one line on stderr.
 
 import { solveInputSchema } from './input-schema';
+import { prepareSolver } from './highs-engine';
 import { solve } from './solve';
 
 async function readStdin(): Promise<string> {
@@ -26,4 +27,5 @@ if (!parsed.success) {
   const issue = parsed.error.issues[0];
   fail(`invalid job: ${issue.path.join('.') || '(root)'}: ${issue.message}`);
 }
+await prepareSolver();
 process.stdout.write(`${JSON.stringify(solve(parsed.data))}\n`);

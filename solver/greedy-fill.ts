@@ -3,12 +3,14 @@
 // cost per millimetre filled (offcuts cost nothing, so they go first), least scrap on ties.
 // Variants of the piece order give the local search different starting points.
 
+import { boardFits } from './board-fit';
 import type { Model } from './model';
-import { boardScrap, makeBoard, type Packing } from './packing';
+import { isKept, makeBoard, type Packing } from './packing';
 import { buildSubsetTable, recoverSubset } from './subset-fill';
 
 export function sequentialFill(model: Model, demand: number[], binsLeft: number[]): Packing {
   const weights = model.items.map((it) => it.weight);
+  const nominal = model.items.map((it) => it.tolerance > 0);
   const counts = [...demand];
   const left = [...binsLeft];
   const packing: Packing = { boards: [], unplaced: new Array<number>(counts.length).fill(0) };
@@ -16,48 +18,63 @@ export function sequentialFill(model: Model, demand: number[], binsLeft: number[
     const first = counts.findIndex((c) => c > 0);
     if (first < 0) break;
     const w = weights[first];
-    const candidates: number[] = [];
-    let maxCap = 0;
-    model.bins.forEach((b, j) => {
-      if (left[j] > 0 && b.capacity >= w) {
-        candidates.push(j);
-        maxCap = Math.max(maxCap, b.capacity);
-      }
-    });
     counts[first]--;
-    if (candidates.length === 0) {
+    // Each board kind offers up to two boards around this piece: trimmed, holding any pieces, and
+    // untrimmed, holding only nominal pieces (or this piece alone at the stock's full length).
+    const options: { bin: number; open: boolean; cap: number }[] = [];
+    model.bins.forEach((b, j) => {
+      if (left[j] <= 0) return;
+      if (b.capacity >= w) options.push({ bin: j, open: false, cap: b.capacity });
+      const fullLength = b.length <= model.items[first].length;
+      if ((nominal[first] || fullLength) && b.openCapacity >= w && b.openCapacity > b.capacity)
+        options.push({ bin: j, open: true, cap: nominal[first] ? b.openCapacity : w });
+    });
+    if (options.length === 0) {
       packing.unplaced[first]++;
       continue;
     }
-    const table = buildSubsetTable(weights, counts, maxCap - w);
-    let pick = -1;
+    const maxCap = (open: boolean) => options.reduce((m, o) => (o.open === open ? Math.max(m, o.cap) : m), w);
+    const tables = {
+      trimmed: buildSubsetTable(weights, counts, maxCap(false) - w),
+      open: buildSubsetTable(
+        weights,
+        counts.map((c, i) => (nominal[i] ? c : 0)),
+        maxCap(true) - w,
+      ),
+    };
+    let pick: (typeof options)[number] | null = null;
     let pickScore = Infinity;
     let pickScrap = Infinity;
     let pickLoad = 0;
-    for (const j of candidates) {
-      const bin = model.bins[j];
-      const load = w + table.best[bin.capacity - w];
+    for (const o of options) {
+      const bin = model.bins[o.bin];
+      const table = o.open ? tables.open : tables.trimmed;
+      const load = w + table.best[o.cap - w];
       const score = bin.cost / load;
-      const scrap = boardScrap(model, { bin: j, items: [], load });
+      const room = (o.open ? bin.openCapacity : bin.capacity) - load - model.kerf;
+      const rest = Math.max(0, room);
+      const scrap = (o.open || bin.source === 'offcut' ? 0 : model.trim) + (isKept(model, rest) ? 0 : rest);
       if (
         score < pickScore - 1e-12 ||
         (Math.abs(score - pickScore) <= 1e-12 &&
           (scrap < pickScrap || (scrap === pickScrap && load > pickLoad)))
       ) {
-        pick = j;
+        pick = o;
         pickScore = score;
         pickScrap = scrap;
         pickLoad = load;
       }
     }
+    const chosen = pick!;
+    const table = chosen.open ? tables.open : tables.trimmed;
     const rest = recoverSubset(table, weights, pickLoad - w, counts.length);
     const items = [first];
     rest.forEach((c, i) => {
       counts[i] -= c;
       for (let k = 0; k < c; k++) items.push(i);
     });
-    left[pick]--;
-    packing.boards.push(makeBoard(model, pick, items));
+    left[chosen.bin]--;
+    packing.boards.push(makeBoard(model, chosen.bin, items));
   }
   return packing;
 }
@@ -73,13 +90,13 @@ export function firstFitDecreasing(model: Model, demand: number[], binsLeft: num
   demand.forEach((count, i) => {
     const w = model.items[i].weight;
     for (let k = 0; k < count; k++) {
-      const board = open.find((b) => model.bins[b.bin].capacity - b.load >= w);
+      const board = open.find((b) => boardFits(model, b.bin, [...b.items, i]));
       if (board) {
         board.items.push(i);
         board.load += w;
         continue;
       }
-      const j = order.find((jj) => left[jj] > 0 && model.bins[jj].capacity >= w);
+      const j = order.find((jj) => left[jj] > 0 && boardFits(model, jj, [i]));
       if (j === undefined) {
         packing.unplaced[i]++;
         continue;

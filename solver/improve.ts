@@ -7,6 +7,7 @@ import { packIntoTarget, type CompletionCaps } from './bin-completion';
 import type { LpBoundResult } from './lower-bounds';
 import { roundLpSolution } from './lp-rounding';
 import type { Model } from './model';
+import { toUnits } from './money';
 import { compareScores, makeBoard, scorePacking, type Packing } from './packing';
 import type { SearchBudget } from './search-budget';
 import { repackToTarget, type RepackCaps } from './target-repack';
@@ -50,8 +51,7 @@ export function improvePacking(
   let best = incumbent;
   const better = (p: Packing | null): boolean => {
     if (p && compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
-    const cost = scorePacking(model, best).cost;
-    return cost <= bound.cost + 1e-5 * Math.max(1, cost);
+    return scorePacking(model, best).cost <= toUnits(bound.cost);
   };
   const oneKind = model.bins.length === 1 && bound.boards <= model.bins[0].limit;
   // LP-guided bin completion: among equally full completions, boards the LP uses come first.

@@ -1,4 +1,5 @@
 export { solve } from './solve';
+export { prepareSolver } from './highs-engine';
 export { solveInputSchema, stockInputSchema, offcutInputSchema, pieceInputSchema } from './input-schema';
 export type { SolveInputRaw } from './input-schema';
 export type {

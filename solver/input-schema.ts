@@ -13,11 +13,18 @@ export const stockInputSchema = z.object({
 
 export const offcutInputSchema = z.object({ id: z.string().min(1), length: mm });
 
-export const pieceInputSchema = z.object({
-  id: z.string().min(1),
-  length: mm,
-  quantity: z.number().int().min(1).max(100_000).default(1),
-});
+export const pieceInputSchema = z
+  .object({
+    id: z.string().min(1),
+    length: mm,
+    quantity: z.number().int().min(1).max(100_000).default(1),
+    /** Millimetres a nominal piece may be delivered short; 0 = exact. */
+    tolerance: z.number().int().min(0).max(1000).default(0),
+  })
+  .refine((p) => p.tolerance < p.length, {
+    message: 'tolerance must be shorter than the piece',
+    path: ['tolerance'],
+  });
 
 export const solveInputSchema = z
   .object({

@@ -1,11 +1,13 @@
 // The engine's working form of a plan: boards as item-type counts, before ids and marks are assigned.
 
+import { boardCapacity, isOpenBoard } from './board-fit';
 import type { Model } from './model';
 
 export interface PackedBoard {
   bin: number;
   /** Item type indexes, one per piece, longest first. */
   items: number[];
+  /** Σ weight: pieces at their shortest allowed length, each with one kerf. */
   load: number;
 }
 
@@ -17,14 +19,18 @@ export interface Packing {
 
 export interface PackingScore {
   unplaced: number;
+  /** Whole money units (money.ts), compared exactly. */
   cost: number;
   scrap: number;
   offcutsUsed: number;
   keptCount: number;
 }
 
+/** Left after cutting every piece at its full length where the board allows. */
 export function remainderOf(model: Model, board: PackedBoard): number {
-  const leftover = model.bins[board.bin].capacity - board.load;
+  let fullLoad = 0;
+  for (const i of board.items) fullLoad += model.items[i].fullWeight;
+  const leftover = boardCapacity(model, board.bin, board.items) - fullLoad;
   return Math.max(0, leftover - model.kerf);
 }
 
@@ -35,7 +41,8 @@ export function isKept(model: Model, remainder: number): boolean {
 export function boardScrap(model: Model, board: PackedBoard): number {
   const bin = model.bins[board.bin];
   const rem = remainderOf(model, board);
-  return (bin.source === 'stock' ? model.trim : 0) + (isKept(model, rem) ? 0 : rem);
+  const trimmed = bin.source === 'stock' && !isOpenBoard(model, bin, board.items);
+  return (trimmed ? model.trim : 0) + (isKept(model, rem) ? 0 : rem);
 }
 
 export function scorePacking(model: Model, packing: Packing): PackingScore {
@@ -45,7 +52,7 @@ export function scorePacking(model: Model, packing: Packing): PackingScore {
   let keptCount = 0;
   for (const b of packing.boards) {
     const bin = model.bins[b.bin];
-    cost += bin.cost;
+    cost += bin.costUnits;
     scrap += boardScrap(model, b);
     if (bin.source === 'offcut') offcutsUsed++;
     if (isKept(model, remainderOf(model, b))) keptCount++;
@@ -57,8 +64,7 @@ export function scorePacking(model: Model, packing: Packing): PackingScore {
 /** Negative when `a` is the better plan: objective keys in the order the contract sets. */
 export function compareScores(a: PackingScore, b: PackingScore): number {
   if (a.unplaced !== b.unplaced) return a.unplaced - b.unplaced;
-  const costTol = 1e-9 * Math.max(1, Math.abs(a.cost), Math.abs(b.cost));
-  if (Math.abs(a.cost - b.cost) > costTol) return a.cost - b.cost;
+  if (a.cost !== b.cost) return a.cost - b.cost;
   if (a.scrap !== b.scrap) return a.scrap - b.scrap;
   if (a.offcutsUsed !== b.offcutsUsed) return b.offcutsUsed - a.offcutsUsed;
   return a.keptCount - b.keptCount;

@@ -1,6 +1,8 @@
 // Turns the engine's packing into the public plan: piece ids in cut order, marks, remainders, totals.
 
+import { isFullLength, isOpenBoard } from './board-fit';
 import { layOutBoard, usableLength } from './kerf';
+import { fromUnits, toUnits } from './money';
 import type { Model } from './model';
 import { isKept, type Packing } from './packing';
 import type { PlanBoard, PlanBound, PlanTotals, SolvePlan, StockUsage, UnplacedPiece } from './types';
@@ -30,11 +32,21 @@ export function buildPlan(
   });
   const boards: PlanBoard[] = ordered.map((pb) => {
     const bin = model.bins[pb.bin];
-    const trim = bin.source === 'stock' ? model.trim : 0;
-    const usable = bin.source === 'stock' ? usableLength(bin.length, model.trim, model.kerf) : bin.length;
+    const open = isOpenBoard(model, bin, pb.items);
+    const trim = bin.source === 'stock' && !open ? model.trim : 0;
+    const usable = trim > 0 ? usableLength(bin.length, model.trim, model.kerf) : bin.length;
     const pieceLengths = pb.items.map((i) => model.items[i].length);
+    const fullLength = isFullLength(model, bin, pb.items);
+    const cutLengths = fullLength
+      ? [bin.length]
+      : shortenToFit(
+          pieceLengths,
+          pb.items.map((i) => model.items[i].tolerance),
+          usable,
+          model.kerf,
+        );
     const pieces = pb.items.map((i) => queues[i].shift() as string);
-    const layout = layOutBoard(usable, pieceLengths, model.kerf);
+    const layout = layOutBoard(usable, cutLengths, model.kerf);
     const remainderKept = isKept(model, layout.remainder);
     const trimKerf = trim > 0 ? model.kerf : 0;
     return {
@@ -44,6 +56,8 @@ export function buildPlan(
       trim,
       pieces,
       pieceLengths,
+      cutLengths,
+      fullLength,
       marks: layout.marks,
       remainder: layout.remainder,
       remainderKept,
@@ -53,15 +67,16 @@ export function buildPlan(
     };
   });
   const totals = sumTotals(boards);
-  const gapCost = Math.max(0, round6(totals.cost - bound.cost));
+  const planUnits = ordered.reduce((s, pb) => s + model.bins[pb.bin].costUnits, 0);
+  const gapUnits = Math.max(0, planUnits - toUnits(bound.cost));
   const gapBoards = totals.boards - bound.boards;
   return {
     boards,
     unplaced,
     totals,
     lowerBound: bound,
-    gap: { boards: gapBoards, cost: gapCost },
-    provenOptimal: gapCost <= 1e-5 * Math.max(1, totals.cost),
+    gap: { boards: gapBoards, cost: fromUnits(gapUnits) },
+    provenOptimal: gapUnits === 0,
     stoppedByTime: meta.stoppedByTime,
     timeMs: meta.timeMs,
   };
@@ -85,7 +100,7 @@ function sumTotals(boards: PlanBoard[]): PlanTotals {
       usage.set(b.sourceId, u);
     }
     materialLength += b.length;
-    pieceLength += b.pieceLengths.reduce((s, l) => s + l, 0);
+    pieceLength += b.cutLengths.reduce((s, l) => s + l, 0);
     cost += b.cost;
     kerfLoss += b.kerfLoss;
     scrap += b.scrap;
@@ -117,4 +132,31 @@ function compareItems(a: number[], b: number[]): number {
 
 export function round6(x: number): number {
   return Math.round(x * 1e6) / 1e6;
+}
+
+/**
+ * Nominal pieces are cut at their ordered length where the board allows; when it does not, they
+ * give up to their tolerance, a millimetre at a time in turn, until the pieces and kerfs fit.
+ */
+export function shortenToFit(
+  lengths: number[],
+  tolerances: number[],
+  usable: number,
+  kerf: number,
+): number[] {
+  const cut = [...lengths];
+  let over = lengths.reduce((s, l) => s + l, 0) + (lengths.length - 1) * kerf - usable;
+  const slack = [...tolerances];
+  while (over > 0) {
+    const active = slack.filter((t) => t > 0).length;
+    if (active === 0) break;
+    const share = Math.max(1, Math.floor(over / active));
+    for (let k = 0; k < cut.length && over > 0; k++) {
+      const take = Math.min(share, slack[k], over);
+      cut[k] -= take;
+      slack[k] -= take;
+      over -= take;
+    }
+  }
+  return cut;
 }

@@ -17,5 +17,9 @@ export class SearchBudget {
     return this.timedOut;
   }
 
+  remainingMs(): number {
+    return Math.max(0, this.deadline - this.now());
+  }
+
   readonly shouldStop = (): boolean => this.expired();
 }

@@ -1,5 +1,7 @@
 // The public entry point: validated job in, cheapest plan found plus its lower bound out.
 
+import type { Pattern } from './column-generation';
+import { exactStep } from './exact-step';
 import { firstFitDecreasing, sequentialFill } from './greedy-fill';
 import { lengthBound, lpBound, maxBound } from './lower-bounds';
 import { buildModel, type Model } from './model';
@@ -7,6 +9,7 @@ import { compareScores, scorePacking, type Packing } from './packing';
 import { buildPlan } from './plan-builder';
 import { SearchBudget } from './search-budget';
 import { improvePacking, quickTargetSearch } from './improve';
+import { fromUnits, toUnits } from './money';
 import type { PlanBound, SolveInput, SolvePlan } from './types';
 
 /** Iteration caps that fix the search path (see README, "Determinism"). */
@@ -23,9 +26,12 @@ export function solve(input: SolveInput): SolvePlan {
   const consider = (p: Packing | null) => {
     if (p && compareScores(scorePacking(model, p), scorePacking(model, best)) < 0) best = p;
   };
-  consider(firstFitDecreasing(model, demand, limits));
+  const ffd = firstFitDecreasing(model, demand, limits);
+  consider(ffd);
 
+  const firstPlans = [best];
   let bound = lengthBound(model, placedDemand(model, best), limits);
+  let lpPool: Pattern[] = [];
   const allPlaced = best.unplaced.every((n) => n === 0);
   if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
     const lengthTarget = bound.boards;
@@ -37,12 +43,22 @@ export function solve(input: SolveInput): SolvePlan {
       maxPivots: SEARCH_CAPS.lpPivots,
       shouldStop: budget.shouldStop,
       warmStart: best,
-      stopAtCost: scorePacking(model, best).cost,
+      stopAtCost: fromUnits(scorePacking(model, best).cost),
     });
     bound = maxBound(bound, lp?.bound ?? null);
+    lpPool = lp?.pool ?? [];
     if (!meetsBound(model, best, bound)) {
-      consider(improvePacking(model, best, bound, lp, budget, lengthTarget));
+      // Untrimmed boards widen the LP's patterns beyond what trimmed boards hold: bound only.
+      const guide = model.relaxed ? null : lp;
+      consider(improvePacking(model, best, bound, guide, budget, lengthTarget));
     }
+  }
+  // The integer step: cheaper when the bound is not met, and tidier (offcuts, scrap) when it is.
+  const unusedOffcuts = model.bins.some(
+    (b, j) => b.source === 'offcut' && !best.boards.some((pb) => pb.bin === j),
+  );
+  if (allPlaced && (!meetsBound(model, best, bound) || unusedOffcuts) && !budget.expired()) {
+    consider(exactStep(model, demand, limits, [...firstPlans, ffd, best], lpPool, budget));
   }
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
   return buildPlan(model, best, bound, {
@@ -55,7 +71,7 @@ function placedDemand(model: Model, p: Packing): number[] {
   return model.items.map((it, i) => it.count - p.unplaced[i]);
 }
 
+/** Exact, in whole money units: the bound is already rounded up to a cost a plan can have. */
 export function meetsBound(model: Model, p: Packing, bound: PlanBound): boolean {
-  const cost = scorePacking(model, p).cost;
-  return cost <= bound.cost + 1e-5 * Math.max(1, cost);
+  return scorePacking(model, p).cost <= toUnits(bound.cost);
 }

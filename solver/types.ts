@@ -18,6 +18,8 @@ export interface PieceInput {
   id: string;
   length: number;
   quantity: number;
+  /** Millimetres the piece may be delivered short (a nominal piece); 0 or missing = exact. */
+  tolerance?: number;
 }
 
 export interface SolveInput {
@@ -36,11 +38,16 @@ export interface PlanBoard {
   sourceId: string;
   source: BoardSource;
   length: number;
-  /** End trim cut off first (new stock only); one kerf follows it when trim > 0. */
+  /** End trim cut off first (new stock with an exact piece only); one kerf follows it when trim > 0. */
   trim: number;
   /** Piece ids in cut order. */
   pieces: string[];
+  /** Ordered lengths, as in the cut list. */
   pieceLengths: number[];
+  /** Lengths actually cut: a nominal piece may be up to its tolerance short of its ordered length. */
+  cutLengths: number[];
+  /** One piece sold at the whole stock length: no trim, no cut, no kerf. */
+  fullLength: boolean;
   /** Position of every saw cut's near edge, measured from the board's start after the trim. */
   marks: number[];
   /** Length left after the last cut. */
@@ -87,7 +94,7 @@ export interface PlanBound {
   boards: number;
   /** No plan that places the same pieces can cost less. */
   cost: number;
-  /** Which bound gave the figures: the length bound or the pattern LP. */
+  /** Where the cost bound came from: the length bound or the pattern LP. */
   method: 'length' | 'lp';
 }
 

@@ -7,9 +7,11 @@ export default async function SawLayout({ children }: { children: React.ReactNod
   const user = await requirePageUser();
   return (
     <AppShell user={user} nav={officeNav}>
-      <RoleGate user={user} action="saw:cut">
-        {children}
-      </RoleGate>
+      <div className="saw-contrast">
+        <RoleGate user={user} action="saw:cut">
+          {children}
+        </RoleGate>
+      </div>
     </AppShell>
   );
 }

@@ -22,6 +22,7 @@ import { ScheduleDetailsFields, type ScheduleDetails } from './schedule-details'
 import { SendToJobForm, type OpenJob } from './send-to-job-form';
 import { StructureNotice } from './structure-notice';
 import { panelIssues, useFramePreview } from './use-frame-preview';
+import { useUnsavedWarning } from './use-unsaved-warning';
 
 type Props = { schedule: FrameScheduleDto; sections: FrameSectionOption[]; openJobs: OpenJob[] };
 
@@ -31,6 +32,7 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
   const [details, setDetails] = useState<ScheduleDetails>({
     name: schedule.name,
     customerName: schedule.customerName,
+    customerEmail: schedule.customerEmail,
     unit: schedule.unit,
   });
   const [drafts, setDrafts] = useState<PanelDraft[]>(() =>
@@ -63,9 +65,14 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
     onSuccess: () => router.push('/frames'),
   });
   const dirty = bodyKey !== savedKey;
+  useUnsavedWarning(dirty && !remove.isSuccess && !copy.isPending);
 
   // A new first panel starts on a framing size rather than whatever sorts first.
   const framingSectionId = (sections.find((s) => s.thickness >= 38 && s.width >= 75) ?? sections[0])?.id;
+  const claddingSectionId = (
+    sections.find((s) => /cladding|shiplap|weatherboard|tongue|t&g|featherboard/i.test(s.name)) ??
+    sections.find((s) => s.thickness <= 25 && s.width >= 100)
+  )?.id;
   const dimensions = useMemo(
     () =>
       new Map<number, SectionDimensions>(
@@ -153,7 +160,10 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
         ))}
         <AddPanelBar
           onAdd={(kind) =>
-            setDrafts((ds) => [...ds, newPanelDraft(kind, ds, framingSectionId, details.unit)])
+            setDrafts((ds) => [
+              ...ds,
+              newPanelDraft(kind, ds, framingSectionId, details.unit, claddingSectionId),
+            ])
           }
         />
       </section>
@@ -219,6 +229,7 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
         <SendToJobForm
           scheduleId={schedule.id}
           customerName={details.customerName}
+          customerEmail={details.customerEmail}
           openJobs={openJobs}
           disabled={drafts.length === 0 || clientErrors || Boolean(preview.error)}
           beforeSend={async () => {

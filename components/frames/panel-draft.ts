@@ -60,15 +60,18 @@ export function newPanelDraft(
   drafts: PanelDraft[],
   fallbackSectionId: number | undefined,
   unit: FrameUnit,
+  /** Cladding starts on a cladding board, not on the framing section above it. */
+  claddingSectionId?: number,
 ): PanelDraft {
   let n = drafts.length + 1;
   const ids = new Set(drafts.map((d) => d.id));
   while (ids.has(`p${n}`)) n++;
   const id = `p${n}`;
   const lastWith = (kinds: PanelKind[]) => [...drafts].reverse().find((d) => kinds.includes(d.kind));
+  const fallback = kind === 'cladding' ? (claddingSectionId ?? fallbackSectionId) : fallbackSectionId;
   const sectionId =
-    [...drafts].reverse().find((d) => d.values.sectionId)?.values.sectionId ??
-    (fallbackSectionId ? String(fallbackSectionId) : '');
+    [...drafts].reverse().find((d) => d.values.sectionId && (kind === 'cladding') === (d.kind === 'cladding'))
+      ?.values.sectionId ?? (fallback ? String(fallback) : '');
   const sameKind = drafts.filter((d) => d.kind === kind).length;
   const values: Record<string, unknown> = {
     ...NEW_PANEL_VALUES[kind],

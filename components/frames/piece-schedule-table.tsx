@@ -2,6 +2,7 @@ import type { FrameItem } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
 import type { FrameUnit } from '@/lib/queries/frames';
 import { formatLength } from '@/lib/units';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** Every piece: its mark on the drawings, where it goes, section, length, count and any angled cut. */
 export function PieceScheduleTable({
@@ -20,7 +21,7 @@ export function PieceScheduleTable({
     totals.set(item.sectionId, { pieces: t.pieces + item.quantity, mm: t.mm + item.quantity * item.length });
   }
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Pieces of the schedule">
       <table className="w-full text-left" data-testid="piece-schedule">
         <thead className="bg-shaving text-sm">
           <tr>
@@ -63,6 +64,6 @@ export function PieceScheduleTable({
           ))}
         </tfoot>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -3,9 +3,9 @@
 import { Field } from '@/components/ui/field';
 import type { FrameUnit } from '@/lib/queries/frames';
 
-export type ScheduleDetails = { name: string; customerName: string; unit: FrameUnit };
+export type ScheduleDetails = { name: string; customerName: string; customerEmail: string; unit: FrameUnit };
 
-/** Name, customer and the unit lengths are shown in. */
+/** Name, customer and their e-mail, and the unit lengths are shown in. */
 export function ScheduleDetailsFields({
   value,
   errors,
@@ -16,7 +16,7 @@ export function ScheduleDetailsFields({
   onChange: (v: ScheduleDetails) => void;
 }) {
   return (
-    <div className="grid gap-3 sm:grid-cols-3">
+    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
       <Field label="Schedule name" error={errors.name}>
         {(p) => (
           <input
@@ -33,6 +33,17 @@ export function ScheduleDetailsFields({
             {...p}
             value={value.customerName}
             onChange={(e) => onChange({ ...value, customerName: e.target.value })}
+            autoComplete="off"
+          />
+        )}
+      </Field>
+      <Field label="Customer e-mail" hint="Goes with the cut list to the job" error={errors.customerEmail}>
+        {(p) => (
+          <input
+            {...p}
+            type="email"
+            value={value.customerEmail}
+            onChange={(e) => onChange({ ...value, customerEmail: e.target.value })}
             autoComplete="off"
           />
         )}

@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 type Row = {
   id: number;
@@ -13,7 +14,7 @@ type Row = {
 export function ScheduleList({ schedules }: { schedules: Row[] }) {
   if (schedules.length === 0) return <p className="p-4 text-bark-soft">No frame schedules yet.</p>;
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Frame schedules">
       <table className="w-full text-left" data-testid="schedule-list">
         <thead className="bg-shaving text-sm">
           <tr>
@@ -40,6 +41,6 @@ export function ScheduleList({ schedules }: { schedules: Row[] }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -14,13 +14,21 @@ export type OpenJob = { id: number; reference: string; customerName: string; sta
 type Props = {
   scheduleId: number;
   customerName: string;
+  customerEmail: string;
   openJobs: OpenJob[];
   disabled: boolean;
   beforeSend: () => Promise<void>;
 };
 
 /** Sends the saved cut list, summed by section, to a new job or a draft or planned one, then opens the job. */
-export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, beforeSend }: Props) {
+export function SendToJobForm({
+  scheduleId,
+  customerName,
+  customerEmail,
+  openJobs,
+  disabled,
+  beforeSend,
+}: Props) {
   const router = useRouter();
   const [target, setTarget] = useState<'new' | 'existing'>('new');
   const send = useMutation({
@@ -35,15 +43,25 @@ export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, be
       ? ((send.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
       : [];
   const error = (path: string) => issues.find((i) => i.path === path)?.message;
+  // The job already holds this schedule's pieces: the server asks before adding a second set.
+  const alreadySent =
+    send.error instanceof ApiError &&
+    send.error.status === 409 &&
+    Boolean((send.error.body as { details?: { alreadySent?: number } })?.details?.alreadySent);
+  const [lastJobId, setLastJobId] = useState<number | null>(null);
 
   function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = new FormData(event.currentTarget);
-    if (target === 'existing') send.mutate({ jobId: Number(form.get('jobId') ?? 0) });
-    else
+    if (target === 'existing') {
+      const jobId = Number(form.get('jobId') ?? 0);
+      setLastJobId(jobId);
+      send.mutate({ jobId });
+    } else
       send.mutate({
         newJob: {
           customerName: String(form.get('customerName') ?? ''),
+          customerEmail: String(form.get('customerEmail') ?? ''),
           reference: String(form.get('reference') ?? '') || undefined,
           dueDate: String(form.get('dueDate') ?? '') || undefined,
         },
@@ -68,9 +86,20 @@ export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, be
         ))}
       </fieldset>
       {target === 'new' ? (
-        <div className="grid gap-3 sm:grid-cols-3">
+        <div className="grid gap-3 sm:grid-cols-2">
           <Field label="Customer" error={error('newJob.customerName')}>
             {(p) => <input {...p} name="customerName" defaultValue={customerName} autoComplete="off" />}
+          </Field>
+          <Field label="Customer e-mail" error={error('newJob.customerEmail')}>
+            {(p) => (
+              <input
+                {...p}
+                name="customerEmail"
+                type="email"
+                defaultValue={customerEmail}
+                autoComplete="off"
+              />
+            )}
           </Field>
           <Field label="Job reference" hint="Blank: the next number" error={error('newJob.reference')}>
             {(p) => <input {...p} name="reference" autoComplete="off" />}
@@ -97,7 +126,30 @@ export function SendToJobForm({ scheduleId, customerName, openJobs, disabled, be
           )}
         </Field>
       )}
-      {send.error && !issues.length && <Notice tone="error">{send.error.message}</Notice>}
+      {alreadySent && lastJobId ? (
+        <div className="space-y-2" data-testid="already-sent">
+          <Notice tone="warning">{send.error?.message}</Notice>
+          <div className="flex flex-wrap gap-2">
+            <Button
+              type="button"
+              onClick={() => send.mutate({ jobId: lastJobId, ifAlreadySent: 'replace' })}
+              disabled={send.isPending}
+            >
+              Replace them
+            </Button>
+            <Button
+              type="button"
+              variant="secondary"
+              onClick={() => send.mutate({ jobId: lastJobId, ifAlreadySent: 'add' })}
+              disabled={send.isPending}
+            >
+              Add a second set
+            </Button>
+          </div>
+        </div>
+      ) : (
+        send.error && !issues.length && <Notice tone="error">{send.error.message}</Notice>
+      )}
       {send.isSuccess && <Notice>Sent. Opening the job…</Notice>}
       <Button type="submit" size="lg" disabled={disabled || send.isPending || send.isSuccess}>
         {send.isPending ? 'Sending…' : 'Send cut list to job'}

@@ -15,6 +15,7 @@ import {
 import { sectionsQuery } from '@/lib/queries/sections';
 import { ItemRow } from './item-row';
 import { sumItemsPerSection } from './section-totals';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const PAGE = 200;
 
@@ -46,7 +47,7 @@ export function ItemsTable({
   return (
     <div className="space-y-3">
       {error && <Notice tone="error">{error}</Notice>}
-      <div className="overflow-x-auto">
+      <ScrollRegion label="Line items">
         <table className="w-full text-left" data-testid="items-table">
           <thead className="bg-shaving text-sm">
             <tr>
@@ -81,7 +82,7 @@ export function ItemsTable({
             )}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       {items.length > shown && (
         <Button variant="secondary" onClick={() => setShown((n) => n + PAGE * 5)}>
           Show more rows ({items.length - shown} not shown)

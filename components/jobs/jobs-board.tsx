@@ -10,7 +10,9 @@ import { Notice } from '@/components/ui/notice';
 import { createJobRequest, jobsQuery, type JobFilters as Filters } from '@/lib/queries/jobs';
 import { JobDetailsForm } from './job-details-form';
 import { JobFilters } from './job-filters';
+import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { JobStatusBadge } from './job-status-badge';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** The office's job list: filters, the table, and a form for a new job. */
 export function JobsBoard() {
@@ -52,7 +54,7 @@ export function JobsBoard() {
           <p className="py-4 text-bark-soft">No jobs match these filters.</p>
         )}
         {jobs.data && jobs.data.length > 0 && (
-          <div className="overflow-x-auto">
+          <ScrollRegion label="Jobs">
             <table className="w-full text-left" data-testid="jobs-table">
               <thead className="bg-shaving text-sm">
                 <tr>
@@ -61,6 +63,7 @@ export function JobsBoard() {
                   <th className="p-3">Due</th>
                   <th className="p-3 text-right">Pieces</th>
                   <th className="p-3">Status</th>
+                  <th className="p-3">Quote</th>
                 </tr>
               </thead>
               <tbody>
@@ -77,11 +80,16 @@ export function JobsBoard() {
                     <td className="p-3">
                       <JobStatusBadge status={job.status} />
                     </td>
+                    <td className="p-3" data-testid="job-quote-state">
+                      {job.quoteNumber && job.paymentState
+                        ? `${job.quoteNumber} · ${PAYMENT_STATE_LABEL[job.paymentState]}`
+                        : '—'}
+                    </td>
                   </tr>
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
         )}
       </Card>
     </div>

@@ -19,7 +19,7 @@ export function AppShell({
   const items = nav.filter((item) => item.roles.includes(user.role));
   return (
     <div className="min-h-screen">
-      <header className="no-print bg-spruce text-white">
+      <header className="no-print on-dark bg-spruce text-white">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-4 px-4 py-3">
           <Link href="/" className="text-white">
             <Logo size={34} />
@@ -39,7 +39,9 @@ export function AppShell({
           </div>
         </div>
       </header>
-      <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
+      <main id="main-content" tabIndex={-1} className="mx-auto max-w-7xl px-4 py-6 focus:outline-none">
+        {children}
+      </main>
     </div>
   );
 }

@@ -6,6 +6,8 @@ export type NavItem = { href: string; label: string; roles: Role[] };
 export const officeNav: NavItem[] = [
   { href: '/overview', label: 'Overview', roles: ['owner'] },
   { href: '/jobs', label: 'Jobs', roles: ['owner', 'yard_hand'] },
+  { href: '/customers', label: 'Customers', roles: ['owner', 'yard_hand'] },
+  { href: '/payments', label: 'Payments', roles: ['owner'] },
   { href: '/frames', label: 'Frame schedules', roles: ['owner', 'yard_hand'] },
   { href: '/rack', label: 'Offcut rack', roles: ['owner', 'yard_hand'] },
   { href: '/stock', label: 'Stock', roles: ['owner', 'yard_hand'] },

@@ -6,14 +6,15 @@ import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { emailPlanRequest } from '@/lib/queries/plans';
 
-/** E-mails the cut sheet (PDF) and the quote to the customer. */
+/** E-mails the quote with a link to accept and pay, and the customer's cut sheet (PDF). */
 export function EmailSheetForm({ planId, defaultTo }: { planId: number; defaultTo: string }) {
   const [busy, setBusy] = useState(false);
   const [result, setResult] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
 
   async function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const data = new FormData(e.currentTarget);
+    const form = e.currentTarget;
+    const data = new FormData(form);
     setBusy(true);
     setResult(null);
     try {
@@ -21,7 +22,9 @@ export function EmailSheetForm({ planId, defaultTo }: { planId: number; defaultT
         to: String(data.get('to')),
         message: String(data.get('message') ?? ''),
       });
-      setResult({ tone: 'info', text: `Cut sheet and quote sent to ${sent.to}.` });
+      setResult({ tone: 'info', text: `Quote, link to accept and pay, and cut sheet sent to ${sent.to}.` });
+      // The message was for this e-mail only; the next one starts blank.
+      (form.elements.namedItem('message') as HTMLTextAreaElement).value = '';
     } catch (error) {
       setResult({ tone: 'error', text: (error as Error).message });
     } finally {
@@ -36,7 +39,7 @@ export function EmailSheetForm({ planId, defaultTo }: { planId: number; defaultT
       </Field>
       <Field label="Message (optional)">{(p) => <textarea {...p} name="message" rows={2} />}</Field>
       <Button type="submit" disabled={busy}>
-        {busy ? 'Sending…' : 'E-mail cut sheet and quote'}
+        {busy ? 'Sending…' : 'E-mail quote and cut sheet'}
       </Button>
       {result && (
         <Notice tone={result.tone} data-testid="email-result">

@@ -2,13 +2,14 @@
 
 import { useQueries } from '@tanstack/react-query';
 import Link from 'next/link';
-import { Card } from '@/components/ui/field';
+import { cardClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
 import { planQuery, type PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
 import { countBoardsByLength } from './group-boards';
 import { formatPence } from './money';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 type Row = {
   label: string;
@@ -55,7 +56,7 @@ export function PlanCompare({ ids }: { ids: [number, number] }) {
     return row.value(p) === winner;
   };
   return (
-    <Card className="overflow-x-auto">
+    <ScrollRegion label="Plans compared" className={cardClass}>
       <table className="w-full text-left" data-testid="plan-compare">
         <thead>
           <tr className="border-b-2 border-grain">
@@ -114,6 +115,6 @@ export function PlanCompare({ ids }: { ids: [number, number] }) {
           </tr>
         </tbody>
       </table>
-    </Card>
+    </ScrollRegion>
   );
 }

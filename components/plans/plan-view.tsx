@@ -12,6 +12,7 @@ import { DiagramLegend } from './diagram-legend';
 import { EmailSheetForm } from './email-sheet-form';
 import { PlanFigures } from './plan-figures';
 import { PlanSectionBoards } from './plan-section-boards';
+import { QuotePanel } from '@/components/quotes/quote-panel';
 import { ReleaseControls } from './release-controls';
 import { ReplanForm } from './replan-form';
 
@@ -21,11 +22,13 @@ export function PlanView({
   context,
   previousPlanId,
   canAct,
+  isOwner,
 }: {
   planId: number;
   context: PlanContext;
   previousPlanId?: number;
   canAct: boolean;
+  isOwner: boolean;
 }) {
   const plan = useQuery(planQuery(planId));
   if (plan.isPending) return <p>Loading the plan…</p>;
@@ -70,10 +73,15 @@ export function PlanView({
           )}
         </div>
       </header>
-      {canAct && <ReleaseControls plan={p} />}
+      {canAct && <ReleaseControls plan={p} isOwner={isOwner} />}
       <Card>
         <PlanFigures plan={p} />
       </Card>
+      {canAct && (
+        <Card>
+          <QuotePanel plan={p} canShare={canAct} />
+        </Card>
+      )}
       <Card className="space-y-6">
         <div className="flex flex-wrap items-center justify-between gap-3">
           <h2 className="text-xl font-bold">Boards in saw order</h2>

@@ -17,17 +17,20 @@ import {
 type Taken = { id: number; tag: string; status: string };
 
 /** Release to the saw, or take back. A release that lost an offcut names it and offers a fresh plan. */
-export function ReleaseControls({ plan }: { plan: PlanViewData }) {
+export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner: boolean }) {
   const queryClient = useQueryClient();
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const [taken, setTaken] = useState<Taken[]>([]);
+  const [needsPayment, setNeedsPayment] = useState(false);
+  const [reason, setReason] = useState('');
 
   async function act(request: () => Promise<unknown>) {
     setBusy(true);
     setError(null);
     setTaken([]);
+    setNeedsPayment(false);
     try {
       await request();
       await Promise.all([
@@ -37,8 +40,11 @@ export function ReleaseControls({ plan }: { plan: PlanViewData }) {
       router.refresh();
     } catch (e) {
       setError((e as Error).message);
-      if (e instanceof ApiError && e.status === 409)
-        setTaken((e.body as { details?: { offcuts?: Taken[] } })?.details?.offcuts ?? []);
+      if (e instanceof ApiError && e.status === 409) {
+        const details = (e.body as { details?: { offcuts?: Taken[]; missing?: string } })?.details;
+        setTaken(details?.offcuts ?? []);
+        setNeedsPayment(Boolean(details?.missing));
+      }
     } finally {
       setBusy(false);
     }
@@ -108,6 +114,30 @@ export function ReleaseControls({ plan }: { plan: PlanViewData }) {
                 Plan again with what is on the rack now
               </Button>
             </>
+          )}
+          {needsPayment && isOwner && (
+            <form
+              className="mt-3 flex flex-wrap items-end gap-2"
+              onSubmit={(e) => {
+                e.preventDefault();
+                void act(() => releasePlanRequest(plan.id, reason));
+              }}
+            >
+              <label className="flex min-w-64 flex-1 flex-col text-sm font-semibold text-bark">
+                Owner override: reason (recorded)
+                <input
+                  className="mt-1 rounded border border-bark-soft px-2 py-1.5 font-normal"
+                  value={reason}
+                  onChange={(e) => setReason(e.target.value)}
+                  minLength={3}
+                  required
+                  data-testid="override-reason"
+                />
+              </label>
+              <Button type="submit" variant="secondary" disabled={busy}>
+                Release anyway
+              </Button>
+            </form>
           )}
         </Notice>
       )}

@@ -2,6 +2,7 @@
 
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 import { downloadCsv, rowsToCsv, type Column } from './csv-download';
 
 type Props<T> = {
@@ -43,7 +44,7 @@ export function ChartPanel<T>({ id, title, lead, rows, columns, empty, emptyText
           <div className="h-64 w-full">{children}</div>
           <details>
             <summary className="cursor-pointer text-sm font-semibold text-spruce">Show the figures</summary>
-            <div className="mt-2 max-h-80 overflow-auto">
+            <ScrollRegion label={`${title}: the figures`} className="mt-2 max-h-80">
               <table className="w-full text-left text-sm">
                 <thead className="sticky top-0 bg-shaving">
                   <tr>
@@ -66,7 +67,7 @@ export function ChartPanel<T>({ id, title, lead, rows, columns, empty, emptyText
                   ))}
                 </tbody>
               </table>
-            </div>
+            </ScrollRegion>
           </details>
         </>
       )}

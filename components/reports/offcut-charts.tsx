@@ -5,6 +5,7 @@ import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAx
 import { formatMetres, formatPence } from '@/lib/format/money';
 import type { OffcutReport } from '@/lib/reports/offcut-report';
 import { ChartPanel } from './chart-panel';
+import { legendText } from './legend-text';
 import { CHART, metres, shortWeek } from './chart-theme';
 
 export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport; clearAfterDays: number }) {
@@ -37,7 +38,7 @@ export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport;
             <XAxis dataKey="label" fontSize={12} />
             <YAxis fontSize={12} allowDecimals={false} />
             <Tooltip />
-            <Legend />
+            <Legend formatter={legendText} />
             <Bar dataKey="madeCount" name="Made" fill={CHART.spruceSoft} />
             <Bar dataKey="usedCount" name="Used" fill={CHART.spruce} />
             <Bar dataKey="scrappedCount" name="Scrapped" fill={CHART.brick} />

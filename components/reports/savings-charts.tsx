@@ -14,6 +14,7 @@ import {
 import { formatPence } from '@/lib/format/money';
 import type { SavingsReport } from '@/lib/reports/savings-report';
 import { ChartPanel } from './chart-panel';
+import { legendText } from './legend-text';
 import { CHART, pounds } from './chart-theme';
 
 export function SavingsCharts({ report }: { report: SavingsReport }) {
@@ -60,7 +61,7 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
           <YAxis yAxisId="job" fontSize={12} unit=" £" />
           <YAxis yAxisId="run" orientation="right" fontSize={12} unit=" £" />
           <Tooltip />
-          <Legend />
+          <Legend formatter={legendText} />
           <Bar yAxisId="job" dataKey="plainPounds" name="Longest-first (£)" fill={CHART.grain} />
           <Bar yAxisId="job" dataKey="kerfwisePounds" name="Kerfwise (£)" fill={CHART.spruce} />
           <Line

@@ -3,6 +3,7 @@
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { StockReport } from '@/lib/reports/stock-report';
 import { ChartPanel } from './chart-panel';
+import { legendText } from './legend-text';
 import { CHART } from './chart-theme';
 
 export function StockReportView({ report }: { report: StockReport }) {
@@ -60,7 +61,7 @@ export function StockReportView({ report }: { report: StockReport }) {
             <XAxis dataKey="label" fontSize={10} interval={0} angle={-40} textAnchor="end" height={60} />
             <YAxis fontSize={12} allowDecimals={false} />
             <Tooltip />
-            <Legend verticalAlign="top" />
+            <Legend verticalAlign="top" formatter={legendText} />
             <Bar dataKey="onHand" name="On hand" fill={CHART.spruce} />
             <Bar dataKey="used" name="Cut in range" fill={CHART.amber} />
           </BarChart>

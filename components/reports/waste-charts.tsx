@@ -15,6 +15,7 @@ import {
 import { formatMetres, formatPence } from '@/lib/format/money';
 import type { WasteReport } from '@/lib/reports/waste-report';
 import { ChartPanel } from './chart-panel';
+import { legendText } from './legend-text';
 import { CHART, metres, shortWeek } from './chart-theme';
 
 const NOTHING_CUT =
@@ -69,7 +70,7 @@ export function WasteCharts({ report }: { report: WasteReport }) {
               allowDataOverflow
             />
             <Tooltip />
-            <Legend />
+            <Legend formatter={legendText} />
             <Bar yAxisId="m" dataKey="wasteM" name="Waste (m)" fill={CHART.amber} />
             <Line
               yAxisId="pct"
@@ -127,7 +128,7 @@ export function WasteCharts({ report }: { report: WasteReport }) {
             <XAxis dataKey="label" fontSize={12} />
             <YAxis fontSize={12} unit=" m" />
             <Tooltip />
-            <Legend />
+            <Legend formatter={legendText} />
             <Bar dataKey="cutM" name="Cut (m)" fill={CHART.spruce} />
             <Bar dataKey="boughtM" name="Bought (m)" fill={CHART.grain} />
           </BarChart>

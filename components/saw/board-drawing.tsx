@@ -1,6 +1,9 @@
 // A to-scale side view of one board: trim, pieces, kerfs and what is left, with the next cut marked.
+// Same code as the plan and the cut sheet: pieces in green, a kept remainder dotted, scrap hatched.
+import { BoardPatterns, INK, PIECE_FILLS } from '@/components/plans/board-patterns';
 import type { SawBoard } from '@/lib/queries/saw';
 
+const W = 1000;
 const H = 56;
 
 export function BoardDrawing({
@@ -12,10 +15,11 @@ export function BoardDrawing({
   kerfMm: number;
   nextCut: number | null;
 }) {
-  const W = board.lengthMm;
+  const x = (mm: number) => (mm / board.lengthMm) * W;
   const start = board.trimMm > 0 ? board.trimMm + kerfMm : 0; // the squared end
   const lastEnd = board.pieces.length ? start + board.pieces[board.pieces.length - 1].markMm : start;
-  const remainderStart = Math.min(W, lastEnd + (board.remainderMm > 0 ? kerfMm : 0));
+  const remainderStart = Math.min(board.lengthMm, lastEnd + (board.remainderMm > 0 ? kerfMm : 0));
+  const done = nextCut ?? board.pieces.length;
   return (
     <svg
       viewBox={`0 0 ${W} ${H}`}
@@ -25,38 +29,36 @@ export function BoardDrawing({
       aria-label={`Board ${board.lengthMm} mm with ${board.pieces.length} pieces`}
       data-testid="board-drawing"
     >
-      <rect x={0} y={0} width={W} height={H} fill="#efe4d0" />
+      <BoardPatterns prefix="saw" />
+      <rect x={0} y={0} width={W} height={H} fill="white" />
       {board.trimMm > 0 && (
-        <rect x={0} y={0} width={Math.max(board.trimMm, W / 150)} height={H} fill="#a3271f" />
+        <rect x={0} y={0} width={Math.max(x(board.trimMm), 6)} height={H} fill="url(#saw-scrap)" />
       )}
-      {board.pieces.map((p, i) => {
-        const x = start + p.markMm - p.lengthMm;
-        const isNext = nextCut === i;
-        return (
-          <g key={i}>
-            <rect
-              x={x}
-              y={0}
-              width={p.lengthMm}
-              height={H}
-              fill={isNext ? '#d7e8e1' : i < (nextCut ?? board.pieces.length) ? '#d9c6a5' : '#f8f3ea'}
-              stroke="#231a12"
-              strokeWidth={W / 400}
-            />
-            {isNext && (
-              <rect x={start + p.markMm - W / 250} y={0} width={W / 125} height={H} fill="#1d5545" />
-            )}
-          </g>
-        );
-      })}
+      {board.pieces.map((p, i) => (
+        <g key={i}>
+          <rect
+            x={x(start + p.markMm - p.lengthMm)}
+            y={0}
+            width={x(p.lengthMm)}
+            height={H}
+            fill={PIECE_FILLS[i % 2]}
+            opacity={i < done ? 0.45 : 1}
+            stroke={INK}
+            strokeWidth={2}
+          />
+          {nextCut === i && <rect x={x(start + p.markMm) - 4} y={0} width={8} height={H} fill="#1d5545" />}
+        </g>
+      ))}
       {board.remainderMm > 0 && (
         <rect
-          x={remainderStart}
+          x={x(remainderStart)}
           y={0}
-          width={W - remainderStart}
+          width={W - x(remainderStart)}
           height={H}
-          fill={board.keepRemainder ? '#b86a12' : '#a3271f'}
-          opacity={0.85}
+          fill={`url(#saw-${board.keepRemainder ? 'kept' : 'scrap'})`}
+          stroke={INK}
+          strokeWidth={2}
+          data-testid={board.keepRemainder ? 'drawing-kept' : 'drawing-scrap'}
         />
       )}
     </svg>

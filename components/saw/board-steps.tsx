@@ -1,4 +1,4 @@
-// What to fetch, the trim, each cut as a mark from the squared end, and what is left.
+// What to fetch, the trim, each piece by its length (marks as the tape's aid), and what is left.
 import { sawLength } from './format-saw-length';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
@@ -27,20 +27,37 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
   );
 }
 
+/** "11.3° top cut, long point 2130": an angled piece is listed at its long point. */
+export function angleLine(
+  p: { angleTenths?: number; cutNote?: string; lengthMm: number },
+  len: (mm: number) => string,
+) {
+  if (!p.angleTenths) return null;
+  const what = p.cutNote ? `${p.cutNote}` : 'angled cut';
+  return `${(p.angleTenths / 10).toFixed(1)}° ${what}, long point ${len(p.lengthMm)}`;
+}
+
 export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit; nextCut: number }) {
   const len = (mm: number) => sawLength(mm, unit);
-  const totals = board.pieces.map((_, i) => board.pieces.slice(0, i + 1).reduce((n, p) => n + p.lengthMm, 0));
+  const from = board.source === 'offcut' ? 'the sawn end' : 'the squared end';
   return (
     <ol className="space-y-2" data-testid="cut-list">
-      {board.trimMm > 0 && (
-        <li className="flex min-h-12 items-center gap-3 rounded-lg border-2 border-grain bg-white px-3 text-lg">
-          <span className="w-8 font-bold">0</span>
-          <span className="flex-1 font-semibold">Square the end: trim {len(board.trimMm)}</span>
-          <span className="text-sm text-bark-soft">measure every mark from the squared end</span>
-        </li>
-      )}
+      <li className="flex min-h-12 flex-wrap items-center gap-x-3 rounded-lg border-2 border-grain bg-white px-3 text-lg">
+        {board.trimMm > 0 ? (
+          <>
+            <span className="w-8 font-bold">0</span>
+            <span className="flex-1 font-semibold">Square the end: trim {len(board.trimMm)}</span>
+          </>
+        ) : (
+          <span className="flex-1 font-semibold" data-testid="measure-from">
+            Measure from {from}
+          </span>
+        )}
+        <span className="text-base text-bark-soft">Saw on the waste side of each mark.</span>
+      </li>
       {board.pieces.map((p, i) => {
         const state = board.status !== 'pending' || i < nextCut ? 'done' : i === nextCut ? 'next' : 'todo';
+        const angle = angleLine(p, len);
         return (
           <li
             key={i}
@@ -55,16 +72,23 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
           >
             <span className="text-lg font-bold">{i + 1}</span>
             <span>
-              <span className="block text-sm font-semibold uppercase tracking-wide text-bark-soft">
-                Mark at
+              <span className="block font-mono text-4xl font-bold text-bark" data-testid="piece-length">
+                {len(p.lengthMm)}
               </span>
-              <span className="font-mono text-4xl font-bold text-bark">{len(p.markMm)}</span>
+              <span className="block text-xl font-semibold">
+                {p.label || 'piece'}
+                {p.marks ? ` · ${p.marks}` : ''}
+              </span>
+              {angle && (
+                <span className="block text-lg font-bold text-brick" data-testid="piece-angle">
+                  {angle}
+                </span>
+              )}
             </span>
-            <span className="text-right">
-              <span className="block text-xl font-bold">
-                {p.label || 'piece'} · {len(p.lengthMm)}
-              </span>
-              <span className="block text-sm text-bark-soft">running total of pieces {len(totals[i])}</span>
+            <span className="text-right text-sm text-bark-soft">
+              with a tape: mark at
+              <span className="block font-mono text-lg font-semibold">{len(p.markMm)}</span>
+              from {from}
             </span>
           </li>
         );
@@ -79,11 +103,19 @@ export function LeftOver({ board, unit }: { board: SawBoard; unit: Unit }) {
   return board.keepRemainder ? (
     <p className="rounded-lg bg-amber px-4 py-3 text-xl font-bold text-white" data-testid="left-over">
       Keep {len}: it gets a tag when you confirm — label it and rack it.
+      {board.section.treated && (
+        <span className="block text-base font-semibold">
+          Wet treated timber: staple the tag on, or write the tag on the end in timber crayon.
+        </span>
+      )}
     </p>
   ) : (
     <p className="rounded-lg bg-brick px-4 py-3 text-xl font-bold text-white" data-testid="left-over">
       Scrap {len}
-      {board.section.treated ? ' — treated: never burn it' : ''}.
+      {board.section.treated
+        ? ' — treated: into the treated-waste skip; never burnt, never bedding, mulch or compost'
+        : ''}
+      .
     </p>
   );
 }

@@ -2,10 +2,12 @@
 
 import { lengthText } from './stock-length-label';
 import { useQuery } from '@tanstack/react-query';
-import { Card } from '@/components/ui/field';
+import { cardClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit } from '@/db/enums';
 import { stockMovementsQuery } from '@/lib/queries/stock';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { cn } from '@/lib/cn';
 
 const KIND_NAMES: Record<string, string> = { receipt: 'Delivery', stocktake: 'Stocktake' };
 
@@ -14,7 +16,7 @@ export function RecentMovements({ unit }: { unit: DisplayUnit }) {
   const movements = useQuery(stockMovementsQuery());
   if (movements.error) return <Notice tone="error">{movements.error.message}</Notice>;
   return (
-    <Card className="overflow-x-auto p-0">
+    <ScrollRegion label="Recent stock movements" className={cn(cardClass, 'p-0')}>
       <table className="w-full text-left text-sm" data-testid="movements-table">
         <thead className="bg-shaving">
           <tr>
@@ -49,6 +51,6 @@ export function RecentMovements({ unit }: { unit: DisplayUnit }) {
         </tbody>
       </table>
       {movements.isPending && <p className="p-3">Loading…</p>}
-    </Card>
+    </ScrollRegion>
   );
 }

@@ -2,12 +2,14 @@
 
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
-import { Card } from '@/components/ui/field';
+import { Card, cardClass } from '@/components/ui/field';
 import type { DisplayUnit } from '@/db/enums';
 import { formatPence } from '@/lib/format/money';
 import type { SectionRow } from '@/lib/queries/stock';
 import { SectionEditor } from './section-editor';
 import { lengthText, onHandText } from './stock-length-label';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { cn } from '@/lib/cn';
 
 /** The sections the yard sells. The owner edits; everyone else reads. */
 export function SectionsCatalogue({
@@ -36,7 +38,7 @@ export function SectionsCatalogue({
           />
         </Card>
       )}
-      <Card className="overflow-x-auto p-0">
+      <ScrollRegion label="Sections" className={cn(cardClass, 'p-0')}>
         <table className="w-full text-left" data-testid="sections-table">
           <thead className="bg-shaving text-sm">
             <tr>
@@ -92,7 +94,7 @@ export function SectionsCatalogue({
             ))}
           </tbody>
         </table>
-      </Card>
+      </ScrollRegion>
     </div>
   );
 }

@@ -43,8 +43,8 @@ export function Field({ label, error, hint, children }: FieldProps) {
 
 export const inputClass = control;
 
+export const cardClass = 'rounded-xl border-2 border-shaving bg-white p-5 shadow-sm';
+
 export function Card({ className, ...props }: React.HTMLAttributes<HTMLDivElement>) {
-  return (
-    <div className={cn('rounded-xl border-2 border-shaving bg-white p-5 shadow-sm', className)} {...props} />
-  );
+  return <div className={cn(cardClass, className)} {...props} />;
 }

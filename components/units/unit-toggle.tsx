@@ -12,7 +12,7 @@ export function UnitToggle() {
       aria-pressed={unit === value}
       onClick={() => setUnit(value)}
       className={cn(
-        'min-h-9 px-3 text-sm font-semibold',
+        'min-h-9 px-3 text-sm font-semibold first:rounded-l-md last:rounded-r-md',
         unit === value ? 'bg-spruce text-white' : 'bg-white text-bark hover:bg-shaving',
       )}
     >
@@ -23,7 +23,8 @@ export function UnitToggle() {
     <div
       role="group"
       aria-label="Show lengths in"
-      className="no-print inline-flex overflow-hidden rounded-lg border-2 border-grain"
+      // No overflow clipping here: it would cut off the focus ring.
+      className="no-print inline-flex rounded-lg border-2 border-grain"
     >
       {option('mm', 'mm')}
       {option('imperial', 'ft-in')}

@@ -2,11 +2,13 @@
 
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Card } from '@/components/ui/field';
+import { Card, cardClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { usersQuery } from '@/lib/queries/users';
 import { AddUserForm } from './add-user-form';
 import { UserRow } from './user-row';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { cn } from '@/lib/cn';
 
 export function UsersManager() {
   const users = useQuery(usersQuery());
@@ -14,7 +16,7 @@ export function UsersManager() {
 
   return (
     <div className="space-y-6">
-      <Card className="overflow-x-auto p-0">
+      <ScrollRegion label="Users" className={cn(cardClass, 'p-0')}>
         {rowError && (
           <Notice tone="error" className="m-4">
             {rowError}
@@ -43,7 +45,7 @@ export function UsersManager() {
             </tbody>
           </table>
         )}
-      </Card>
+      </ScrollRegion>
       <Card>
         <h2 className="mb-4 text-xl font-bold">Add an account</h2>
         <AddUserForm />

@@ -3,7 +3,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
-import { Card } from '@/components/ui/field';
+import { Card, cardClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit } from '@/db/enums';
 import { offcutsQuery, rackQueryString, type RackFilters } from '@/lib/queries/offcuts';
@@ -11,6 +11,8 @@ import { RackFiltersBar } from './rack-filters';
 import { RackImport } from './rack-import';
 import { RackTable } from './rack-table';
 import { ScrapBar } from './scrap-bar';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { cn } from '@/lib/cn';
 
 const START: RackFilters = {
   q: '',
@@ -77,7 +79,7 @@ export function RackManager({ unit, clearAfterDays, canEdit, sections, initial }
       {message && <Notice data-testid="rack-message">{message}</Notice>}
       {error && <Notice tone="error">{error}</Notice>}
       {rack.error && <Notice tone="error">{rack.error.message}</Notice>}
-      <Card className="overflow-x-auto p-0">
+      <ScrollRegion label="Offcuts on the rack" className={cn(cardClass, 'p-0')}>
         {data && data.total === 0 ? (
           <p className="p-6 text-center text-bark-soft" data-testid="rack-empty">
             No offcuts match these filters.
@@ -99,7 +101,7 @@ export function RackManager({ unit, clearAfterDays, canEdit, sections, initial }
           )
         )}
         {rack.isPending && <p className="p-4">Loading the rack…</p>}
-      </Card>
+      </ScrollRegion>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <p className="text-sm" data-testid="rack-count">
           {data

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import type { DisplayUnit } from '@/db/enums';
+import type { DisplayUnit, Region } from '@/db/enums';
 import { ApiError, fetchJson } from '@/lib/queries/fetch-json';
 
 export type SettingsValues = {
@@ -14,14 +14,29 @@ export type SettingsValues = {
   trimMm: number;
   minOffcutMm: number;
   displayUnit: DisplayUnit;
+  region: Region;
+  minSafePieceMm: number;
   perCutChargePence: number;
   clearOffcutsAfterDays: number;
 };
 
 const NUMBERS: [keyof SettingsValues, string, string][] = [
   ['kerfMm', 'Kerf (mm)', 'Width of the saw cut; about 3 mm for a typical blade.'],
-  ['trimMm', 'End trim (mm)', 'Squared off new stock before the first piece; 0 for none.'],
-  ['minOffcutMm', 'Shortest offcut kept (mm)', 'Shorter remainders are scrap; longer ones go on the rack.'],
+  [
+    'trimMm',
+    'End trim (mm)',
+    'Cut off the end of each new stock length before the first piece, to clear split or out-of-square ends (yards trim 5–25 mm). 15 mm or more: a thinner sliver does not clear a split and can be thrown by the blade.',
+  ],
+  [
+    'minOffcutMm',
+    'Shortest kept offcut (mm)',
+    'Shorter remainders are scrap; longer ones go on the rack. Each section may set its own.',
+  ],
+  [
+    'minSafePieceMm',
+    'Minimum safe piece length (mm)',
+    'Cut lists and forms refuse shorter pieces: the saw cannot hold them safely. Check it against your own risk assessment.',
+  ],
   ['perCutChargePence', 'Charge per cut (pence)', 'Added to quotes for each saw cut.'],
   [
     'clearOffcutsAfterDays',
@@ -47,6 +62,7 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
           ...Object.fromEntries(NUMBERS.map(([k]) => [k, values[k] === '' ? null : Number(values[k])])),
           yardName: values.yardName,
           displayUnit: values.displayUnit,
+          region: values.region,
         }),
       }),
   });
@@ -88,6 +104,18 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
             <select {...p} value={values.displayUnit} onChange={(e) => set('displayUnit', e.target.value)}>
               <option value="mm">Millimetres</option>
               <option value="imperial">Feet and inches</option>
+            </select>
+          )}
+        </Field>
+        <Field
+          label="Region"
+          hint="Picks frame piece names and defaults: UK head and sole plates, lintels; North American top and bottom plates, headers."
+          error={issue('region')}
+        >
+          {(p) => (
+            <select {...p} value={values.region} onChange={(e) => set('region', e.target.value)}>
+              <option value="uk">United Kingdom</option>
+              <option value="na">North America</option>
             </select>
           )}
         </Field>

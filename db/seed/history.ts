@@ -27,7 +27,7 @@ const HISTORY_DAYS = 112;
 const PAST_JOBS = 24;
 const SETTINGS: PlanSettings = {
   kerfMm: 3,
-  trimMm: 5,
+  trimMm: 15,
   minOffcutMm: 300,
   useOffcuts: true,
   stockLengthIds: null,

@@ -2,6 +2,7 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from '../types';
 import { hashPassword } from '@/lib/auth/password';
+import { seedDemoCustomers } from './customers';
 import * as schema from '../schema';
 import { seedDemoPlans } from './demo-plans';
 import {
@@ -32,7 +33,10 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       .values(demoUsers.map((u) => ({ ...u, passwordHash })))
       .returning();
     const ownerId = users.find((u) => u.role === 'owner')!.id;
-    await tx.insert(schema.yardSettings).values({ id: 1, yardName: demoYardName });
+    // End trim 15 mm: clears split or out-of-square ends; a thinner sliver can be thrown by the blade.
+    await tx
+      .insert(schema.yardSettings)
+      .values({ id: 1, yardName: demoYardName, trimMm: 15, minSafePieceMm: 150, region: 'uk' });
 
     const sectionIds = new Map<string, number>();
     for (const s of demoSections) {
@@ -121,6 +125,7 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       now,
       userIds: { owner: ownerId, hand: userId('yard_hand'), saw: userId('saw_operator') },
     });
+    await seedDemoCustomers(tx);
     return users.find((u) => u.role === 'yard_hand')!.id;
   });
   await seedDemoPlans(db, handId);

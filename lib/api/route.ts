@@ -4,16 +4,26 @@ import 'server-only';
 import { NextResponse, type NextRequest } from 'next/server';
 import { ZodError, type z } from 'zod';
 import { requireUser, type CurrentUser } from '@/lib/auth/current-user';
-import type { Action } from '@/lib/auth/permissions';
+import { isPublicAction, type Action, type PublicAction } from '@/lib/auth/permissions';
 import { AppError } from '@/lib/errors';
 
 type Context<P> = { params: Promise<P> };
-type Handler<P> = (args: { req: NextRequest; user: CurrentUser; params: P }) => Promise<Response>;
+// Not distributive: a route typed only by its params (A = Action) gets a signed-in user.
+type UserFor<A extends Action> = [A] extends [PublicAction] ? null : CurrentUser;
+type Handler<P, A extends Action> = (args: {
+  req: NextRequest;
+  user: UserFor<A>;
+  params: P;
+}) => Promise<Response>;
 
-export function route<P = Record<string, never>>(action: Action, handler: Handler<P>) {
+/** Public actions (see permissions.ts) skip sign-in and hand the handler no user. */
+export function route<P = Record<string, never>, A extends Action = Action>(
+  action: A,
+  handler: Handler<P, A>,
+) {
   return async (req: NextRequest, context: Context<P>): Promise<Response> => {
     try {
-      const user = await requireUser(action);
+      const user = (isPublicAction(action) ? null : await requireUser(action)) as UserFor<A>;
       const params = (await context?.params) ?? ({} as P);
       return await handler({ req, user, params });
     } catch (error) {

@@ -1,6 +1,9 @@
 // Who may do what. Every route handler and server action names the action it performs.
 import type { Role } from '@/db/enums';
 
+/** Marks an action anyone may perform without signing in; the comment beside it says what guards it. */
+export const PUBLIC = 'public' as const;
+
 export const ACTIONS = {
   'users:manage': ['owner'],
   'settings:edit': ['owner'],
@@ -21,12 +24,30 @@ export const ACTIONS = {
   'offcuts:label': ['owner', 'yard_hand', 'saw_operator'],
   'frames:edit': ['owner', 'yard_hand'],
   'reports:read': ['owner'],
-} as const satisfies Record<string, readonly Role[]>;
+  'customers:read': ['owner', 'yard_hand'],
+  'customers:edit': ['owner', 'yard_hand'],
+  'quotes:share': ['owner', 'yard_hand'],
+  'plans:override-release': ['owner'],
+  'payments:read': ['owner'],
+  'payments:refund': ['owner'],
+  // Deliberately without sign-in. The customer's quote page and its accept and pay calls: the
+  // unguessable, expiring, revocable token in the link is the authority.
+  'quotes:customer': PUBLIC,
+  // The payment service's webhook: the signature over the raw body is the authority (checked by the
+  // SDK), so it is also exempt from the browser Origin check.
+  'payments:webhook': PUBLIC,
+} as const satisfies Record<string, readonly Role[] | typeof PUBLIC>;
 
 export type Action = keyof typeof ACTIONS;
+export type PublicAction = { [A in Action]: (typeof ACTIONS)[A] extends typeof PUBLIC ? A : never }[Action];
+
+export function isPublicAction(action: Action): action is PublicAction {
+  return ACTIONS[action] === PUBLIC;
+}
 
 export function can(role: Role, action: Action): boolean {
-  return (ACTIONS[action] as readonly Role[]).includes(role);
+  const allowed = ACTIONS[action];
+  return allowed === PUBLIC || (allowed as readonly Role[]).includes(role);
 }
 
 /** Where each role lands after signing in. */

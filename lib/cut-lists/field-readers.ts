@@ -1,4 +1,4 @@
-import { formatMillimetres, parseLength } from '@/lib/units';
+import { formatMillimetres, parseLength, shortPieceMessage } from '@/lib/units';
 import type { FieldError } from './import-types';
 
 export const MAX_QUANTITY = 10_000;
@@ -7,10 +7,20 @@ type Read<T> = { ok: true; value: T } | { ok: false; error: FieldError };
 
 const fail = (column: string, message: string): Read<never> => ({ ok: false, error: { column, message } });
 
-/** A length in any notation lib/units reads, more than 0 and no longer than the section's longest board. */
-export function readLengthCell(text: string, maxLengthMm: number | null, column = 'length'): Read<number> {
+/**
+ * A length in any notation lib/units reads, more than 0 (at least `minSafeMm` when given: the yard's
+ * minimum safe piece length) and no longer than the section's longest board.
+ */
+export function readLengthCell(
+  text: string,
+  maxLengthMm: number | null,
+  column = 'length',
+  minSafeMm?: number,
+): Read<number> {
   const parsed = parseLength(text);
   if (!parsed.ok) return fail(column, parsed.message);
+  const short = minSafeMm ? shortPieceMessage({ mm: parsed.mm, minSafeMm, typed: text }) : null;
+  if (short) return fail(column, short);
   if (parsed.mm <= 0) return fail(column, 'Length must be more than 0.');
   if (maxLengthMm !== null && parsed.mm > maxLengthMm) {
     return fail(

@@ -10,6 +10,8 @@ export type ImportOptions = {
   sections: SectionRef[];
   /** Longest stock length or offcut for the section, in mm; null means no limit is checked. */
   maxLengthMm: (sectionId: string) => number | null;
+  /** The yard's minimum safe piece length in mm: shorter pieces are refused. */
+  minPieceMm?: number;
 };
 
 export type FieldError = { column: string; message: string };

@@ -43,7 +43,7 @@ export function parseCutList(csvText: string, options: ImportOptions): ImportRes
       const section = findSection(cell('section'));
       if (!section.ok) fields.errors.push({ column: 'section', message: section.message });
       const maxLength = section.ok ? options.maxLengthMm(section.id) : null;
-      const length = fields.take(readLengthCell(cell('length'), maxLength));
+      const length = fields.take(readLengthCell(cell('length'), maxLength, 'length', options.minPieceMm));
       const quantity = fields.take(readQuantityCell(cell('quantity')));
       const label = fields.take(readTextCell(cell('label'), 'label', 100));
       const note = fields.take(readTextCell(cell('note'), 'note', 500));

@@ -2,7 +2,9 @@
 import { Document, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
 import { groupIdenticalBoards } from '@/components/plans/group-boards';
 import type { PlanViewData } from '@/lib/queries/plans';
+import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import { PdfBoard } from './pdf-board';
+import { PdfQuote } from './pdf-quote';
 
 const s = StyleSheet.create({
   page: { padding: 36, fontSize: 10, fontFamily: 'Helvetica', color: '#231a12' },
@@ -23,11 +25,29 @@ export type CutSheetData = {
   yardName: string;
   offcutTags: Record<number, string>;
   format: (mm: number) => string;
+  quote: QuoteView;
+  /** The customer's copy leaves out rack tags and what the yard keeps. */
+  forCustomer: boolean;
+  remaindersGoTo: 'yard' | 'customer';
 };
 
-const pounds = (n: number) => `£${n.toFixed(2)}`;
-
-export function CutSheetDocument({ plan, job, yardName, offcutTags, format }: CutSheetData) {
+export function CutSheetDocument({
+  plan,
+  job,
+  yardName,
+  offcutTags,
+  format,
+  quote,
+  forCustomer,
+  remaindersGoTo,
+}: CutSheetData) {
+  const remainderNote = (keep: boolean, mm: number) => {
+    if (!keep) return `scrap ${format(mm)}`;
+    if (remaindersGoTo === 'customer') return `remainder ${format(mm)} is yours to take`;
+    return forCustomer ? 'remainder stays at the yard' : `keep ${format(mm)} for the rack`;
+  };
+  const sourceNote = (offcutId: number | null) =>
+    forCustomer || !offcutId ? 'offcut' : `offcut ${offcutTags[offcutId] ?? ''}`;
   return (
     <Document title={`Cut sheet ${job.reference}`} author={yardName}>
       <Page size="A4" style={s.page}>
@@ -65,12 +85,9 @@ export function CutSheetDocument({ plan, job, yardName, offcutTags, format }: Cu
               {groupIdenticalBoards(boards).map(({ key, boards: same, first }) => (
                 <View key={key} style={s.board} wrap={false}>
                   <Text>
-                    {same.length} ×{' '}
-                    {first.source === 'offcut'
-                      ? `offcut ${first.offcutId ? (offcutTags[first.offcutId] ?? '') : ''}`
-                      : 'new'}{' '}
+                    {same.length} × {first.source === 'offcut' ? sourceNote(first.offcutId) : 'new'}{' '}
                     {format(first.lengthMm)}: {first.pieces.map((p) => format(p.lengthMm)).join(' + ')} ·{' '}
-                    {first.keepRemainder ? 'keep' : 'scrap'} {format(first.remainderMm)}
+                    {remainderNote(first.keepRemainder, first.remainderMm)}
                   </Text>
                   <PdfBoard
                     format={format}
@@ -91,35 +108,7 @@ export function CutSheetDocument({ plan, job, yardName, offcutTags, format }: Cu
         <Text style={s.muted}>
           Green: pieces · black: saw kerf · dotted amber: kept remainder · hatched red: scrap or end trim.
         </Text>
-        {plan.price && (
-          <View wrap={false}>
-            <Text style={s.h2}>Quote</Text>
-            {plan.price.lines.map((line, i) => (
-              <View key={i} style={s.row}>
-                <Text style={s.cell}>{line.description}</Text>
-                <Text style={s.num}>
-                  {line.quantity} × {pounds(line.unitPrice)}
-                </Text>
-                <Text style={s.num}>{pounds(line.amount)}</Text>
-              </View>
-            ))}
-            <View style={s.row}>
-              <Text style={s.cell}>Timber</Text>
-              <Text style={s.num} />
-              <Text style={s.num}>{pounds(plan.price.materials)}</Text>
-            </View>
-            <View style={s.row}>
-              <Text style={s.cell}>Cutting</Text>
-              <Text style={s.num} />
-              <Text style={s.num}>{pounds(plan.price.cutting)}</Text>
-            </View>
-            <View style={s.row}>
-              <Text style={[s.cell, s.bold]}>Total</Text>
-              <Text style={s.num} />
-              <Text style={[s.num, s.bold]}>{pounds(plan.price.total)}</Text>
-            </View>
-          </View>
-        )}
+        <PdfQuote quote={quote} />
         <Text style={s.caution}>
           Kerfwise counts and cuts timber; it does not size structure. Check sizes and spans against local
           building rules or an engineer. Cutting treated timber: wear a dust mask and gloves, wash before

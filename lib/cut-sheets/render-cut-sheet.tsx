@@ -1,5 +1,7 @@
 import 'server-only';
 import { renderToBuffer } from '@react-pdf/renderer';
+import { getDb } from '@/db';
+import { getPlanQuote, quoteView } from '@/lib/quotes/get-plan-quote';
 import { getJobById } from '@/lib/jobs/get-job';
 import { getPlanById } from '@/lib/plans/get-plan';
 import { getPlanContext } from '@/lib/plans/get-plan-context';
@@ -12,12 +14,19 @@ import { CutSheetDocument } from './cut-sheet-document';
 const plainQuotes = (text: string) => text.replace(/′/g, "'").replace(/″/g, '"');
 
 /** The cut sheet of a plan as PDF bytes, with what an e-mail needs to go with it. */
-export async function renderCutSheet({ planId }: { planId: number }) {
+export async function renderCutSheet({
+  planId,
+  forCustomer = false,
+}: {
+  planId: number;
+  forCustomer?: boolean;
+}) {
   const [plan, context, yard] = await Promise.all([
     getPlanById({ planId }),
     getPlanContext({ planId }),
     getYardSettings(),
   ]);
+  const quote = quoteView(await getPlanQuote(await getDb(), { planId }));
   const { job } = await getJobById({ jobId: plan.jobId });
   const format = (mm: number) =>
     plainQuotes(formatLength(mm, yard.displayUnit)) + (yard.displayUnit === 'mm' ? ' mm' : '');
@@ -28,7 +37,10 @@ export async function renderCutSheet({ planId }: { planId: number }) {
       yardName={yard.yardName}
       offcutTags={context.offcutTags}
       format={format}
+      quote={quote}
+      forCustomer={forCustomer}
+      remaindersGoTo={yard.remaindersGoTo}
     />,
   );
-  return { pdf, plan, job, yard, fileName: `cut-sheet-${job.reference}-plan-${plan.id}.pdf` };
+  return { pdf, plan, job, yard, quote, fileName: `cut-sheet-${job.reference}-plan-${plan.id}.pdf` };
 }

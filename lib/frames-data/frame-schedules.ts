@@ -12,6 +12,7 @@ export type FrameScheduleRecord = {
   id: number;
   name: string;
   customerName: string;
+  customerEmail: string;
   unit: 'mm' | 'imperial';
   panels: FrameSchedulePanel[];
   updatedAt: string;
@@ -42,6 +43,7 @@ export async function listFrameSchedules() {
     id: r.id,
     name: r.name,
     customerName: r.customerName,
+    customerEmail: r.customerEmail,
     unit: r.unit,
     panelCount: Array.isArray(r.panels) ? r.panels.length : 0,
     updatedAt: r.updatedAt.toISOString(),
@@ -67,6 +69,7 @@ export async function getFrameScheduleById({
     id: row.id,
     name: row.name,
     customerName: row.customerName,
+    customerEmail: row.customerEmail,
     unit: row.unit,
     panels: readPanels(row.panels),
     updatedAt: row.updatedAt.toISOString(),
@@ -82,6 +85,7 @@ export async function createFrameSchedule({ body, userId }: { body: SaveFrameSch
     .values({
       name: body.name,
       customerName: body.customerName,
+      customerEmail: body.customerEmail,
       unit: body.unit,
       panels: body.panels,
       createdBy: userId,
@@ -98,6 +102,7 @@ export async function updateFrameSchedule({ id, body }: { id: number; body: Save
     .set({
       name: body.name,
       customerName: body.customerName,
+      customerEmail: body.customerEmail,
       unit: body.unit,
       panels: body.panels,
       updatedAt: new Date(),
@@ -132,6 +137,7 @@ export async function copyFrameSchedule({ id, userId }: { id: number; userId: nu
     .values({
       name: `${source.name} (copy)`.slice(0, 120),
       customerName: source.customerName,
+      customerEmail: source.customerEmail,
       unit: source.unit,
       panels: source.panels,
       createdBy: userId,

@@ -5,7 +5,7 @@ import { getYardFrameSections } from './get-yard-frame-sections';
 
 /** The cut list of unsaved panels, for the editor's live preview. Unknown sections answer 422. */
 export async function previewFrameSchedule({ panels }: { panels: FrameSchedulePanel[] }) {
-  const { dimensions } = await getYardFrameSections();
+  const { dimensions, context } = await getYardFrameSections();
   assertKnownSections(panels, dimensions);
-  return generateFrameItems(panels, { sections: dimensions });
+  return generateFrameItems(panels, context);
 }

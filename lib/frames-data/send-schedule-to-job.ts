@@ -15,8 +15,9 @@ const OPEN_STATUSES = ['draft', 'planned'] as const;
 
 /**
  * Adds a schedule's cut list, summed by section, to a draft or planned job or to a new job, in one
- * transaction; the job remembers the schedule. A planned job goes back to draft: its plan no longer
- * covers its items.
+ * transaction; the job remembers the schedule, and each line its piece marks. Sent to a job that
+ * already holds the schedule's lines, it asks (409) unless told to replace them or add another set.
+ * A planned job goes back to draft: its plan no longer covers its items.
  */
 export async function sendScheduleToJob({
   scheduleId,
@@ -29,9 +30,9 @@ export async function sendScheduleToJob({
 }) {
   const db = await getDb();
   const schedule = await getFrameScheduleById({ id: scheduleId, db });
-  const { dimensions } = await getYardFrameSections({ db });
+  const { dimensions, context } = await getYardFrameSections({ db });
   assertKnownSections(schedule.panels, dimensions);
-  const lines = toFrameJobLines(generateFrameItems(schedule.panels, { sections: dimensions }).items);
+  const lines = toFrameJobLines(generateFrameItems(schedule.panels, context).items);
   if (lines.length === 0)
     throw new AppError('invalid', 'This schedule has no pieces yet. Add a panel first.');
 
@@ -49,6 +50,20 @@ export async function sendScheduleToJob({
           `Job ${job.reference} is ${job.status}; only draft or planned jobs take new pieces.`,
         );
       jobId = job.id;
+      const [{ sent }] = await tx
+        .select({ sent: sql<number>`count(*)::int` })
+        .from(jobItems)
+        .where(and(eq(jobItems.jobId, jobId), eq(jobItems.frameScheduleId, scheduleId)));
+      if (sent > 0 && body.ifAlreadySent === undefined)
+        throw new AppError(
+          'conflict',
+          `Job ${job.reference} already holds this schedule's pieces (${sent} line${sent === 1 ? '' : 's'}). Replace them with this set, or add a second set?`,
+          { alreadySent: sent },
+        );
+      if (sent > 0 && body.ifAlreadySent === 'replace')
+        await tx
+          .delete(jobItems)
+          .where(and(eq(jobItems.jobId, jobId), eq(jobItems.frameScheduleId, scheduleId)));
       if (job.status === 'planned')
         await tx
           .update(plans)
@@ -69,6 +84,7 @@ export async function sendScheduleToJob({
         .values({
           reference,
           customerName: newJob.customerName,
+          customerEmail: newJob.customerEmail ?? schedule.customerEmail,
           dueDate: newJob.dueDate || null,
           notes: `Cut list from frame schedule "${schedule.name}".`,
           frameScheduleId: scheduleId,
@@ -90,6 +106,8 @@ export async function sendScheduleToJob({
         label: line.label,
         note: line.note,
         angleTenths: line.angleTenths,
+        marks: line.marks,
+        frameScheduleId: scheduleId,
         position: last + 1 + k,
       })),
     );

@@ -1,7 +1,8 @@
-import { rectangle, roundAngle, toDegrees, toRadians } from './geometry';
+import { parallelCutBlank, rectangle, roundAngle, toDegrees, toRadians } from './geometry';
 import type { RoofPanel } from './panel-schemas';
 import { piece, type PanelBuild } from './panel-build';
 import { getMemberCentres } from './stud-layout';
+import { pieceName } from './piece-names';
 import type { FrameContext, FramePiece } from './types';
 
 export type RoofGeometry = {
@@ -33,15 +34,17 @@ export function buildRoofFrame(roof: RoofPanel, index: number, ctx: FrameContext
   if (!section)
     return { pieces: [], warnings: [`${roof.name}: section ${roof.sectionId} is unknown, panel skipped`] };
   const t = section.thickness;
-  const { rafterLength, pitch } = getRoofGeometry(roof);
+  const { rafterLength: edge, pitch } = getRoofGeometry(roof);
   const angle = roundAngle(pitch);
+  // Two parallel plumb cuts: the blank is the edge length plus the rafter's depth × tan(pitch).
+  const rafterLength = parallelCutBlank(edge, section.width, pitch);
   const at = { panelIndex: index, drawingPanelIndex: index };
   const front = -roof.eavesOverhang;
   const back = roof.span + roof.backOverhang;
   const side = roof.sideOverhang;
   const pieces: FramePiece[] = [];
   const warnings: string[] = [];
-  const note = 'plumb cut both ends';
+  const note = 'plumb cut both ends; birdsmouth where it sits on each wall plate';
 
   for (const c of getMemberCentres(roof.length, roof.centres, t))
     pieces.push(
@@ -62,11 +65,11 @@ export function buildRoofFrame(roof: RoofPanel, index: number, ctx: FrameContext
       pieces.push(
         piece({
           ...at,
-          label: `${roof.name} fly rafter`,
+          label: `${roof.name} ${pieceName(ctx, 'fly rafter')}`,
           sectionId: roof.sectionId,
           length: rafterLength,
           angle,
-          note,
+          note: 'plumb cut both ends',
           outline: rectangle(x0, front, x0 + t, back),
         }),
       );

@@ -1,9 +1,10 @@
-import { rectangle, roundAngle, toDegrees } from './geometry';
+import { parallelCutBlank, rectangle, roundAngle, toDegrees } from './geometry';
 import type { FrameSchedulePanel, OpeningPanel, StudWallPanel } from './panel-schemas';
 import { piece, type PanelBuild } from './panel-build';
 import { getMemberCentres } from './stud-layout';
 import type { FrameContext, FramePiece, Point } from './types';
 import { getWallHeightAt } from './wall-height';
+import { pieceName } from './piece-names';
 
 type Vertical = { x0: number; x1: number; y0: number; minTop: number };
 type OpeningZone = { opening: OpeningPanel; clearBottom: number; framedTop: number };
@@ -57,7 +58,17 @@ export function buildStudWallFrame(
       { x: x1, y: top1 },
       { x: x0, y: top0 },
     ];
-    pieces.push(piece({ ...at, label, sectionId, length, angle: topAngle, outline }));
+    pieces.push(
+      piece({
+        ...at,
+        label,
+        sectionId,
+        length,
+        angle: topAngle,
+        note: topAngle ? 'top cut' : undefined,
+        outline,
+      }),
+    );
     verticals.push({ x0, x1, y0, minTop: Math.min(top0, top1) });
     return true;
   };
@@ -84,7 +95,7 @@ export function buildStudWallFrame(
         pieces.push(
           piece({
             ...own,
-            label: `${wall.name} bottom plate`,
+            label: `${wall.name} ${pieceName(ctx, 'bottom plate')}`,
             sectionId: wall.sectionId,
             length: gap.start - from,
             outline: rectangle(from, 0, gap.start, t),
@@ -100,14 +111,16 @@ export function buildStudWallFrame(
       { x: L, y: heightAt(L) - i * plateDepth },
       { x: 0, y: heightAt(0) - i * plateDepth },
     ];
-    const length = Math.hypot(L, rise);
+    // Plumb cuts at both ends are parallel: list the blank at its long point.
+    const length = parallelCutBlank(Math.hypot(L, rise), t, toDegrees(Math.abs(slope)));
     pieces.push(
       piece({
         ...own,
-        label: `${wall.name} top plate`,
+        label: `${wall.name} ${pieceName(ctx, 'top plate')}`,
         sectionId: wall.sectionId,
         length,
         angle: topAngle,
+        note: topAngle ? 'plumb cut both ends' : undefined,
         outline,
       }),
     );
@@ -150,14 +163,15 @@ export function buildStudWallFrame(
       );
 
     for (const kx of [left - ot - t, right + ot]) {
-      if (kx >= t && kx + t <= L - t) addToPlate(at, `${o.name} king stud`, wall.sectionId, kx, kx + t, base);
+      if (kx >= t && kx + t <= L - t)
+        addToPlate(at, `${o.name} ${pieceName(ctx, 'king stud')}`, wall.sectionId, kx, kx + t, base);
     }
     for (const tx of [left - ot, right]) {
       if (tx >= 0 && tx + ot <= L) {
         pieces.push(
           piece({
             ...at,
-            label: `${o.name} trimmer`,
+            label: `${o.name} ${pieceName(ctx, 'trimmer')}`,
             sectionId,
             length: top - base,
             outline: rectangle(tx, base, tx + ot, top),
@@ -171,7 +185,7 @@ export function buildStudWallFrame(
     pieces.push(
       piece({
         ...at,
-        label: `${o.name} head`,
+        label: `${o.name} ${pieceName(ctx, 'head')}`,
         sectionId: headSectionId,
         length: headRight - headLeft,
         outline: rectangle(headLeft, top, headRight, top + headDepth),
@@ -182,7 +196,14 @@ export function buildStudWallFrame(
 
     const cripplesAt = centres.filter((c) => c - ot / 2 >= left && c + ot / 2 <= right);
     for (const c of cripplesAt)
-      addToPlate(at, `${o.name} cripple above head`, sectionId, c - ot / 2, c + ot / 2, top + headDepth);
+      addToPlate(
+        at,
+        `${o.name} ${pieceName(ctx, 'cripple above head')}`,
+        sectionId,
+        c - ot / 2,
+        c + ot / 2,
+        top + headDepth,
+      );
 
     let clearBottom = 0;
     if (o.sillHeight > 0) {
@@ -203,7 +224,7 @@ export function buildStudWallFrame(
         pieces.push(
           piece({
             ...at,
-            label: `${o.name} cripple below sill`,
+            label: `${o.name} ${pieceName(ctx, 'cripple below sill')}`,
             sectionId,
             length: sillBottom - base,
             outline: rectangle(c - ot / 2, base, c + ot / 2, sillBottom),

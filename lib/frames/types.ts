@@ -1,7 +1,13 @@
 /** A section's cross-section in whole millimetres: thickness is the face seen in a wall elevation. */
 export type SectionDimensions = { thickness: number; width: number };
 
-export type FrameContext = { sections: ReadonlyMap<number, SectionDimensions> };
+export type FrameContext = {
+  sections: ReadonlyMap<number, SectionDimensions>;
+  /** The yard's minimum safe piece length: shorter pieces are warned about, with the usual fix. */
+  minPieceMm?: number;
+  /** Piece names: 'uk' (head plate, sole plate, lintel …) or 'na' (top plate, bottom plate, header …). */
+  region?: 'uk' | 'na';
+};
 
 export type Point = { x: number; y: number };
 

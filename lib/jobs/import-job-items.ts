@@ -32,6 +32,7 @@ export async function importJobItems({
       const parsed = parseCutList(csvText, {
         sections: limits.sections.map((s) => ({ id: String(s.id), name: s.name, code: s.code })),
         maxLengthMm: (id) => limits.longestMm(Number(id)),
+        minPieceMm: limits.minSafePieceMm,
       });
       if (!parsed.ok) {
         // Roll back the draft/superseded change above: a failed import changes nothing.

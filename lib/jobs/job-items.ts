@@ -3,20 +3,26 @@ import { and, eq, sql } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { jobItems, type NewJobItem } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
-import { formatMillimetres } from '@/lib/units';
-import type { z } from 'zod';
-import type { jobItemBodySchema } from '@/lib/validations/jobs';
+import { formatMillimetres, shortPieceMessage } from '@/lib/units';
+import type { JobItemFields } from '@/lib/validations/jobs';
 import { openJobForItemEdits } from './open-job-for-item-edits';
 import { getSectionLimits } from './section-limits';
 
-type ItemFields = Partial<z.output<typeof jobItemBodySchema>>;
+type ItemFields = Partial<JobItemFields>;
 
 async function checkItemFits(
   tx: Parameters<typeof getSectionLimits>[0],
   sectionId: number,
   lengthMm: number,
+  /** The length as typed; false when the length is unchanged (an old short piece may keep its length). */
+  lengthText: string | undefined | false,
 ) {
   const limits = await getSectionLimits(tx);
+  const short =
+    lengthText === false
+      ? null
+      : shortPieceMessage({ mm: lengthMm, minSafeMm: limits.minSafePieceMm, typed: lengthText });
+  if (short) throw new AppError('invalid', short, { issues: [{ path: 'length', message: short }] });
   const section = limits.sections.find((s) => s.id === sectionId);
   if (!section)
     throw new AppError('invalid', 'That section is not sold here.', {
@@ -40,11 +46,17 @@ async function checkItemFits(
 }
 
 /** Adds one line item at the end of the job's list. */
-export async function addJobItem({ jobId, item }: { jobId: number; item: Required<ItemFields> }) {
+export async function addJobItem({
+  jobId,
+  item,
+}: {
+  jobId: number;
+  item: Omit<JobItemFields, 'lengthText'> & { lengthText?: string };
+}) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     await openJobForItemEdits(tx, jobId);
-    await checkItemFits(tx, item.sectionId, item.length);
+    await checkItemFits(tx, item.sectionId, item.length, item.lengthText);
     const [{ next }] = await tx
       .select({ next: sql<number>`coalesce(max(${jobItems.position}), -1)::int + 1` })
       .from(jobItems)
@@ -89,7 +101,12 @@ export async function updateJobItem({
     if (changes.quantity !== undefined) set.quantity = changes.quantity;
     if (changes.label !== undefined) set.label = changes.label;
     if (changes.note !== undefined) set.note = changes.note;
-    await checkItemFits(tx, set.sectionId ?? item.sectionId, set.lengthMm ?? item.lengthMm);
+    await checkItemFits(
+      tx,
+      set.sectionId ?? item.sectionId,
+      set.lengthMm ?? item.lengthMm,
+      changes.length !== undefined ? changes.lengthText : false,
+    );
     const [row] = await tx.update(jobItems).set(set).where(eq(jobItems.id, itemId)).returning();
     return row;
   });

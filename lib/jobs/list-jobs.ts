@@ -2,6 +2,7 @@ import 'server-only';
 import { and, asc, eq, gte, ilike, lte, or, sql, type SQL } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { jobItems, jobs } from '@/db/schema';
+import { paymentState } from '@/lib/quotes/payment-state';
 import type { ListJobsQuery } from '@/lib/validations/jobs';
 
 const like = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
@@ -17,7 +18,7 @@ export async function listJobs(query: ListJobsQuery = {}) {
   if (query.status) where.push(eq(jobs.status, query.status));
   if (query.dueFrom) where.push(gte(jobs.dueDate, query.dueFrom));
   if (query.dueTo) where.push(lte(jobs.dueDate, query.dueTo));
-  return db
+  const rows = await db
     .select({
       id: jobs.id,
       reference: jobs.reference,
@@ -27,11 +28,37 @@ export async function listJobs(query: ListJobsQuery = {}) {
       status: jobs.status,
       itemCount: sql<number>`count(${jobItems.id})::int`,
       pieceCount: sql<number>`coalesce(sum(${jobItems.quantity}), 0)::int`,
+      // The latest quote (by version) and what the job has paid, for the state at a glance.
+      quote: sql<{
+        number: string;
+        accepted_at: string | null;
+        on_account: boolean;
+        gross_pence: number;
+        deposit_pence: number;
+      } | null>`(select row_to_json(q) from (select number, accepted_at, on_account, gross_pence, deposit_pence
+          from quotes where quotes.job_id = ${jobs.id} order by version desc limit 1) q)`,
+      paidPence: sql<number>`(select coalesce(sum(amount_pence), 0)::int from payments
+          where payments.job_id = ${jobs.id} and payments.status = 'succeeded')`,
     })
     .from(jobs)
     .leftJoin(jobItems, eq(jobItems.jobId, jobs.id))
     .where(where.length ? and(...where) : undefined)
     .groupBy(jobs.id)
     .orderBy(sql`${jobs.dueDate} asc nulls last`, asc(jobs.reference));
+  return rows.map(({ quote, paidPence, ...row }) => ({
+    ...row,
+    quoteNumber: quote?.number ?? null,
+    paymentState: quote
+      ? paymentState(
+          {
+            acceptedAt: quote.accepted_at ? new Date(quote.accepted_at) : null,
+            onAccount: quote.on_account,
+            grossPence: quote.gross_pence,
+            depositPence: quote.deposit_pence,
+          },
+          paidPence,
+        )
+      : null,
+  }));
 }
 export type JobListRow = Awaited<ReturnType<typeof listJobs>>[number];

@@ -1,11 +1,14 @@
 import 'server-only';
 import { and, eq, max } from 'drizzle-orm';
 import type { DbOrTx } from '@/db';
-import { offcuts, sections, stockLengths } from '@/db/schema';
+import { offcuts, sections, stockLengths, yardSettings } from '@/db/schema';
 
-/** Per active section: the longest active stock length or available offcut, in mm. */
+/**
+ * Per active section: the longest active stock length or available offcut, in mm; and the yard's
+ * minimum safe piece length.
+ */
 export async function getSectionLimits(db: DbOrTx) {
-  const [sectionRows, stock, rack] = await Promise.all([
+  const [sectionRows, stock, rack, settings] = await Promise.all([
     db
       .select({ id: sections.id, name: sections.name, code: sections.code })
       .from(sections)
@@ -20,10 +23,15 @@ export async function getSectionLimits(db: DbOrTx) {
       .from(offcuts)
       .where(and(eq(offcuts.status, 'available')))
       .groupBy(offcuts.sectionId),
+    db.select({ minSafePieceMm: yardSettings.minSafePieceMm }).from(yardSettings).limit(1),
   ]);
   const longest = new Map<number, number>();
   for (const row of [...stock, ...rack]) {
     longest.set(row.sectionId, Math.max(longest.get(row.sectionId) ?? 0, row.longest ?? 0));
   }
-  return { sections: sectionRows, longestMm: (sectionId: number) => longest.get(sectionId) ?? 0 };
+  return {
+    sections: sectionRows,
+    minSafePieceMm: settings[0]?.minSafePieceMm ?? 0,
+    longestMm: (sectionId: number) => longest.get(sectionId) ?? 0,
+  };
 }

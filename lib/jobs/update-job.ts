@@ -2,6 +2,7 @@ import 'server-only';
 import { and, eq, ne } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { jobs, plans, type NewJob } from '@/db/schema';
+import { resolveJobCustomer } from '@/lib/customers/resolve-job-customer';
 import { AppError, notFound } from '@/lib/errors';
 import type { UpdateJobBody } from '@/lib/validations/jobs';
 
@@ -12,7 +13,15 @@ export async function updateJob({ jobId, body }: { jobId: number; body: UpdateJo
     const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId)).for('update');
     if (!job) throw notFound('That job');
     const changes: Partial<NewJob> = { updatedAt: new Date() };
-    if (body.customer !== undefined) changes.customerName = body.customer;
+    if (body.customerId !== undefined || body.customer !== undefined) {
+      const customer = await resolveJobCustomer(tx, { customerId: body.customerId, name: body.customer });
+      Object.assign(changes, {
+        customerId: customer.id,
+        customerName: customer.name,
+        customerPhone: customer.phone,
+      });
+    }
+    if (body.deliveryChargePence !== undefined) changes.deliveryChargePence = body.deliveryChargePence;
     if (body.customerEmail !== undefined) changes.customerEmail = body.customerEmail;
     if (body.dueDate !== undefined) changes.dueDate = body.dueDate;
     if (body.notes !== undefined) changes.notes = body.notes;

@@ -8,6 +8,8 @@ import { AppError } from '@/lib/errors';
 type Attachment = { filename: string; content: Buffer; contentType: string };
 type Outgoing = {
   jobId: number | null;
+  /** The display name the customer sees: the yard's own name. */
+  fromName?: string;
   to: string;
   subject: string;
   text: string;
@@ -33,7 +35,7 @@ export async function sendMail(mail: Outgoing) {
   const db = await getDb();
   try {
     const info = await transport.sendMail({
-      from: env.KERFWISE_MAIL_FROM,
+      from: fromHeader(env.KERFWISE_MAIL_FROM, mail.fromName),
       to: mail.to,
       subject: mail.subject,
       text: mail.text,
@@ -56,4 +58,11 @@ export async function sendMail(mail: Outgoing) {
   } finally {
     transport.close();
   }
+}
+
+/** The configured sender address under the yard's name: `"Hollin Lane Timber" <cutting@yard.test>`. */
+function fromHeader(configured: string, name?: string): string {
+  if (!name) return configured;
+  const address = /<([^>]+)>/.exec(configured)?.[1] ?? configured.trim();
+  return `"${name.replace(/["\\\r\n]/g, '')}" <${address}>`;
 }

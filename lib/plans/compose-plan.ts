@@ -8,12 +8,19 @@ import {
   type PlanningOffcut,
   type PlanningStock,
 } from './build-solver-input';
-import type { PlanSection, PlanSettings } from './plan-shapes';
+import type { PieceDetails, PlanSection, PlanSettings } from './plan-shapes';
 import { planBoardRows, summarisePlan } from './summarise-plan';
 
 export type PlanningData = {
-  items: (PlanningItem & { sectionId: number; label: string })[];
-  sections: { id: number; name: string }[];
+  items: (PlanningItem & {
+    sectionId: number;
+    label: string;
+    angleTenths?: number | null;
+    note?: string;
+    marks?: string;
+  })[];
+  /** minKeepMm: the section's own shortest kept offcut; null or absent uses the yard's. */
+  sections: { id: number; name: string; minKeepMm?: number | null }[];
   stock: (PlanningStock & { sectionId: number })[];
   offcuts: (PlanningOffcut & { sectionId: number })[];
 };
@@ -35,7 +42,7 @@ export async function composePlan({
       items: data.items.filter((i) => i.sectionId === section.id),
       stock: data.stock.filter((s) => s.sectionId === section.id),
       offcuts: data.offcuts.filter((o) => o.sectionId === section.id),
-      settings,
+      settings: { ...settings, minOffcutMm: section.minKeepMm ?? settings.minOffcutMm },
     });
     planSections.push({
       sectionId: section.id,
@@ -56,7 +63,12 @@ export async function composePlan({
       })),
     })),
   });
-  const labels = new Map(data.items.map((i) => [i.id, i.label]));
+  const labels = new Map(
+    data.items.map((i) => [
+      i.id,
+      { label: i.label, angleTenths: i.angleTenths, note: i.note, marks: i.marks } satisfies PieceDetails,
+    ]),
+  );
   return {
     sections: planSections,
     totals: summarisePlan(planSections),

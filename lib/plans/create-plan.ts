@@ -35,7 +35,12 @@ export async function preparePlanning(
     stockLengthIds: overrides.stockLengthIds ?? null,
     timeLimitMs: overrides.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS,
   };
-  return { data, settings, perCutChargePence: yard.perCutChargePence };
+  // A shortest kept offcut set for this plan overrides each section's own.
+  const planned =
+    overrides.minOffcutMm === undefined
+      ? data
+      : { ...data, sections: data.sections.map((s) => ({ ...s, minKeepMm: null })) };
+  return { data: planned, settings, perCutChargePence: yard.perCutChargePence };
 }
 
 /** Plans a job section by section with the solver and stores the plan with its saw board list. */

@@ -50,7 +50,16 @@ export type BoardPiece = {
   label: string;
   lengthMm: number;
   markMm: number;
+  /** An angled cut, from a frame schedule: degrees off square in tenths; the length is the long point. */
+  angleTenths?: number;
+  /** Which end and how, e.g. "plumb cut both ends". */
+  cutNote?: string;
+  /** Frame piece marks, e.g. "1.1, 2.3". */
+  marks?: string;
 };
+
+/** What the saw needs to know about a line item besides its length. */
+export type PieceDetails = { label: string; angleTenths?: number | null; note?: string; marks?: string };
 
 /** Solver source ids: stock lengths and offcuts are told apart by prefix. */
 export const stockSourceId = (stockLengthId: number) => `S${stockLengthId}`;

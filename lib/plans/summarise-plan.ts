@@ -4,6 +4,7 @@ import {
   parsePieceId,
   parseSourceId,
   type BoardPiece,
+  type PieceDetails,
   type PlanSection,
   type PlanTotals,
 } from './plan-shapes';
@@ -69,7 +70,10 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
 }
 
 /** The boards in saw order: section by section, offcuts first, then the longest boards. */
-export function planBoardRows(sections: PlanSection[], labels: Map<number, string>): BoardRow[] {
+export function planBoardRows(
+  sections: PlanSection[],
+  labels: Map<number, string | PieceDetails>,
+): BoardRow[] {
   const rows: BoardRow[] = [];
   for (const { sectionId, input, output } of sections) {
     const boards = [...output.boards].sort(
@@ -100,13 +104,23 @@ function boardPieces(
   lengths: number[],
   marks: number[],
   kerf: number,
-  labels: Map<number, string>,
+  labels: Map<number, string | PieceDetails>,
 ): BoardPiece[] {
   let start = 0;
   return pieceIds.map((pieceId, i) => {
     const jobItemId = parsePieceId(pieceId);
     const markMm = marks[i] ?? start + lengths[i];
     start = markMm + kerf;
-    return { pieceId, jobItemId, label: labels.get(jobItemId) ?? '', lengthMm: lengths[i], markMm };
+    const found = labels.get(jobItemId) ?? '';
+    const details: PieceDetails = typeof found === 'string' ? { label: found } : found;
+    return {
+      pieceId,
+      jobItemId,
+      label: details.label,
+      lengthMm: lengths[i],
+      markMm,
+      ...(details.angleTenths ? { angleTenths: details.angleTenths, cutNote: details.note ?? '' } : {}),
+      ...(details.marks ? { marks: details.marks } : {}),
+    };
   });
 }

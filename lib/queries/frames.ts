@@ -7,6 +7,7 @@ export type FrameScheduleDto = {
   id: number;
   name: string;
   customerName: string;
+  customerEmail: string;
   unit: FrameUnit;
   panels: FrameSchedulePanel[];
   updatedAt: string;
@@ -25,8 +26,10 @@ export type SaveFrameScheduleRequest = {
   unit: FrameUnit;
   panels: FrameSchedulePanelInput[];
 };
-export type SendToJobRequest =
-  { jobId: number } | { newJob: { customerName: string; reference?: string; dueDate?: string } };
+export type SendToJobRequest = { ifAlreadySent?: 'replace' | 'add' } & (
+  | { jobId: number }
+  | { newJob: { customerName: string; customerEmail?: string; reference?: string; dueDate?: string } }
+);
 
 export const frameScheduleQuery = (id: number) =>
   queryOptions({

@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { JobStatus, PlanStatus } from '@/db/enums';
 import type { PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
+import type { PaymentState } from '@/lib/quotes/payment-state';
 import { fetchJson } from './fetch-json';
 
 export type JobFilters = { q?: string; status?: JobStatus | ''; dueFrom?: string; dueTo?: string };
@@ -14,9 +15,12 @@ export type JobListRow = {
   status: JobStatus;
   itemCount: number;
   pieceCount: number;
+  /** The latest quote and where its acceptance and payment stand (null before the first plan). */
+  quoteNumber: string | null;
+  paymentState: PaymentState | null;
 };
 
-export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount'> & {
+export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount' | 'quoteNumber' | 'paymentState'> & {
   notes: string;
   createdAt: string;
   updatedAt: string;

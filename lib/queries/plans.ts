@@ -2,6 +2,8 @@ import { queryOptions } from '@tanstack/react-query';
 import type { BoardStatus, PlanStatus } from '@/db/enums';
 import type { CuttingPlanPrice } from '@/lib/pricing/pricing-types';
 import type { BoardPiece, PlanSection, PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
+import type { QuoteView } from '@/lib/quotes/get-plan-quote';
+import type { PaymentState } from '@/lib/quotes/payment-state';
 import { fetchJson } from './fetch-json';
 
 export type PlanBoardView = {
@@ -31,6 +33,7 @@ export type PlanViewData = {
   createdAt: string;
   releasedAt: string | null;
   boards: PlanBoardView[];
+  quote: QuoteView & { paidPence: number; paymentState: PaymentState };
 };
 
 export const planQuery = (planId: number) =>
@@ -91,13 +94,20 @@ export function describePlanRun(run: PlanRunView): string {
   return run.status === 'done' ? 'Done, opening the plan…' : 'Stopped.';
 }
 
-export const releasePlanRequest = (planId: number) =>
-  fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, { method: 'POST' });
+export const releasePlanRequest = (planId: number, override?: string) =>
+  fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, {
+    method: 'POST',
+    body: JSON.stringify(override ? { override } : {}),
+  });
+export const createQuoteLinkRequest = (planId: number) =>
+  fetchJson<{ url: string; expiresAt: string }>(`/api/plans/${planId}/quote-link`, { method: 'POST' });
+export const revokeQuoteLinksRequest = (planId: number) =>
+  fetchJson<{ revoked: number }>(`/api/plans/${planId}/quote-link`, { method: 'DELETE' });
 export const unreleasePlanRequest = (planId: number) =>
   fetchJson<{ planId: number }>(`/api/plans/${planId}/unrelease`, { method: 'POST' });
 
 export const emailPlanRequest = (planId: number, body: { to?: string; message?: string }) =>
-  fetchJson<{ sent: boolean; to: string }>(`/api/plans/${planId}/email`, {
+  fetchJson<{ sent: boolean; to: string; quoteUrl: string }>(`/api/plans/${planId}/email`, {
     method: 'POST',
     body: JSON.stringify(body),
   });

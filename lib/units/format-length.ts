@@ -24,23 +24,25 @@ function reduceFraction(num: number, den: number): string {
   return `${num / a}/${den / a}`;
 }
 
-function formatInches(sixteenths: number): string {
+// After feet the whole inches are always written, even 0: 8′-0 7/16″, never 8′-7/16″, which
+// reads as a dash and 7/16 and is easily taken for 8 ft 7 in.
+function formatInches(sixteenths: number, afterFeet: boolean): string {
   const whole = Math.floor(sixteenths / IMPERIAL_DENOMINATOR);
   const rest = sixteenths % IMPERIAL_DENOMINATOR;
   if (rest === 0) return `${whole}″`;
   const fraction = reduceFraction(rest, IMPERIAL_DENOMINATOR);
-  return whole === 0 ? `${fraction}″` : `${whole} ${fraction}″`;
+  return whole === 0 && !afterFeet ? `${fraction}″` : `${whole} ${fraction}″`;
 }
 
 /**
- * Feet-dash-inches to the nearest 1/16 in with reduced fractions: 7′-8 5/8″, 4′-0″; inches alone
+ * Feet-dash-inches to the nearest 1/16 in with reduced fractions: 7′-8 5/8″, 4′-0″, 8′-0 7/16″; inches alone
  * under a foot: 11 1/2″ (open textbook "Fundamentals – Drawings and Specifications").
  */
 export function formatFeetInches(mm: number): string {
   const sixteenths = millimetresToSixteenths(Math.abs(mm));
   const sign = mm < 0 && sixteenths !== 0 ? '-' : '';
   const feet = Math.floor(sixteenths / SIXTEENTHS_PER_FOOT);
-  const inches = formatInches(sixteenths % SIXTEENTHS_PER_FOOT);
+  const inches = formatInches(sixteenths % SIXTEENTHS_PER_FOOT, feet > 0);
   return feet === 0 ? `${sign}${inches}` : `${sign}${feet}′-${inches}`;
 }
 

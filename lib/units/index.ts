@@ -3,3 +3,4 @@ export { parseLength } from './parse-length';
 export { formatLength, formatMillimetres, formatFeetInches, millimetresToSixteenths } from './format-length';
 export { lengthInputSchema } from './length-input-schema';
 export type { ParseLengthResult, LengthUnit } from './length-result';
+export { shortPieceMessage } from './short-piece';

@@ -14,6 +14,9 @@ export const saveFrameScheduleBodySchema = z
       .trim()
       .max(120, { error: 'Customer name must be at most 120 characters' })
       .default(''),
+    customerEmail: z
+      .union([z.email({ error: 'Give an e-mail address like name@example.com' }), z.literal('')])
+      .default(''),
     unit: frameUnitSchema.default('mm'),
     panels: z
       .array(frameSchedulePanelSchema, { error: 'Panels must be a list' })
@@ -43,10 +46,15 @@ export const sendScheduleToJobBodySchema = z
           .trim()
           .min(1, { error: 'Give the customer name' })
           .max(120, { error: 'Customer name must be at most 120 characters' }),
+        customerEmail: z
+          .union([z.email({ error: 'Give an e-mail address like name@example.com' }), z.literal('')])
+          .optional(),
         reference: z.string().trim().max(40, { error: 'Reference must be at most 40 characters' }).optional(),
         dueDate: z.union([dueDateSchema, z.literal('')]).optional(),
       })
       .optional(),
+    // When the job already holds this schedule's pieces: swap them for the new set, or add another set.
+    ifAlreadySent: z.enum(['replace', 'add'], { error: 'Choose replace or add' }).optional(),
   })
   .strict()
   .refine((body) => (body.jobId === undefined) !== (body.newJob === undefined), {

@@ -15,19 +15,31 @@ const email = z.union([
   z.string().trim().toLowerCase().email('Enter a valid e-mail address.'),
 ]);
 
-/** POST /api/jobs. The reference is generated (next J-number) when left out. */
-export const createJobBodySchema = z.object({
-  customer: z.string().trim().min(1, 'Enter the customer.').max(120),
-  reference: z
-    .string()
-    .trim()
-    .max(40)
-    .optional()
-    .transform((v) => v || undefined),
-  dueDate: dueDate.nullable().optional(),
-  customerEmail: email.optional(),
-  notes: z.string().max(2000).optional(),
-});
+const deliveryChargePence = z.number().int('The delivery charge is in whole pence.').min(0).max(100_000_00);
+
+/**
+ * POST /api/jobs. The reference is generated (next J-number) when left out. The customer is a
+ * record (`customerId`) or a name, which finds that customer or makes a new retail one.
+ */
+export const createJobBodySchema = z
+  .object({
+    customerId: z.number().int().positive().optional(),
+    customer: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
+    deliveryChargePence: deliveryChargePence.optional(),
+    reference: z
+      .string()
+      .trim()
+      .max(40)
+      .optional()
+      .transform((v) => v || undefined),
+    dueDate: dueDate.nullable().optional(),
+    customerEmail: email.optional(),
+    notes: z.string().max(2000).optional(),
+  })
+  .refine((v) => v.customerId !== undefined || v.customer !== undefined, {
+    message: 'Choose a customer or enter a new one.',
+    path: ['customer'],
+  });
 export type CreateJobBody = z.infer<typeof createJobBodySchema>;
 
 /** PATCH /api/jobs/[jobId]: edit details, cancel (status "cancelled") or reopen a cancelled job (status "draft"). */
@@ -37,6 +49,8 @@ export const updateJobBodySchema = z
     reference: z.string().trim().min(1, 'Enter a reference.').max(40),
     dueDate: dueDate.nullable(),
     customerEmail: email,
+    customerId: z.number().int().positive(),
+    deliveryChargePence,
     notes: z.string().max(2000),
     status: z.enum(['cancelled', 'draft'], { message: 'A job can only be cancelled or reopened here.' }),
   })
@@ -61,20 +75,34 @@ const quantity = z
   .min(1, 'Quantity must be at least 1.')
   .max(10_000, 'Quantity must be at most 10 000.');
 
-/** One line item from the editable table; length in mm or any notation lib/units reads. */
-export const jobItemBodySchema = z.object({
+const jobItemFields = z.object({
   sectionId: z.number().int().positive('Choose a section.'),
   length: lengthInputSchema,
+  // The length as typed, kept so a too-short bare number can be answered with "did you mean 2.4 m?".
+  lengthText: z.string().max(40).optional(),
   quantity,
   label: z.string().trim().max(100).default(''),
   note: z.string().trim().max(500).default(''),
 });
-export type JobItemBody = z.input<typeof jobItemBodySchema>;
 
-export const updateJobItemBodySchema = jobItemBodySchema
-  .partial()
-  .strict()
-  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
+/** Copies a typed length into `lengthText` before it is read as millimetres. */
+const keepTypedLength = (body: unknown) =>
+  body && typeof body === 'object' && typeof (body as { length?: unknown }).length === 'string'
+    ? { ...body, lengthText: (body as { length: string }).length }
+    : body;
+
+/** One line item from the editable table; length in mm or any notation lib/units reads. */
+export const jobItemBodySchema = z.preprocess(keepTypedLength, jobItemFields);
+export type JobItemBody = z.input<typeof jobItemFields>;
+export type JobItemFields = z.output<typeof jobItemFields>;
+
+export const updateJobItemBodySchema = z.preprocess(
+  keepTypedLength,
+  jobItemFields
+    .partial()
+    .strict()
+    .refine((v) => Object.keys(v).length > 0, 'Nothing to change.'),
+);
 
 /** Largest cut list the import accepts, in bytes. */
 export const MAX_IMPORT_BYTES = 5 * 1024 * 1024;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DISPLAY_UNITS } from '@/db/enums';
+import { DISPLAY_UNITS, REGIONS } from '@/db/enums';
 
 const mm = (what: string, max: number, min = 0) =>
   z
@@ -12,8 +12,10 @@ export const yardSettingsBodySchema = z.object({
   yardName: z.string().trim().min(1, 'Enter the yard name.').max(80),
   kerfMm: mm('kerf', 20),
   trimMm: mm('end trim', 100),
-  minOffcutMm: mm('minimum kept offcut', 3000, 50),
+  minOffcutMm: mm('shortest kept offcut', 3000, 50),
+  minSafePieceMm: mm('minimum safe piece length', 1000, 50).optional(),
   displayUnit: z.enum(DISPLAY_UNITS, { message: 'Choose millimetres or feet and inches.' }),
+  region: z.enum(REGIONS, { message: 'Choose the United Kingdom or North America.' }).optional(),
   perCutChargePence: z.number().int('Whole pence.').min(0, 'A charge cannot be negative.').max(10_000),
   clearOffcutsAfterDays: z.number().int('Whole days.').min(7, 'At least a week.').max(3650),
 });

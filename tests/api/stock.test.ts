@@ -283,6 +283,8 @@ describe('yard settings', () => {
       trimMm: 10,
       minOffcutMm: 400,
       displayUnit: 'imperial',
+      region: 'na',
+      minSafePieceMm: 200,
       perCutChargePence: 30,
       clearOffcutsAfterDays: 60,
     };
@@ -291,9 +293,14 @@ describe('yard settings', () => {
     expect(ok.json.settings).toMatchObject(body);
     const bad = await call(patchSettings, {
       method: 'PATCH',
-      body: { ...body, kerfMm: 2.5, minOffcutMm: 10 },
+      body: { ...body, kerfMm: 2.5, minOffcutMm: 10, region: 'eu', minSafePieceMm: 10 },
     });
     expect(bad.status).toBe(422);
-    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['kerfMm', 'minOffcutMm']);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual([
+      'kerfMm',
+      'minOffcutMm',
+      'minSafePieceMm',
+      'region',
+    ]);
   });
 });

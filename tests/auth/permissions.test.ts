@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { ROLES } from '@/db/enums';
-import { ACTIONS, can, HOME_BY_ROLE, type Action } from '@/lib/auth/permissions';
+import { ACTIONS, can, HOME_BY_ROLE, isPublicAction, type Action } from '@/lib/auth/permissions';
 
 // The roles table of the product design: the owner does everything; the yard hand runs jobs,
 // plans, mail and the rack; the saw operator reads plans and cuts.
@@ -24,7 +24,19 @@ const expected: Record<Action, { owner: boolean; yard_hand: boolean; saw_operato
   'offcuts:label': { owner: true, yard_hand: true, saw_operator: true },
   'frames:edit': { owner: true, yard_hand: true, saw_operator: false },
   'reports:read': { owner: true, yard_hand: false, saw_operator: false },
+  'customers:read': { owner: true, yard_hand: true, saw_operator: false },
+  'customers:edit': { owner: true, yard_hand: true, saw_operator: false },
+  'quotes:share': { owner: true, yard_hand: true, saw_operator: false },
+  'plans:override-release': { owner: true, yard_hand: false, saw_operator: false },
+  'payments:read': { owner: true, yard_hand: false, saw_operator: false },
+  'payments:refund': { owner: true, yard_hand: false, saw_operator: false },
+  // Public on purpose: the customer's link token and the webhook's signature are the authority.
+  'quotes:customer': { owner: true, yard_hand: true, saw_operator: true },
+  'payments:webhook': { owner: true, yard_hand: true, saw_operator: true },
 };
+
+// Only these actions may be performed without signing in.
+const publicActions = ['payments:webhook', 'quotes:customer'];
 
 describe('role × action table', () => {
   it('covers every action the app declares', () => {
@@ -38,6 +50,11 @@ describe('role × action table', () => {
       });
     }
   }
+
+  it('only the customer quote link and the signed payment webhook are public', () => {
+    const found = (Object.keys(ACTIONS) as Action[]).filter(isPublicAction).sort();
+    expect(found).toEqual(publicActions);
+  });
 
   it('the owner may do everything', () => {
     for (const action of Object.keys(ACTIONS) as Action[]) expect(can('owner', action)).toBe(true);

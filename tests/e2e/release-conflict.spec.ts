@@ -1,4 +1,5 @@
 import { expect, test, type APIRequestContext } from '@playwright/test';
+import { acceptAndPayDeposit } from './support/payments';
 import { DEMO, signIn } from './support/sign-in';
 
 type Board = { source: 'stock' | 'offcut'; offcutId: number | null; lengthMm: number; sectionId: number };
@@ -38,6 +39,8 @@ test('two plans want the same rack offcut: one release wins, the other names the
   expect(planA.boards[0].offcutId).toBe(offcut!.offcutId);
   expect(planB.boards[0].offcutId).toBe(offcut!.offcutId);
 
+  // Both customers accept and pay, so only the offcut stands between them.
+  for (const p of [planA, planB]) await acceptAndPayDeposit(request, p.id);
   const results = await Promise.all([planA, planB].map((p) => request.post(`/api/plans/${p.id}/release`)));
   expect(results.map((r) => r.status()).sort()).toEqual([200, 409]);
   const loser = results[0].status() === 409 ? planA : planB;
@@ -49,6 +52,8 @@ test('two plans want the same rack offcut: one release wins, the other names the
   await expect(error).toContainText('(reserved)');
   await error.getByRole('button', { name: 'Plan again with what is on the rack now' }).click();
   await expect(page).toHaveURL(new RegExp(`/plans/(?!${loser.id}$)\\d+$`), { timeout: 60_000 });
+  // The new plan is a new quote version: the customer accepts it before it goes to the saw.
+  await acceptAndPayDeposit(request, Number(page.url().split('/').pop()));
   await page.getByRole('button', { name: 'Release to the saw' }).click();
   await expect(page.getByText('Released to the saw')).toBeVisible();
 });

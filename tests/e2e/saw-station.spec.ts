@@ -1,4 +1,5 @@
 import { expect, test, type Browser } from '@playwright/test';
+import { acceptAndPayDeposit } from './support/payments';
 import { DEMO, signIn } from './support/sign-in';
 import { SawStationPage } from './support/saw-station';
 
@@ -31,9 +32,11 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     expect(total).toBeGreaterThan(3);
 
     // The cautions are one line that opens on a tap.
-    await expect(page.getByTestId('safety-line')).toContainText('riving knife');
+    // Cross-cut saw cautions (HSE WIS36; HSE cross-cut saw guidance), deferring to the yard's risk assessment.
+    await expect(page.getByTestId('safety-line')).toContainText('Blade at rest before hands go near');
     await page.getByTestId('safety-line').locator('summary').tap();
-    await expect(page.getByTestId('safety-line')).toContainText('own safe-working rules');
+    await expect(page.getByTestId('safety-line')).toContainText('own risk assessment');
+    await expect(page.getByTestId('safety-line')).toContainText('HSE WIS36');
     await page.getByTestId('safety-line').locator('summary').tap();
 
     // The next cut is highlighted, and each "cut made" moves the highlight on.
@@ -86,6 +89,7 @@ test.describe('the saw station in portrait (768×1024, touch)', () => {
     const replanned = await office.request.post(`/api/jobs/${job.id}/plans`, { data: {} });
     expect(replanned.status()).toBe(201);
     const planned = await replanned.json();
+    await acceptAndPayDeposit(office.request, planned.id);
     expect((await office.request.post(`/api/plans/${planned.id}/release`)).status()).toBe(200);
 
     await signIn(page, DEMO.saw);

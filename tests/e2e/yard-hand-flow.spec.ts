@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { caughtMail } from './support/mail';
+import { acceptAndPayDeposit } from './support/payments';
 import { DEMO, signIn } from './support/sign-in';
 
 const csvFile = (name: string, rows: string[]) => ({
@@ -66,13 +67,17 @@ test.describe('the yard hand flow', () => {
       .trim();
     await page
       .getByTestId('email-sheet-form')
-      .getByRole('button', { name: 'E-mail cut sheet and quote' })
+      .getByRole('button', { name: 'E-mail quote and cut sheet' })
       .click();
     await expect(page.getByTestId('email-result')).toContainText('sent to wren@example.com');
     const mail = (await caughtMail()).find((m) => m.subject.includes(reference));
     expect(mail?.to).toEqual(['wren@example.com']);
     expect(mail?.attachments[0]).toMatchObject({ contentType: 'application/pdf' });
 
+    // Cut timber cannot be returned: release waits for the customer to accept and pay.
+    await page.getByRole('button', { name: 'Release to the saw' }).click();
+    await expect(page.getByTestId('release-error')).toContainText('has not accepted the quote');
+    await acceptAndPayDeposit(page.request, Number(page.url().split('/').pop()));
     await page.getByRole('button', { name: 'Release to the saw' }).click();
     await expect(page.getByText('Released to the saw')).toBeVisible();
     await page.getByRole('button', { name: 'Take back from the saw' }).click();

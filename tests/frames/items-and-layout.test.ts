@@ -101,8 +101,11 @@ describe('properties of generated walls', () => {
         const { items } = generateFrameItems(checked.value.panels, { sections });
         const wall = checked.value.panels[0];
         if (wall.kind !== 'sloped_wall') throw new Error('sloped wall expected');
+        // The raking plate's blank is its length along the slope plus its 47 mm depth × tan(slope),
+        // for its two parallel plumb cuts (trigonometry).
+        const rise = wall.highHeight - wall.lowHeight;
         const limit = Math.max(
-          Math.ceil(Math.hypot(wall.length, wall.highHeight - wall.lowHeight)),
+          Math.ceil(Math.hypot(wall.length, rise) + (47 * Math.abs(rise)) / wall.length),
           wall.highHeight,
         );
         for (const item of items) {

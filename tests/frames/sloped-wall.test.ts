@@ -34,7 +34,7 @@ describe('mono-pitch wall', () => {
     expect(inner.every((s) => s.angle === 26.6)).toBe(true);
   });
 
-  it('sloping top plate runs along the slope: 2400 long, 300 rise → 2419 mm', () => {
+  it('sloping top plate runs along the slope: 2400 long, 300 rise → 2419 mm, blank 2425 at the long point', () => {
     const panels = parsePanels([
       {
         kind: 'sloped_wall',
@@ -48,7 +48,9 @@ describe('mono-pitch wall', () => {
       },
     ]);
     const plate = generateFrameItems(panels, { sections }).items.find((i) => i.label === 'side top plate');
-    expect(plate).toMatchObject({ length: Math.round(Math.hypot(2400, 300)), quantity: 1, angle: 7.1 });
+    // Along the slope √(2400² + 300²) = 2418.7; two parallel plumb cuts add the plate's depth in the
+    // elevation × tan(slope) = 47 × 300/2400 = 5.9 (trigonometry), so the blank is 2425, not 2419.
+    expect(plate).toMatchObject({ length: 2425, quantity: 1, angle: 7.1, note: 'plumb cut both ends' });
   });
 
   it('property: studs grow steadily from the low end, every length positive and within the panel', () => {
@@ -87,7 +89,8 @@ describe('mono-pitch wall', () => {
           for (const item of items) {
             expect(item.length).toBeGreaterThan(0);
             expect(item.length).toBeLessThanOrEqual(
-              Math.ceil(Math.max(Math.hypot(length, rise), low + rise)),
+              // The raking plate's blank adds its 47 mm depth × tan(slope) for two parallel plumb cuts.
+              Math.ceil(Math.max(Math.hypot(length, rise) + (47 * rise) / length, low + rise)),
             );
           }
         },

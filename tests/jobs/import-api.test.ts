@@ -122,6 +122,22 @@ describe('POST /api/jobs/[jobId]/items/import: bad files save nothing', () => {
     expect(await itemsOf()).toEqual(before);
   });
 
+  it('refuses a bare 2.4 (2 mm) with "did you mean 2.4 m?" and pieces under the minimum safe length', async () => {
+    // The demo yard's minimum safe piece length is 150 mm (a yard setting; common practice, no published source).
+    const before = await itemsOf();
+    const text = ['section,length,quantity', 'T47100,2.4,2', 'T47100,100 mm,1', 'T47100,150,1'].join('\n');
+    const res = await csv(text);
+    expect(res.status).toBe(422);
+    const errors = res.json.errors as { line: number; column: string | null; message: string }[];
+    expect(errors.map((e) => [e.line, e.column])).toEqual([
+      [2, 'length'],
+      [3, 'length'],
+    ]);
+    expect(errors[0].message).toMatch(/Did you mean 2.4 m \(2400 mm\)\?/);
+    expect(errors[1].message).toMatch(/minimum safe piece length \(150 mm\)/);
+    expect(await itemsOf()).toEqual(before);
+  });
+
   it('refuses an empty file and wrong columns', async () => {
     const empty = await csv('');
     expect(empty.status).toBe(422);

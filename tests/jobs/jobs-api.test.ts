@@ -156,6 +156,18 @@ describe('line items', () => {
     expect((await add({ sectionId: 1, length: 1000, quantity: 1 })).status).toBe(403);
   });
 
+  it('refuses a too-short piece with a clear message, asking about a bare number', async () => {
+    // Minimum safe piece length 150 mm in the demo yard (common practice, no published source).
+    const bare = await add({ sectionId: 1, length: '2.4', quantity: 1 });
+    expect(bare.status).toBe(422);
+    expect(bare.json.error).toMatch(/Did you mean 2.4 m \(2400 mm\)\?/);
+    const short = await add({ sectionId: 1, length: 35, quantity: 1 });
+    expect(short.status).toBe(422);
+    expect(short.json.details.issues[0]).toMatchObject({ path: 'length' });
+    expect(short.json.error).toMatch(/^35 mm is shorter than the yard's minimum safe piece length/);
+    expect((await add({ sectionId: 1, length: '2.4 m', quantity: 1 })).status).toBe(201);
+  });
+
   it('changing the list of a planned job returns it to draft', async () => {
     await call(planJob, { method: 'POST', params: { jobId: '1' }, body: { timeLimitMs: 300 } });
     await add({ sectionId: 1, length: 1000, quantity: 1 });

@@ -1,5 +1,5 @@
-import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { eq } from 'drizzle-orm';
+import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { eq, sql } from 'drizzle-orm';
 import { POST as defect } from '@/app/api/plans/[planId]/boards/[boardNo]/defect/route';
 import { GET as sawPlan } from '@/app/api/saw/plans/[planId]/route';
 import * as schema from '@/db/schema';
@@ -17,9 +17,31 @@ import {
   sectionByCode,
 } from './saw-fixtures';
 
+// Every solve first runs a query of its own: with a transaction open on the one connection that
+// query would wait for ever, so a solve inside a transaction shows up as a timeout.
+const duringSolve = vi.hoisted(() => ({ before: async () => {}, after: async () => {} }));
+vi.mock('@/lib/plans/run-solver', async (importActual) => {
+  const actual = await importActual<typeof import('@/lib/plans/run-solver')>();
+  return {
+    runSolver: async (input: SolveInput) => {
+      await duringSolve.before();
+      const plan = await actual.runSolver(input);
+      await duringSolve.after();
+      return plan;
+    },
+  };
+});
+
 let t: Awaited<ReturnType<typeof useApiTestDb>>;
 beforeEach(async () => {
   t = await useApiTestDb();
+  duringSolve.before = async () => {
+    const timeout = new Promise((_, reject) =>
+      setTimeout(() => reject(new Error('the solve ran inside a transaction')), 3_000),
+    );
+    await Promise.race([t.db.execute(sql`select 1`), timeout]);
+  };
+  duringSolve.after = async () => {};
 });
 afterEach(() => t.close());
 afterAll(closeTemplate);
@@ -169,5 +191,33 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
     const kinds = (await movementsOf(t.db, mine.planId)).map((m) => m.kind);
     expect(kinds).toEqual(expect.arrayContaining(['defect', 'offcut_scrapped']));
     expect(kinds).not.toContain('stock_cut');
+  });
+
+  it('solves again when another plan takes a chosen rack offcut during the solve', async () => {
+    const section = await sectionByCode(t.db, 'T47100');
+    await clearRack(t.db, section.id);
+    const mine = await releasedJob(t.db, {
+      reference: 'J-RACE',
+      sectionId: section.id,
+      pieces: [[1500, 1, 'rail']],
+    });
+    const [board] = await boardsOf(t.db, mine.planId);
+    const spare = await addOffcut(t.db, { tag: 'T-SPARE', sectionId: section.id, lengthMm: 1600 });
+    let solves = 0;
+    duringSolve.after = async () => {
+      solves += 1;
+      // While the first solve runs, another plan reserves the offcut it is about to choose.
+      if (solves === 1)
+        await t.db.update(schema.offcuts).set({ status: 'reserved' }).where(eq(schema.offcuts.id, spare.id));
+    };
+    const res = await report(mine.planId, board.boardNo, { reason: 'split' });
+    expect(res.status).toBe(200);
+    expect(solves).toBe(2);
+    expect(res.json.replan.input.offcuts.map((o: { id: string }) => o.id)).not.toContain(`O${spare.id}`);
+    expect(checkPlan(res.json.replan.input, res.json.replan.output)).toEqual([]);
+    const added = (await boardsOf(t.db, mine.planId)).filter((b) => b.boardNo > board.boardNo);
+    expect(added.map((b) => b.offcutId)).not.toContain(spare.id);
+    const defects = (await movementsOf(t.db, mine.planId)).filter((m) => m.kind === 'defect');
+    expect(defects).toHaveLength(1);
   });
 });

@@ -1,5 +1,5 @@
 // fast-check generator of varied cutting jobs: kerf 0–5, trim 0–25, several capped stock lengths,
-// offcuts, and some pieces longer than every source.
+// offcuts, nominal pieces with a tolerance, and some pieces longer than every source.
 import fc from 'fast-check';
 import type { SolveInput } from '@/solver/types';
 
@@ -21,7 +21,12 @@ export const jobArbitrary: fc.Arbitrary<SolveInput> = fc
     ),
     offcuts: fc.array(fc.integer({ min: 100, max: 3000 }), { maxLength: 6 }),
     pieces: fc.array(
-      fc.record({ length: fc.integer({ min: 20, max: 6500 }), quantity: fc.integer({ min: 1, max: 12 }) }),
+      fc.record({
+        length: fc.integer({ min: 20, max: 6500 }),
+        quantity: fc.integer({ min: 1, max: 12 }),
+        // Mostly exact pieces; some nominal ones (cladding, studs) with a few millimetres' tolerance.
+        tolerance: fc.oneof(fc.constant(0), fc.constant(0), fc.integer({ min: 1, max: 10 })),
+      }),
       {
         minLength: 1,
         maxLength: 8,
@@ -40,5 +45,10 @@ export const jobArbitrary: fc.Arbitrary<SolveInput> = fc
       available: s.available,
     })),
     offcuts: j.offcuts.map((length, k) => ({ id: `K-${k}`, length })),
-    pieces: j.pieces.map((p, k) => ({ id: `P${k}`, length: p.length, quantity: p.quantity })),
+    pieces: j.pieces.map((p, k) => ({
+      id: `P${k}`,
+      length: p.length,
+      quantity: p.quantity,
+      tolerance: Math.min(p.tolerance, p.length - 1),
+    })),
   }));

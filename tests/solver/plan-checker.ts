@@ -16,7 +16,8 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
   let cost = 0;
   let material = 0;
 
-  plan.boards.forEach((b, n) => {
+  plan.boards.forEach((board, n) => {
+    let b = board;
     const where = `board ${n} (${b.sourceId})`;
     const stock = stockById.get(b.sourceId);
     const offcut = offcutById.get(b.sourceId);
@@ -25,41 +26,69 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
     if (b.source !== (isStock ? 'stock' : 'offcut')) errors.push(`${where}: wrong source kind`);
     const length = stock?.length ?? offcut!.length;
     if (b.length !== length) errors.push(`${where}: length ${b.length} but source is ${length}`);
-    const boardTrim = isStock ? trim : 0;
+    // Plans stored before nominal pieces existed carry no cut lengths: those were the ordered lengths.
+    b = { ...b, cutLengths: b.cutLengths ?? b.pieceLengths };
+    const tolOf = (id: string) => pieceById.get(id)?.tolerance ?? 0;
+    // DESIGN.md, full lengths and nominal pieces: only nominal pieces, or one piece as long as the
+    // board (within its tolerance), means no trim.
+    const onlyNominal = b.pieces.every((id) => tolOf(id) > 0);
+    const single = b.pieces.length === 1 ? pieceById.get(b.pieces[0]) : undefined;
+    const wholeBoard =
+      single !== undefined && single.length - tolOf(single.id) <= length && length <= single.length;
+    if ((b.fullLength ?? wholeBoard) !== wholeBoard)
+      errors.push(`${where}: fullLength ${b.fullLength}, expected ${wholeBoard}`);
+    const boardTrim = isStock && !onlyNominal && !wholeBoard ? trim : 0;
     if (b.trim !== boardTrim) errors.push(`${where}: trim ${b.trim}, expected ${boardTrim}`);
     if (isStock) stockUse.set(b.sourceId, (stockUse.get(b.sourceId) ?? 0) + 1);
     else offcutUse.set(b.sourceId, (offcutUse.get(b.sourceId) ?? 0) + 1);
     if (b.pieces.length === 0) errors.push(`${where}: no pieces`);
     if (b.pieces.length !== b.pieceLengths.length)
       errors.push(`${where}: pieces and lengths differ in count`);
+    if (b.cutLengths.length !== b.pieces.length)
+      errors.push(`${where}: cut lengths and pieces differ in count`);
     b.pieces.forEach((id, k) => {
       seen.set(id, (seen.get(id) ?? 0) + 1);
       const p = pieceById.get(id);
       if (!p) errors.push(`${where}: unknown piece ${id}`);
-      else if (p.length !== b.pieceLengths[k])
-        errors.push(`${where}: piece ${id} length ${b.pieceLengths[k]} != ${p.length}`);
+      else {
+        if (p.length !== b.pieceLengths[k])
+          errors.push(`${where}: piece ${id} length ${b.pieceLengths[k]} != ${p.length}`);
+        const cut = b.cutLengths[k];
+        if (!(cut >= p.length - (p.tolerance ?? 0) && cut <= p.length))
+          errors.push(
+            `${where}: piece ${id} cut at ${cut}, allowed ${p.length - (p.tolerance ?? 0)}–${p.length}`,
+          );
+      }
     });
     const usable = length - boardTrim - (boardTrim > 0 ? kerf : 0);
-    const sumWithKerf = b.pieceLengths.reduce((s, l) => s + l + kerf, 0);
-    if (sumWithKerf > usable + kerf) errors.push(`${where}: over-full (${sumWithKerf} > ${usable + kerf})`);
+    const sumWithKerf = b.cutLengths.reduce((s, l) => s + l + kerf, 0);
+    if (wholeBoard) {
+      if (b.cutLengths[0] !== length || b.marks.length > 0 || b.kerfLoss !== 0 || b.remainder !== 0)
+        errors.push(`${where}: a full-length board is sold whole, without a cut`);
+    } else if (sumWithKerf > usable + kerf)
+      errors.push(`${where}: over-full (${sumWithKerf} > ${usable + kerf})`);
+    // Nominal pieces are shortened only when their ordered lengths do not fit.
+    const orderedFit = b.pieceLengths.reduce((s, l) => s + l + kerf, 0) <= usable + kerf;
+    if (orderedFit && b.cutLengths.some((c, k) => c !== b.pieceLengths[k]))
+      errors.push(`${where}: pieces cut short although their ordered lengths fit`);
     // Marks: each cut starts where the previous piece ends; the last cut may be absent only at the very end.
     let pos = 0;
     const expected: number[] = [];
-    b.pieceLengths.forEach((l) => {
+    b.cutLengths.forEach((l) => {
       pos += l;
       if (pos < usable) expected.push(pos);
       pos += kerf;
     });
     if (JSON.stringify(expected) !== JSON.stringify(b.marks))
       errors.push(`${where}: marks ${b.marks} expected ${expected}`);
-    const used = b.pieceLengths.reduce((s, l) => s + l, 0) + b.pieceLengths.length * kerf;
+    const used = b.cutLengths.reduce((s, l) => s + l, 0) + b.cutLengths.length * kerf;
     const remainder = Math.max(0, usable - used);
     if (b.remainder !== remainder) errors.push(`${where}: remainder ${b.remainder} expected ${remainder}`);
     const kept = remainder > 0 && remainder >= minOffcut;
     if (b.remainderKept !== kept) errors.push(`${where}: remainderKept wrong`);
     const scrap = boardTrim + (kept ? 0 : remainder);
     if (b.scrap !== scrap) errors.push(`${where}: scrap ${b.scrap} expected ${scrap}`);
-    const pieceSum = b.pieceLengths.reduce((s, l) => s + l, 0);
+    const pieceSum = b.cutLengths.reduce((s, l) => s + l, 0);
     if (pieceSum + b.kerfLoss + b.scrap + (kept ? remainder : 0) !== length)
       errors.push(`${where}: material does not add up`);
     const boardCost = isStock ? (stock!.cost ?? length / 1000) : 0;
@@ -78,9 +107,15 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
   const sources = [
     ...input.stock
       .filter((s) => s.available !== 0)
-      .map((s) => ({ id: s.id, usable: capacityOf(s.length, true), stock: s })),
-    ...input.offcuts.map((o) => ({ id: o.id, usable: capacityOf(o.length, false), stock: null })),
+      .map((s) => ({ id: s.id, length: s.length, usable: capacityOf(s.length, true), stock: s })),
+    ...input.offcuts.map((o) => ({ id: o.id, length: o.length, usable: o.length, stock: null })),
   ];
+  // A piece alone on a board: untrimmed when nominal or as long as the board, else trimmed.
+  const fitsAlone = (s: (typeof sources)[number], p: SolveInput['pieces'][number]) => {
+    const shortest = p.length - (p.tolerance ?? 0);
+    const untrimmed = (p.tolerance ?? 0) > 0 || s.length <= p.length;
+    return shortest <= (untrimmed ? s.length : s.usable);
+  };
   for (const u of plan.unplaced) {
     seen.set(u.id, (seen.get(u.id) ?? 0) + 1);
     const p = pieceById.get(u.id);
@@ -88,13 +123,14 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
       errors.push(`unplaced: unknown piece ${u.id}`);
       continue;
     }
-    const fitsSomewhere = sources.some((s) => s.usable >= p.length);
+    const takes = (s: (typeof sources)[number]) => fitsAlone(s, p);
+    const fitsSomewhere = sources.some(takes);
     if (u.reason === 'longer-than-every-source' && fitsSomewhere)
       errors.push(`unplaced ${u.id}: fits a source`);
     if (u.reason === 'not-enough-stock') {
       if (!fitsSomewhere) errors.push(`unplaced ${u.id}: reason should be longer-than-every-source`);
       const idle = sources.find((s) => {
-        if (s.usable < p.length) return false;
+        if (!takes(s)) return false;
         if (!s.stock) return !offcutUse.has(s.id);
         const cap = s.stock.available;
         return cap === null || cap === undefined || (stockUse.get(s.id) ?? 0) < cap;

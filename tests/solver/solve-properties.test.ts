@@ -47,7 +47,9 @@ describe('solve: properties checked by an independent plan checker', () => {
     const plan = solve(job);
     expect(checkPlan(job, plan)).toEqual([]);
     const merged = structuredClone(plan);
-    merged.boards = [{ ...merged.boards[0], pieces: ['a', 'a'], pieceLengths: [500, 500] }];
+    merged.boards = [
+      { ...merged.boards[0], pieces: ['a', 'a'], pieceLengths: [500, 500], cutLengths: [500, 500] },
+    ];
     expect(checkPlan(job, merged).some((e) => e.includes('over-full'))).toBe(true);
     const lost = structuredClone(plan);
     lost.boards = lost.boards.slice(1);

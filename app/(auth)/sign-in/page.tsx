@@ -7,7 +7,11 @@ export const metadata: Metadata = { title: 'Sign in' };
 
 export default function SignInPage() {
   return (
-    <main className="flex min-h-screen items-center justify-center bg-[repeating-linear-gradient(90deg,var(--color-sawdust)_0_46px,var(--color-shaving)_46px_48px)] p-4">
+    <main
+      id="main-content"
+      tabIndex={-1}
+      className="flex min-h-screen items-center justify-center bg-[repeating-linear-gradient(90deg,var(--color-sawdust)_0_46px,var(--color-shaving)_46px_48px)] p-4"
+    >
       <div className="w-full max-w-md rounded-2xl border-2 border-grain bg-white p-8 shadow-lg">
         <Logo size={44} />
         <h1 className="mt-6 text-2xl font-bold">Sign in to the yard</h1>

@@ -3,11 +3,13 @@ import Link from 'next/link';
 import { AccessDenied } from '@/components/layout/access-denied';
 import { CaughtMailList } from '@/components/mail/caught-mail-list';
 import { SentMailTable } from '@/components/mail/sent-mail-table';
-import { Card } from '@/components/ui/field';
+import { Card, cardClass } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { can } from '@/lib/auth/permissions';
 import { listCaughtMail, listSentMail } from '@/lib/mail/list-outbox';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { cn } from '@/lib/cn';
 
 export const metadata: Metadata = { title: 'Outbox' };
 export const dynamic = 'force-dynamic';
@@ -23,9 +25,9 @@ export default async function OutboxPage() {
         lead="Cut sheets and quotes the yard has e-mailed, and whether the mail server took them."
       />
       <div className="space-y-6">
-        <Card className="overflow-x-auto p-0">
+        <ScrollRegion label="Sent mail" className={cn(cardClass, 'p-0')}>
           <SentMailTable rows={sent} />
-        </Card>
+        </ScrollRegion>
         {caught && (
           <Card>
             <h2 className="mb-3 text-xl font-bold">Caught by the local mail catcher</h2>

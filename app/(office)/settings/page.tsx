@@ -27,6 +27,8 @@ export default async function SettingsPage() {
             trimMm: s.trimMm,
             minOffcutMm: s.minOffcutMm,
             displayUnit: s.displayUnit,
+            region: s.region,
+            minSafePieceMm: s.minSafePieceMm,
             perCutChargePence: s.perCutChargePence,
             clearOffcutsAfterDays: s.clearOffcutsAfterDays,
           }}

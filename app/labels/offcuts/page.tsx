@@ -50,7 +50,7 @@ export default async function OffcutLabelsPage({ searchParams }: { searchParams:
     </Link>
   );
   return (
-    <main className="mx-auto max-w-5xl p-4">
+    <main id="main-content" tabIndex={-1} className="mx-auto max-w-5xl p-4">
       <style>{PAGE_SIZE[format]}</style>
       <div className="no-print mb-6 flex flex-wrap items-center gap-3">
         <Link

@@ -4,6 +4,7 @@ const SMTP_PORT = Number(process.env.PW_SMTP_PORT ?? PORT - 500);
 export const MAIL_CATCHER_URL = `http://127.0.0.1:${SMTP_PORT + 10_000}`;
 
 export type CaughtMail = {
+  from: string;
   to: string[];
   subject: string;
   text: string;

@@ -30,6 +30,7 @@ export default async function PlanPage({ params, searchParams }: Props) {
         context={context}
         previousPlanId={previous ? Number(previous) || undefined : undefined}
         canAct={can(user.role, 'plans:release')}
+        isOwner={can(user.role, 'plans:override-release')}
       />
     </DisplayUnitProvider>
   );

@@ -1,0 +1,82 @@
+'use client';
+
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { formatPence } from '@/lib/format/money';
+import { createQuoteLinkRequest, revokeQuoteLinksRequest, type PlanViewData } from '@/lib/queries/plans';
+import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
+import { QuoteTable } from './quote-table';
+
+/** The plan's quote for the office: figures, acceptance and payment, and the customer's link. */
+export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: boolean }) {
+  const { quote } = plan;
+  const queryClient = useQueryClient();
+  const [link, setLink] = useState<{ url: string; expiresAt: string } | null>(null);
+  const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
+
+  async function run(action: () => Promise<void>) {
+    setMessage(null);
+    try {
+      await action();
+      await queryClient.invalidateQueries({ queryKey: ['plan', plan.id] });
+    } catch (e) {
+      setMessage({ tone: 'error', text: (e as Error).message });
+    }
+  }
+
+  return (
+    <section className="space-y-3" data-testid="quote-panel">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h2 className="text-xl font-bold">Quote {quote.number}</h2>
+        <p className="text-sm text-bark-soft">
+          {quote.account === 'trade' ? 'Trade account, prices ex VAT' : 'Retail, prices include VAT'} · valid
+          until {new Date(quote.validUntil).toLocaleDateString('en-GB')}
+        </p>
+      </div>
+      <QuoteTable quote={quote} />
+      <p data-testid="quote-state" className="font-semibold">
+        {PAYMENT_STATE_LABEL[quote.paymentState]}
+        {quote.acceptedName ? ` · accepted by ${quote.acceptedName}` : ''}
+        {quote.paidPence > 0
+          ? ` · paid ${formatPence(quote.paidPence)} of ${formatPence(quote.grossPence)}`
+          : ''}
+      </p>
+      {canShare && (
+        <div className="no-print flex flex-wrap gap-2">
+          <Button
+            variant="secondary"
+            onClick={() => run(async () => setLink(await createQuoteLinkRequest(plan.id)))}
+          >
+            Make a link for the customer
+          </Button>
+          <Button
+            variant="secondary"
+            onClick={() =>
+              run(async () => {
+                const { revoked } = await revokeQuoteLinksRequest(plan.id);
+                setLink(null);
+                setMessage({ tone: 'info', text: `${revoked} link${revoked === 1 ? '' : 's'} withdrawn.` });
+              })
+            }
+          >
+            Withdraw links
+          </Button>
+        </div>
+      )}
+      {link && (
+        <Notice>
+          <p className="break-all">
+            Link for the customer (no sign-in needed):{' '}
+            <a className="font-semibold underline" href={link.url} data-testid="quote-link">
+              {link.url}
+            </a>
+          </p>
+          <p className="text-sm">Expires {new Date(link.expiresAt).toLocaleDateString('en-GB')}.</p>
+        </Notice>
+      )}
+      {message && <Notice tone={message.tone}>{message.text}</Notice>}
+    </section>
+  );
+}

@@ -1,0 +1,34 @@
+// Where a job stands between quote and saw, from its quote and the payments ledger.
+import type { Payment, Quote } from '@/db/schema';
+
+export type PaymentState = 'not_accepted' | 'unpaid' | 'deposit_paid' | 'paid' | 'on_account';
+
+export function paidPence(payments: Pick<Payment, 'status' | 'amountPence'>[]): number {
+  return payments.filter((p) => p.status === 'succeeded').reduce((sum, p) => sum + p.amountPence, 0);
+}
+
+export function paymentState(
+  quote: Pick<Quote, 'acceptedAt' | 'onAccount' | 'depositPence' | 'grossPence'>,
+  paid: number,
+): PaymentState {
+  if (!quote.acceptedAt) return 'not_accepted';
+  if (paid >= quote.grossPence) return 'paid';
+  if (quote.onAccount) return 'on_account';
+  if (paid >= quote.depositPence && paid > 0) return 'deposit_paid';
+  return 'unpaid';
+}
+
+export const PAYMENT_STATE_LABEL: Record<PaymentState, string> = {
+  not_accepted: 'Awaiting acceptance',
+  unpaid: 'Accepted, not paid',
+  deposit_paid: 'Deposit paid',
+  paid: 'Paid',
+  on_account: 'On account',
+};
+
+/** What release still needs, or null when the plan may go to the saw. */
+export function missingForRelease(state: PaymentState): string | null {
+  if (state === 'not_accepted') return 'the customer has not accepted the quote yet, and nothing is paid';
+  if (state === 'unpaid') return 'the customer accepted the quote but has not paid the deposit';
+  return null;
+}

@@ -1,0 +1,23 @@
+import { z } from 'zod';
+
+/** POST /api/plans/[planId]/release: the owner's reason for releasing an unaccepted or unpaid job. */
+export const releasePlanBodySchema = z
+  .object({ override: z.string().trim().min(3, 'Give a reason for the override.').max(500).optional() })
+  .strict();
+
+/** POST /api/quote-links/[token]/accept */
+export const acceptQuoteBodySchema = z.object({
+  name: z.string().trim().min(2, 'Type your name to accept.').max(120),
+  nonReturnable: z.literal(true, { message: 'Tick to confirm that cut timber cannot be returned.' }),
+  onAccount: z.boolean().default(false),
+});
+
+/** POST /api/quote-links/[token]/pay */
+export const payQuoteBodySchema = z.object({
+  share: z.enum(['deposit', 'full'], { message: 'Choose to pay the deposit or in full.' }),
+});
+
+/** POST /api/jobs/[jobId]/refund: the owner refunds what a cancelled job paid. */
+export const refundJobBodySchema = z.object({
+  reason: z.string().trim().min(3, 'Give a reason for the refund.').max(500),
+});

@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import { runSolver } from '@/lib/plans/run-solver';
+import type { SolveInput } from '@/solver';
+
+/** Many distinct lengths keep the search busy until its time limit. */
+function longJob(timeLimitMs: number): SolveInput {
+  const pieces = Array.from({ length: 180 }, (_, i) => ({
+    id: `p${i}`,
+    length: 301 + ((i * 7919) % 2400),
+    quantity: 3,
+  }));
+  return {
+    kerf: 3,
+    trim: 5,
+    minOffcut: 300,
+    timeLimitMs,
+    stock: [3000, 3600, 4200, 4800, 5400, 6000].map((length) => ({ id: `s${length}`, length })),
+    offcuts: [],
+    pieces,
+  };
+}
+
+describe('runSolver', () => {
+  it('solves in a worker thread, so this thread keeps answering during a long solve', async () => {
+    let longestGapMs = 0;
+    let last = performance.now();
+    const ticker = setInterval(() => {
+      const now = performance.now();
+      longestGapMs = Math.max(longestGapMs, now - last);
+      last = now;
+    }, 10);
+    const started = performance.now();
+    const plan = await runSolver(longJob(1_500));
+    clearInterval(ticker);
+
+    expect(performance.now() - started).toBeGreaterThan(1_000); // the solve really was long
+    expect(plan.unplaced).toEqual([]);
+    expect(plan.boards.flatMap((b) => b.pieces)).toHaveLength(540);
+    // On the request thread the ticker would have stalled for the whole solve.
+    expect(longestGapMs).toBeLessThan(200);
+  });
+
+  it('passes a failure inside the worker back as a rejection, not a hang', async () => {
+    await expect(runSolver({ ...longJob(200), pieces: null as never })).rejects.toThrow();
+  });
+});
