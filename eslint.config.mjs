@@ -14,6 +14,39 @@ export default defineConfig([
     'next-env.d.ts',
     '.data*/**',
   ]),
+  // Layers (DESIGN.md, Architecture): solver/ is a library of its own; lib/ never reaches into React
+  // components or routes; and no module may import itself back through others.
+  {
+    files: ['**/*.{ts,tsx,mjs}'],
+    // Packages are never parsed for cycles (slow, and some do not parse at all).
+    settings: { 'import/ignore': ['node_modules'] },
+    rules: { 'import/no-cycle': ['error', { ignoreExternal: true }] },
+  },
+  {
+    files: ['solver/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['@/*', '../*'], message: 'solver/ imports nothing from the app.' }] },
+      ],
+    },
+  },
+  {
+    files: ['lib/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['@/components/*', '@/app/*', '**/components/*', '**/app/*'],
+              message: 'lib/ does not import components or routes: move the shared code into lib/.',
+            },
+          ],
+        },
+      ],
+    },
+  },
   {
     files: ['tests/**'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },

@@ -1,4 +1,5 @@
 import type { NextConfig } from 'next';
+import { securityHeaders } from './lib/security-headers';
 
 const nextConfig: NextConfig = {
   // PGlite and highs ship WASM files, argon2 a native binary: load them from node_modules at run time.
@@ -14,6 +15,11 @@ const nextConfig: NextConfig = {
     ],
   },
   poweredByHeader: false,
+  // forbidden() answers a page the role may not open with HTTP 403.
+  experimental: { authInterrupts: true },
+  async headers() {
+    return [{ source: '/:path*', headers: securityHeaders(process.env.NODE_ENV !== 'production') }];
+  },
 };
 
 export default nextConfig;

@@ -59,12 +59,17 @@ export default defineConfig({
       env: PAYMENTS,
     },
     {
-      command: `rm -rf ${dataDir} ${dataDir}.lock && npx next build && npx next start -p ${PORT} -H 127.0.0.1`,
+      // The build must not open the data folder: a lock it left behind would refuse the server.
+      command:
+        `rm -rf ${dataDir} ${dataDir}.lock && npx next build && ` +
+        `(test ! -e ${dataDir}.lock || (echo 'next build opened the data folder' >&2 && exit 1)) && ` +
+        `npx next start -p ${PORT} -H 127.0.0.1`,
       url: `${baseURL}/api/health`,
-      timeout: 300_000,
+      timeout: 600_000,
       reuseExistingServer: false,
       env: {
         KERFWISE_DATA_DIR: dataDir,
+        KERFWISE_DEMO: '1',
         NEXTAUTH_SECRET: 'e2e-only-secret-not-for-production-use',
         NEXTAUTH_URL: baseURL,
         NEXT_TELEMETRY_DISABLED: '1',

@@ -8,16 +8,23 @@ const serverSuites = [
   'tests/frames-api/**/*.test.ts',
   'tests/jobs/**/*.test.ts',
   'tests/plans/**/*.test.ts',
+  'tests/quotes/quotes-api.test.ts',
   'tests/saw/**/*.test.ts',
   'tests/stock/**/*.test.ts',
   'tests/server/**/*.test.ts',
 ];
 const serverUrl = process.env.KERFWISE_TEST_DATABASE_URL;
+const snapshotSetup = 'tests/support/global-setup.ts';
 
 const projects: TestProjectInlineConfiguration[] = [
   {
     extends: true,
-    test: { name: 'pglite', include: ['tests/**/*.test.ts'], exclude: ['tests/e2e/**', 'tests/server/**'] },
+    test: {
+      name: 'pglite',
+      include: ['tests/**/*.test.ts'],
+      exclude: ['tests/e2e/**', 'tests/server/**', 'node_modules/**'],
+      globalSetup: [snapshotSetup],
+    },
   },
 ];
 if (serverUrl) {
@@ -27,11 +34,11 @@ if (serverUrl) {
       name: 'postgres',
       include: serverSuites,
       env: { KERFWISE_TEST_SERVER: '1' },
-      globalSetup: ['tests/support/server-global-setup.ts'],
+      globalSetup: [snapshotSetup, 'tests/support/server-global-setup.ts'],
     },
   });
 } else {
-  console.log('Server-mode suites skipped: KERFWISE_TEST_DATABASE_URL is not set (see .ci/run).');
+  console.log('PostgreSQL suites skipped: KERFWISE_TEST_DATABASE_URL is not set (.ci/run sets it).');
 }
 
 export default defineConfig({
@@ -48,7 +55,8 @@ export default defineConfig({
   test: {
     environment: 'node',
     testTimeout: 30_000,
-    hookTimeout: 60_000,
+    // The first file to need the demo yard seeds it for the whole run; on a busy machine that is slow.
+    hookTimeout: 300_000,
     pool: 'forks',
     setupFiles: ['tests/support/setup.ts'],
     projects,

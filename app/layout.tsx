@@ -11,6 +11,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { themeColor: '#1d5545' };
 
+// Every page reads the yard's own data per request; none is rendered at build time, so
+// `next build` never opens (or locks) the data folder.
+export const dynamic = 'force-dynamic';
+
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (
     <html lang="en-GB" className={`${sansFont.variable} ${monoFont.variable}`}>

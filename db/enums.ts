@@ -4,6 +4,11 @@ export type Role = (typeof ROLES)[number];
 
 export const JOB_STATUSES = ['draft', 'planned', 'released', 'cutting', 'done', 'cancelled'] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
+/** Jobs the yard still has to do something about; done and cancelled ones are closed. */
+export const OPEN_JOB_STATUSES = ['draft', 'planned', 'released', 'cutting'] as const satisfies JobStatus[];
+/** Which jobs the job list shows when no single status is chosen. */
+export const JOB_LIST_SHOWS = ['open', 'closed', 'all'] as const;
+export type JobListShow = (typeof JOB_LIST_SHOWS)[number];
 
 export const OFFCUT_STATUSES = ['available', 'reserved', 'used', 'scrapped'] as const;
 export type OffcutStatus = (typeof OFFCUT_STATUSES)[number];
@@ -33,6 +38,7 @@ export const MOVEMENT_KINDS = [
   'offcut_scrapped',
   'offcut_moved',
   'defect', // a board found bad at the saw
+  'board_undone', // a board confirmation taken back: reverses its cut, offcut use and new offcut
 ] as const;
 export type MovementKind = (typeof MOVEMENT_KINDS)[number];
 

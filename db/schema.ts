@@ -39,9 +39,21 @@ export const users = pgTable('users', {
   role: text('role', { enum: ROLES }).notNull(),
   passwordHash: text('password_hash').notNull(),
   disabled: boolean('disabled').notNull().default(false),
+  /** A yard hand the owner lets work the saw screen too (small yards share one saw). */
+  canUseSaw: boolean('can_use_saw').notNull().default(false),
+  /** Bumped on sign-out, password change and role change: older session tokens stop working. */
+  sessionVersion: integer('session_version').notNull().default(0),
   createdAt: createdAt(),
 });
 export type User = typeof users.$inferSelect;
+
+// Failed sign-ins per e-mail address and per client address, kept in the database so a
+// restart does not reset the throttle.
+export const signInFailures = pgTable('sign_in_failures', {
+  key: text('key').primaryKey(),
+  failures: integer('failures').notNull(),
+  lastFailureAt: timestamp('last_failure_at', { withTimezone: true }).notNull(),
+});
 export type NewUser = typeof users.$inferInsert;
 
 // One row (id = 1): the yard's cutting and display settings.

@@ -1,23 +1,25 @@
 // Opens a PostgreSQL server through node-postgres with a pool. Several app instances and workers may
-// start together, so migrations (and the demo seed, when asked for) run under an advisory lock.
+// start together, so migrations (and the yard's preparation, when asked for) run under an advisory lock.
 import { drizzle } from 'drizzle-orm/node-postgres';
 import { migrate } from 'drizzle-orm/node-postgres/migrator';
 import { Pool } from 'pg';
 import { migrationsFolder } from './client';
 import * as schema from './schema';
-import { seedDemoYard } from './seed';
 import type { Db } from './types';
 
 /** Any fixed number that no other program on the same database uses as an advisory lock. */
 const MIGRATION_LOCK_KEY = 5_183_201;
 
-export async function migrateServer(pool: Pool, options: { seed?: boolean } = {}): Promise<void> {
+/** Runs after the migrations, still under the lock: the demo seed or the first owner. */
+type Prepare = (db: Db) => Promise<void>;
+
+export async function migrateServer(pool: Pool, prepare?: Prepare): Promise<void> {
   const client = await pool.connect();
   try {
     await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
     const db = drizzle({ client, schema });
     await migrate(db, { migrationsFolder });
-    if (options.seed) await seedDemoYard(db);
+    if (prepare) await prepare(db);
   } finally {
     await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY]).catch(() => undefined);
     client.release();
@@ -31,11 +33,14 @@ export function connectServer(url: string, poolSize: number): { pool: Pool; db: 
   return { pool, db: drizzle({ client: pool, schema }) };
 }
 
-/** Connects, migrates (once across instances) and seeds the demo yard when asked. */
-export async function openServerDatabase(url: string, options: { seed?: boolean; poolSize?: number } = {}) {
+/** Connects, migrates (once across instances) and prepares the yard when asked. */
+export async function openServerDatabase(
+  url: string,
+  options: { prepare?: Prepare; poolSize?: number } = {},
+) {
   const { pool, db } = connectServer(url, options.poolSize ?? 10);
   try {
-    await migrateServer(pool, options);
+    await migrateServer(pool, options.prepare);
   } catch (error) {
     await pool.end();
     throw error;

@@ -6,8 +6,6 @@ const envSchema = z.object({
   KERFWISE_DATA_DIR: z.string().min(1).default('.data'),
   // Set: a PostgreSQL server (several app instances and workers may share it). Unset: embedded PGlite.
   DATABASE_URL: z.string().min(1).optional(),
-  // 1: seed the invented demo yard once into an empty database.
-  KERFWISE_DEMO: z.string().optional(),
   // Server mode: how long a solver run may stay active before it counts as crashed and is retried,
   // and how often the queue looks for such runs.
   KERFWISE_PLAN_RUN_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(120),
@@ -20,6 +18,15 @@ const envSchema = z.object({
   KERFWISE_MAIL_FROM: z.string().default('Kerfwise <cutting@yard.test>'),
   // Development and tests: the local mail catcher's HTTP address, so the outbox can show caught mail.
   KERFWISE_MAIL_CATCHER_URL: z.string().url().optional(),
+  // Seed the demo yard (demo users with a known password) into an empty database at start.
+  KERFWISE_DEMO: z
+    .enum(['0', '1', 'true', 'false', ''])
+    .optional()
+    .transform((v) => v === '1' || v === 'true'),
+  // Create the first owner at start when the database has no accounts yet.
+  KERFWISE_OWNER_EMAIL: z.string().optional(),
+  KERFWISE_OWNER_PASSWORD: z.string().optional(),
+  KERFWISE_OWNER_NAME: z.string().optional(),
   // The payment service. Leave KERFWISE_PAYMENTS_API_URL unset to use the real service's own address;
   // development and tests point it at the local fake (scripts/payment-fake.ts).
   KERFWISE_PAYMENTS_API_URL: z.string().url().optional(),
@@ -44,8 +51,4 @@ export function dataDirPath(): string {
 /** The PostgreSQL server's URL, or null for the embedded database. */
 export function databaseUrl(): string | null {
   return getEnv().DATABASE_URL ?? null;
-}
-
-export function demoSeedRequested(): boolean {
-  return getEnv().KERFWISE_DEMO === '1';
 }

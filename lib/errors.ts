@@ -1,6 +1,14 @@
 // One error type for the whole app; route handlers turn it into an HTTP answer in one place.
 export type ErrorCode =
-  'unauthenticated' | 'forbidden' | 'not_found' | 'conflict' | 'gone' | 'invalid' | 'unavailable';
+  | 'unauthenticated'
+  | 'forbidden'
+  | 'not_found'
+  | 'conflict'
+  | 'gone'
+  | 'too_large'
+  | 'unsupported'
+  | 'invalid'
+  | 'unavailable';
 
 const STATUS: Record<ErrorCode, number> = {
   unauthenticated: 401,
@@ -8,6 +16,8 @@ const STATUS: Record<ErrorCode, number> = {
   not_found: 404,
   conflict: 409,
   gone: 410,
+  too_large: 413,
+  unsupported: 415,
   invalid: 422,
   unavailable: 503,
 };

@@ -1,4 +1,4 @@
-// npm run bench [-- --set hard28,falkenauer_u120] [--limit 20] [--yard 20] [--write]
+// npm run bench [-- --set hard28,falkenauer_u120,yard,yard-exact] [--limit 20] [--yard 20] [--exact 80] [--write]
 // Runs the public benchmark sets (read from ../shared/benchmarks) and seeded yard jobs, side by side
 // with first-fit decreasing. Prints tables; writes docs/benchmarks.md on a full run or with --write.
 import { writeFileSync } from 'node:fs';
@@ -8,6 +8,8 @@ import { loadInstance, readOptima, toSolveInput } from './bench/benchmark-files'
 import { runInstance } from './bench/run-instance';
 import { generateYardJob } from './bench/yard-jobs';
 import { renderReport, type SetRow, type YardRow } from './bench/report';
+import { runYardExact } from './bench/yard-exact';
+import { prepareSolver } from '@/solver';
 import { checkPlan } from '../tests/solver/plan-checker';
 
 const SET_LIMITS: Record<string, { timeLimitMs: number; target: string }> = {
@@ -23,7 +25,7 @@ function arg(name: string): string | undefined {
   return i >= 0 ? process.argv[i + 1] : undefined;
 }
 
-const chosen = arg('set')?.split(',') ?? [...Object.keys(SET_LIMITS), 'yard'];
+const chosen = arg('set')?.split(',') ?? [...Object.keys(SET_LIMITS), 'yard', 'yard-exact'];
 const limit = Number(arg('limit') ?? Infinity);
 const yardCount = Number(arg('yard') ?? 20);
 const full = !arg('set') && !arg('limit');
@@ -36,9 +38,12 @@ const median = (xs: number[]) => {
   return s.length ? (s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2) : 0;
 };
 
+// The product loads the integer step in its worker; the bench measures the same engine.
+await prepareSolver();
 const setRows: SetRow[] = [];
-const all = readOptima();
-for (const set of chosen.filter((s) => s in SET_LIMITS)) {
+const published = chosen.filter((s) => s in SET_LIMITS);
+const all = published.length > 0 ? readOptima() : [];
+for (const set of published) {
   const list = all.filter((i) => i.set === set).slice(0, limit);
   const times: number[] = [];
   let atOpt = 0;
@@ -114,10 +119,15 @@ if (chosen.includes('yard')) {
   }
 }
 
+const exactSection = chosen.includes('yard-exact')
+  ? await runYardExact(Number(arg('exact') ?? 80), median)
+  : '';
+sample();
+
 const peakMb = Math.max(peakRss, process.resourceUsage().maxRSS * 1024) / 1048576;
 console.log(`peak memory ${peakMb.toFixed(0)} MB`);
 if (write) {
   const out = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../docs/benchmarks.md');
-  writeFileSync(out, renderReport({ setRows, yardRows, peakMb, median }));
+  writeFileSync(out, `${renderReport({ setRows, yardRows, peakMb, median })}\n${exactSection}`);
   console.log(`wrote ${out}`);
 }

@@ -1,19 +1,24 @@
 // `npm run db:reset`: wipes the data folder and seeds the demo yard again.
-// Refuses while a server holds the folder: two processes on one folder lose data.
-import { rmSync } from 'node:fs';
+// Takes the folder's lock first, so it is refused while a server holds the folder.
+import { readdirSync, rmSync } from 'node:fs';
+import path from 'node:path';
 import { openDatabase } from '../db/client';
-import { dataDirHolder } from '../db/data-dir-lock';
+import { acquireDataDirLock, realDataDir } from '../db/data-dir-lock';
+import { seedDemoYard } from '../db/seed';
 import { dataDirPath } from '../lib/env';
 
 const dir = dataDirPath();
-const holder = dataDirHolder(dir);
-if (holder !== null) {
-  console.error(
-    `Kerfwise: ${dir} is open in process ${holder}. Stop the server first, then run db:reset again.`,
-  );
+try {
+  acquireDataDirLock(dir);
+} catch (error) {
+  console.error(`Kerfwise: ${(error as Error).message} Then run db:reset again.`);
   process.exit(1);
 }
-rmSync(dir, { recursive: true, force: true });
-const { client } = await openDatabase(dir);
+// Empty the folder rather than remove it: a symlinked folder stays a symlink.
+const real = realDataDir(dir);
+for (const entry of readdirSync(real)) rmSync(path.join(real, entry), { recursive: true, force: true });
+const { db, client, release } = await openDatabase(dir);
+await seedDemoYard(db);
 await client.close();
+release();
 console.log(`Kerfwise: ${dir} wiped, migrated and seeded with the demo yard.`);

@@ -1,6 +1,5 @@
 // `npm run dev`: makes sure a sign-in secret exists, starts the local mail catcher and payment fake, then serves
-// Kerfwise on http://localhost:3000. The database is migrated and the demo yard seeded by the server
-// itself on first request.
+// Kerfwise on http://localhost:3000. The server migrates the database and seeds the demo yard at start.
 import { spawn } from 'node:child_process';
 import { getEnv } from '../lib/env';
 import { catcherHttpPort } from '../lib/mail/mail-catcher';
@@ -10,7 +9,9 @@ ensureLocalSecret();
 
 const smtpPort = getEnv().KERFWISE_SMTP_PORT;
 const catcherUrl = getEnv().KERFWISE_MAIL_CATCHER_URL ?? `http://127.0.0.1:${catcherHttpPort(smtpPort)}`;
+// The development server seeds the demo yard (with its demo sign-ins) into an empty database.
 const env = {
+  KERFWISE_DEMO: '1',
   ...process.env,
   KERFWISE_MAIL_CATCHER_URL: catcherUrl,
   KERFWISE_PAYMENTS_API_URL: getEnv().KERFWISE_PAYMENTS_API_URL ?? 'http://127.0.0.1:12111',

@@ -81,10 +81,27 @@ export function sequentialFill(model: Model, demand: number[], binsLeft: number[
 
 /** First-fit decreasing on the cheapest board per millimetre: the simple baseline. */
 export function firstFitDecreasing(model: Model, demand: number[], binsLeft: number[]): Packing {
-  const left = [...binsLeft];
   const order = model.bins
     .map((_, j) => j)
     .sort((a, b) => ratio(model, a) - ratio(model, b) || model.bins[b].capacity - model.bins[a].capacity);
+  return firstFitInOrder(model, demand, binsLeft, order);
+}
+
+/** Longest-first as a yard does it by hand: shortest fitting offcut first, else the longest stock length. */
+export function longestFirst(model: Model, demand: number[], binsLeft: number[]): Packing {
+  const order = model.bins
+    .map((_, j) => j)
+    .sort((a, b) => {
+      const ba = model.bins[a];
+      const bb = model.bins[b];
+      if (ba.source !== bb.source) return ba.source === 'offcut' ? -1 : 1;
+      return ba.source === 'offcut' ? ba.length - bb.length : bb.length - ba.length;
+    });
+  return firstFitInOrder(model, demand, binsLeft, order);
+}
+
+function firstFitInOrder(model: Model, demand: number[], binsLeft: number[], order: number[]): Packing {
+  const left = [...binsLeft];
   const open: { bin: number; items: number[]; load: number }[] = [];
   const packing: Packing = { boards: [], unplaced: new Array<number>(demand.length).fill(0) };
   demand.forEach((count, i) => {

@@ -2,7 +2,7 @@
 
 import type { Pattern } from './column-generation';
 import { exactStep } from './exact-step';
-import { firstFitDecreasing, sequentialFill } from './greedy-fill';
+import { firstFitDecreasing, longestFirst, sequentialFill } from './greedy-fill';
 import { lengthBound, lpBound, maxBound } from './lower-bounds';
 import { buildModel, type Model } from './model';
 import { compareScores, scorePacking, type Packing } from './packing';
@@ -28,6 +28,9 @@ export function solve(input: SolveInput): SolvePlan {
   };
   const ffd = firstFitDecreasing(model, demand, limits);
   consider(ffd);
+  // The plan must never cost more than the plain longest-first a yard would cut by hand.
+  const byHand = longestFirst(model, demand, limits);
+  consider(byHand);
 
   const firstPlans = [best];
   let bound = lengthBound(model, placedDemand(model, best), limits);
@@ -58,7 +61,7 @@ export function solve(input: SolveInput): SolvePlan {
     (b, j) => b.source === 'offcut' && !best.boards.some((pb) => pb.bin === j),
   );
   if (allPlaced && (!meetsBound(model, best, bound) || unusedOffcuts) && !budget.expired()) {
-    consider(exactStep(model, demand, limits, [...firstPlans, ffd, best], lpPool, budget));
+    consider(exactStep(model, demand, limits, [...firstPlans, ffd, byHand, best], lpPool, budget));
   }
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
   return buildPlan(model, best, bound, {

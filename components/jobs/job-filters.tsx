@@ -11,7 +11,7 @@ export function JobFilters({ value, onChange }: { value: Filters; onChange: (nex
   return (
     <form
       role="search"
-      className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4"
+      className="mb-4 grid gap-3 sm:grid-cols-3 lg:grid-cols-5"
       onSubmit={(e) => e.preventDefault()}
     >
       <label className="text-sm font-semibold">
@@ -23,6 +23,20 @@ export function JobFilters({ value, onChange }: { value: Filters; onChange: (nex
           onChange={set('q')}
           placeholder="J-1001 or a name"
         />
+      </label>
+      <label className="text-sm font-semibold">
+        Show
+        <select
+          className={inputClass}
+          value={value.show ?? ''}
+          onChange={set('show')}
+          disabled={Boolean(value.status)}
+          data-testid="job-show"
+        >
+          <option value="">Open jobs</option>
+          <option value="closed">Done and cancelled</option>
+          <option value="all">All jobs, open first</option>
+        </select>
       </label>
       <label className="text-sm font-semibold">
         Status

@@ -7,6 +7,7 @@ import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { jobQuery, updateJobRequest } from '@/lib/queries/jobs';
+import { CancelJob } from './cancel-job';
 import { CutListImport } from './cut-list-import';
 import { ItemsTable } from './items-table';
 import { JobDetailsForm } from './job-details-form';
@@ -46,11 +47,6 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
           <Button variant="secondary" onClick={() => setEditing((e) => !e)} aria-expanded={editing}>
             {editing ? 'Close details' : 'Edit details'}
           </Button>
-          {(j.status === 'draft' || j.status === 'planned') && (
-            <Button variant="danger" onClick={() => setStatus('cancelled')}>
-              Cancel job
-            </Button>
-          )}
           {j.status === 'cancelled' && (
             <Button variant="secondary" onClick={() => setStatus('draft')}>
               Reopen job
@@ -76,6 +72,11 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
               setEditing(false);
             }}
           />
+          {listEditable && (
+            <div className="mt-6 border-t-2 border-shaving pt-4">
+              <CancelJob reference={j.reference} onCancel={() => setStatus('cancelled')} />
+            </div>
+          )}
         </Card>
       )}
       {j.notes && !editing && <p className="text-bark-soft">{j.notes}</p>}

@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import type { CurrentUser } from '@/lib/auth/current-user';
+import { userCan } from '@/lib/auth/permissions';
 import { Logo } from '@/components/ui/logo';
 import type { NavItem } from './nav-items';
 import { NavLink } from './nav-link';
@@ -16,7 +17,7 @@ export function AppShell({
   nav: NavItem[];
   children: React.ReactNode;
 }) {
-  const items = nav.filter((item) => item.roles.includes(user.role));
+  const items = nav.filter((item) => userCan(user, item.action));
   return (
     <div className="min-h-screen">
       <header className="no-print on-dark bg-spruce text-white">
@@ -35,6 +36,9 @@ export function AppShell({
             <span data-testid="signed-in-as">
               {user.name} · <span className="font-semibold">{roleNames[user.role]}</span>
             </span>
+            <Link href="/account" className="text-white underline">
+              My password
+            </Link>
             <SignOutButton />
           </div>
         </div>

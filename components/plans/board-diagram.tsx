@@ -2,7 +2,7 @@
 
 import { useId } from 'react';
 import { BoardPatterns, INK, PIECE_FILLS } from './board-patterns';
-import { layOutBoard, type BoardInput } from './board-layout';
+import { layOutBoard, type BoardInput } from '@/lib/plans/board-layout';
 
 const WIDTH = 1000;
 const HEIGHT = 64;

@@ -1,5 +1,7 @@
 'use client';
 
+import { formatCustomerDate } from '@/lib/format/customer-date';
+import { angleLine } from '@/lib/plans/angle-line';
 import { useFormatLength } from '@/components/units/display-unit';
 import type { PlanViewData } from '@/lib/queries/plans';
 import { DiagramLegend } from './diagram-legend';
@@ -27,7 +29,7 @@ export function CutSheet({
         <h1 className="text-3xl font-bold">Cut sheet · {job.reference}</h1>
         <p className="text-lg">
           {job.customerName}
-          {job.dueDate ? ` · due ${job.dueDate}` : ''}
+          {job.dueDate ? ` · due ${formatCustomerDate(job.dueDate)}` : ''}
         </p>
         <p className="text-bark-soft">
           {yardName} · plan {plan.id} · kerf {plan.settings.kerfMm} mm · end trim {plan.settings.trimMm} mm
@@ -35,11 +37,20 @@ export function CutSheet({
       </header>
       {plan.sections.map((section) => {
         const boards = plan.boards.filter((b) => b.sectionId === section.sectionId);
-        const pieces = new Map<string, { label: string; lengthMm: number; count: number }>();
+        const pieces = new Map<
+          string,
+          { label: string; lengthMm: number; count: number; angle: string | null; marks?: string }
+        >();
         for (const b of boards)
           for (const p of b.pieces) {
             const key = `${p.lengthMm}|${p.label}`;
-            const e = pieces.get(key) ?? { label: p.label, lengthMm: p.lengthMm, count: 0 };
+            const e = pieces.get(key) ?? {
+              label: p.label,
+              lengthMm: p.lengthMm,
+              count: 0,
+              angle: angleLine(p, fmt),
+              marks: p.marks,
+            };
             e.count += 1;
             pieces.set(key, e);
           }
@@ -52,7 +63,15 @@ export function CutSheet({
                   .sort((a, b) => b.lengthMm - a.lengthMm)
                   .map((p) => (
                     <tr key={`${p.lengthMm}|${p.label}`} className="border-b border-shaving">
-                      <td className="py-1">{p.label || 'piece'}</td>
+                      <td className="py-1">
+                        {p.label || 'piece'}
+                        {p.marks ? <span className="text-sm text-bark-soft"> · {p.marks}</span> : null}
+                        {p.angle && (
+                          <span className="block text-sm font-semibold" data-testid="sheet-angle">
+                            {p.angle}
+                          </span>
+                        )}
+                      </td>
                       <td className="py-1 text-right tabular-nums">{fmt(p.lengthMm)}</td>
                       <td className="py-1 text-right tabular-nums">× {p.count}</td>
                     </tr>

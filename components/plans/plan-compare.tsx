@@ -7,7 +7,7 @@ import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
 import { planQuery, type PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
-import { countBoardsByLength } from './group-boards';
+import { countBoardsByLength } from '@/lib/plans/group-boards';
 import { formatPence } from './money';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 

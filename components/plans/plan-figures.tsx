@@ -3,7 +3,8 @@
 import { useFormatLength } from '@/components/units/display-unit';
 import type { PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
-import { countBoardsByLength } from './group-boards';
+import { countBoardsByLength } from '@/lib/plans/group-boards';
+import { BaselineComparison } from './baseline-comparison';
 import { formatPence, formatPounds } from './money';
 
 /** Totals over the plan (boards per length, offcuts, waste, yield, kept) and the price. */
@@ -33,11 +34,8 @@ export function PlanFigures({ plan }: { plan: PlanViewData }) {
           </dd>
           <dt>Saw cuts</dt>
           <dd className="text-right tabular-nums">{t.cuts}</dd>
-          <dt>Longest-first would use</dt>
-          <dd className="text-right tabular-nums">
-            {t.baseline.boards} boards · {formatPence(t.baseline.stockCostPence)}
-          </dd>
         </dl>
+        <BaselineComparison totals={t} />
         <p className="mt-3 rounded-lg bg-spruce-light p-3 text-spruce-dark" data-testid="plan-gap">
           {describeGap(t)}
         </p>

@@ -3,7 +3,7 @@
 import { useDisplayUnit, useFormatLength } from '@/components/units/display-unit';
 import type { PlanBoardView } from '@/lib/queries/plans';
 import { BoardDiagram } from './board-diagram';
-import { groupIdenticalBoards } from './group-boards';
+import { groupIdenticalBoards } from '@/lib/plans/group-boards';
 
 /** One section's boards in saw order, identical boards drawn once with their count. */
 export function PlanSectionBoards({

@@ -58,8 +58,8 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
         <ComposedChart data={data}>
           <CartesianGrid stroke={CHART.grain} strokeDasharray="3 3" />
           <XAxis dataKey="jobReference" fontSize={11} />
-          <YAxis yAxisId="job" fontSize={12} unit=" £" />
-          <YAxis yAxisId="run" orientation="right" fontSize={12} unit=" £" />
+          <YAxis yAxisId="job" fontSize={12} tickFormatter={poundsTick} />
+          <YAxis yAxisId="run" orientation="right" fontSize={12} tickFormatter={poundsTick} />
           <Tooltip />
           <Legend formatter={legendText} />
           <Bar yAxisId="job" dataKey="plainPounds" name="Longest-first (£)" fill={CHART.grain} />
@@ -77,3 +77,6 @@ export function SavingsCharts({ report }: { report: SavingsReport }) {
     </ChartPanel>
   );
 }
+
+/** Money on an axis the way it is written: £100, not 100 £. */
+const poundsTick = (value: number) => `£${value}`;

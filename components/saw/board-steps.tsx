@@ -1,5 +1,6 @@
 // What to fetch, the trim, each piece by its length (marks as the tape's aid), and what is left.
 import { sawLength } from './format-saw-length';
+import { angleLine } from '@/lib/plans/angle-line';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
 
@@ -25,16 +26,6 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
       )}
     </p>
   );
-}
-
-/** "11.3° top cut, long point 2130": an angled piece is listed at its long point. */
-export function angleLine(
-  p: { angleTenths?: number; cutNote?: string; lengthMm: number },
-  len: (mm: number) => string,
-) {
-  if (!p.angleTenths) return null;
-  const what = p.cutNote ? `${p.cutNote}` : 'angled cut';
-  return `${(p.angleTenths / 10).toFixed(1)}° ${what}, long point ${len(p.lengthMm)}`;
 }
 
 export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit; nextCut: number }) {

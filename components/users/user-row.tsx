@@ -65,6 +65,18 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
         </form>
       </td>
       <td className="p-3">
+        {user.role === 'yard_hand' && (
+          <label className="mb-2 flex items-center gap-2 text-sm">
+            <input
+              type="checkbox"
+              className="size-5"
+              checked={user.canUseSaw}
+              disabled={update.isPending}
+              onChange={(e) => update.mutate({ canUseSaw: e.target.checked })}
+            />
+            May use the saw screen
+          </label>
+        )}
         <Button
           variant={user.disabled ? 'primary' : 'danger'}
           disabled={update.isPending}

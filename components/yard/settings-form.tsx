@@ -18,6 +18,14 @@ export type SettingsValues = {
   minSafePieceMm: number;
   perCutChargePence: number;
   clearOffcutsAfterDays: number;
+  vatRateBasisPoints: number;
+  quoteValidityDays: number;
+  minimumChargePence: number;
+  offcutRatePercent: number;
+  depositPercent: number;
+  yardAddress: string;
+  vatNumber: string;
+  remaindersGoTo: 'yard' | 'customer';
 };
 
 const NUMBERS: [keyof SettingsValues, string, string][] = [
@@ -38,6 +46,19 @@ const NUMBERS: [keyof SettingsValues, string, string][] = [
     'Cut lists and forms refuse shorter pieces: the saw cannot hold them safely. Check it against your own risk assessment.',
   ],
   ['perCutChargePence', 'Charge per cut (pence)', 'Added to quotes for each saw cut.'],
+  [
+    'vatRateBasisPoints',
+    'VAT rate (hundredths of a percent)',
+    'UK standard rate 20 % is 2000 (GOV.UK, "VAT rates"). Check the current rate with HMRC.',
+  ],
+  ['quoteValidityDays', 'Quotes valid for (days)', 'Printed on each quote; its link lasts at least as long.'],
+  ['minimumChargePence', 'Minimum order charge (pence)', 'Smaller orders are topped up to this, before VAT.'],
+  [
+    'offcutRatePercent',
+    'Offcut rate (% of price per metre)',
+    'Rack offcuts in a plan are charged at this share of the section’s cheapest price per metre.',
+  ],
+  ['depositPercent', 'Deposit (% of the total)', 'What a customer pays to have the job cut.'],
   [
     'clearOffcutsAfterDays',
     'Suggest clearing offcuts after (days)',
@@ -63,6 +84,9 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
           yardName: values.yardName,
           displayUnit: values.displayUnit,
           region: values.region,
+          yardAddress: values.yardAddress,
+          vatNumber: values.vatNumber,
+          remaindersGoTo: values.remaindersGoTo,
         }),
       }),
   });
@@ -116,6 +140,32 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
             <select {...p} value={values.region} onChange={(e) => set('region', e.target.value)}>
               <option value="uk">United Kingdom</option>
               <option value="na">North America</option>
+            </select>
+          )}
+        </Field>
+        <Field label="Yard address (on quotes)" error={issue('yardAddress')}>
+          {(p) => (
+            <input {...p} value={values.yardAddress} onChange={(e) => set('yardAddress', e.target.value)} />
+          )}
+        </Field>
+        <Field label="VAT number (on quotes)" error={issue('vatNumber')}>
+          {(p) => (
+            <input {...p} value={values.vatNumber} onChange={(e) => set('vatNumber', e.target.value)} />
+          )}
+        </Field>
+        <Field
+          label="Remainders of boards a customer pays for"
+          hint="Given to the customer (listed on their cut sheet as theirs to take), or kept by the yard for the rack."
+          error={issue('remaindersGoTo')}
+        >
+          {(p) => (
+            <select
+              {...p}
+              value={values.remaindersGoTo}
+              onChange={(e) => set('remaindersGoTo', e.target.value)}
+            >
+              <option value="yard">Stay with the yard</option>
+              <option value="customer">Go to the customer</option>
             </select>
           )}
         </Field>

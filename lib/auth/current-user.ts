@@ -6,10 +6,10 @@ import { eq } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { users, type Role } from '@/db/schema';
 import { AppError } from '@/lib/errors';
-import { can, type Action } from './permissions';
+import { userCan, type Action } from './permissions';
 import { readSessionUserId } from './read-session';
 
-export type CurrentUser = { id: number; email: string; name: string; role: Role };
+export type CurrentUser = { id: number; email: string; name: string; role: Role; canUseSaw: boolean };
 
 export async function getCurrentUser(): Promise<CurrentUser | null> {
   const id = await readSessionUserId();
@@ -17,14 +17,14 @@ export async function getCurrentUser(): Promise<CurrentUser | null> {
   const db = await getDb();
   const [user] = await db.select().from(users).where(eq(users.id, id));
   if (!user || user.disabled) return null;
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
+  return { id: user.id, email: user.email, name: user.name, role: user.role, canUseSaw: user.canUseSaw };
 }
 
 /** 401 without a session, 403 when the role may not perform the action. */
 export async function requireUser(action: Action): Promise<CurrentUser> {
   const user = await getCurrentUser();
   if (!user) throw new AppError('unauthenticated', 'Sign in to continue.');
-  if (!can(user.role, action)) {
+  if (!userCan(user, action)) {
     throw new AppError('forbidden', 'Your role does not allow this.');
   }
   return user;

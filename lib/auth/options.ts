@@ -3,6 +3,8 @@ import CredentialsProvider from 'next-auth/providers/credentials';
 import { z } from 'zod';
 import { getEnv } from '@/lib/env';
 import { verifyCredentials } from '@/lib/users/verify-credentials';
+import { bumpSessionVersion, isSessionCurrent } from './session-version';
+import { getDb } from '@/db';
 
 const signInBodySchema = z.object({
   email: z.string().trim().email('Enter your e-mail address.'),
@@ -17,22 +19,28 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: 'Kerfwise',
       credentials: { email: { type: 'email' }, password: { type: 'password' } },
-      async authorize(credentials) {
+      async authorize(credentials, req) {
         const parsed = signInBodySchema.safeParse(credentials ?? {});
         if (!parsed.success) throw new Error(parsed.error.issues[0].message);
-        return verifyCredentials(parsed.data);
+        return verifyCredentials({ ...parsed.data, clientAddress: clientAddressOf(req?.headers) });
       },
     }),
   ],
   callbacks: {
-    jwt({ token, user }) {
+    async jwt({ token, user }) {
       if (user) {
         token.uid = user.id;
         token.role = user.role;
+        token.sv = user.sessionVersion;
+        return token;
       }
+      // Every later read: a token from before a sign-out, password or role change is emptied,
+      // which leaves the visitor signed out.
+      if (token.uid && !(await isSessionCurrent(Number(token.uid), token.sv))) return {} as typeof token;
       return token;
     },
     session({ session, token }) {
+      if (!token.uid) return { expires: session.expires } as typeof session;
       if (session.user) {
         session.user.id = token.uid;
         session.user.role = token.role;
@@ -40,4 +48,17 @@ export const authOptions: NextAuthOptions = {
       return session;
     },
   },
+  events: {
+    async signOut({ token }) {
+      const id = Number(token?.uid);
+      if (Number.isSafeInteger(id) && id > 0) await bumpSessionVersion(await getDb(), id);
+    },
+  },
 };
+
+/** The client's address as the server saw it (the first hop of X-Forwarded-For behind a proxy). */
+function clientAddressOf(headers: Record<string, unknown> | undefined): string {
+  const forwarded = headers?.['x-forwarded-for'];
+  const first = typeof forwarded === 'string' ? forwarded.split(',')[0].trim() : '';
+  return first || 'unknown';
+}

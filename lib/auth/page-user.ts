@@ -1,10 +1,13 @@
-// For server components: the signed-in user, or a redirect to the sign-in page.
+// For server components: the signed-in user, or a redirect to the sign-in page; with an action,
+// a 403 page (Next's forbidden()) when the user may not perform it.
 import 'server-only';
-import { redirect } from 'next/navigation';
+import { forbidden, redirect } from 'next/navigation';
 import { getCurrentUser, type CurrentUser } from './current-user';
+import { userCan, type Action } from './permissions';
 
-export async function requirePageUser(): Promise<CurrentUser> {
+export async function requirePageUser(action?: Action): Promise<CurrentUser> {
   const user = await getCurrentUser();
   if (!user) redirect('/sign-in');
+  if (action && !userCan(user, action)) forbidden();
   return user;
 }

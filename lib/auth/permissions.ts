@@ -5,17 +5,23 @@ import type { Role } from '@/db/enums';
 export const PUBLIC = 'public' as const;
 
 export const ACTIONS = {
+  'account:edit': ['owner', 'yard_hand', 'saw_operator'],
   'users:manage': ['owner'],
   'settings:edit': ['owner'],
   'sections:read': ['owner', 'yard_hand', 'saw_operator'],
   'sections:edit': ['owner'],
   'stock:receive': ['owner', 'yard_hand'],
   'stock:adjust': ['owner'],
-  'jobs:read': ['owner', 'yard_hand', 'saw_operator'],
+  // Jobs and office plan views carry customer details and prices: not for the saw operator.
+  'jobs:read': ['owner', 'yard_hand'],
   'jobs:edit': ['owner', 'yard_hand'],
   'plans:create': ['owner', 'yard_hand'],
   'plans:release': ['owner', 'yard_hand'],
-  'plans:read': ['owner', 'yard_hand', 'saw_operator'],
+  'plans:read': ['owner', 'yard_hand'],
+  /** The saw screens: released plans only, without customer contact details or prices. */
+  'saw:read': ['owner', 'saw_operator'],
+  /** The saw queue's progress (references, customer names, boards cut), shown at the saw and in the office. */
+  'saw:progress': ['owner', 'yard_hand', 'saw_operator'],
   'mail:send': ['owner', 'yard_hand'],
   'mail:outbox': ['owner'],
   'saw:cut': ['owner', 'saw_operator'],
@@ -48,6 +54,15 @@ export function isPublicAction(action: Action): action is PublicAction {
 export function can(role: Role, action: Action): boolean {
   const allowed = ACTIONS[action];
   return allowed === PUBLIC || (allowed as readonly Role[]).includes(role);
+}
+
+/** Actions the owner can grant a yard hand with the "may use the saw" switch (small yards share the saw). */
+export const SAW_GRANT_ACTIONS: readonly Action[] = ['saw:read', 'saw:cut'];
+
+/** What one person may do: their role, plus the saw screens when the owner has granted them. */
+export function userCan(user: { role: Role; canUseSaw?: boolean }, action: Action): boolean {
+  if (can(user.role, action)) return true;
+  return user.role === 'yard_hand' && user.canUseSaw === true && SAW_GRANT_ACTIONS.includes(action);
 }
 
 /** Where each role lands after signing in. */

@@ -1,6 +1,7 @@
 // The PDF cut sheet: job, pieces by section, board diagrams and the price.
+import { formatCustomerDate } from '@/lib/format/customer-date';
 import { Document, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
-import { groupIdenticalBoards } from '@/components/plans/group-boards';
+import { groupIdenticalBoards } from '@/lib/plans/group-boards';
 import type { PlanViewData } from '@/lib/queries/plans';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import { PdfBoard } from './pdf-board';
@@ -54,7 +55,7 @@ export function CutSheetDocument({
         <Text style={s.h1}>Cut sheet · {job.reference}</Text>
         <Text>
           {job.customerName}
-          {job.dueDate ? ` · due ${job.dueDate}` : ''}
+          {job.dueDate ? ` · due ${formatCustomerDate(job.dueDate)}` : ''}
         </Text>
         <Text style={s.muted}>
           {yardName} · plan {plan.id} · kerf {plan.settings.kerfMm} mm · end trim {plan.settings.trimMm} mm

@@ -1,6 +1,6 @@
 // One board for the PDF cut sheet, drawn with react-pdf's SVG: scrap hatched, kept remainder dotted.
 import { Circle, G, Line, Rect, Svg, Text } from '@react-pdf/renderer';
-import { layOutBoard, type BoardInput } from '@/components/plans/board-layout';
+import { layOutBoard, type BoardInput } from '@/lib/plans/board-layout';
 
 const W = 500;
 const H = 30;

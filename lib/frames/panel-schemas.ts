@@ -19,7 +19,8 @@ const sectionIdSchema = (what = 'Section') =>
   z
     .number({ error: `${what} must be chosen` })
     .int({ error: `${what} id must be a whole number` })
-    .positive({ error: `${what} id must be positive` });
+    .positive({ error: `${what} id must be positive` })
+    .max(2_147_483_647, { error: `${what} id is too large` });
 
 const panelBase = {
   id: z.string().trim().min(1, { error: 'Panel id must not be empty' }).max(40).optional(),

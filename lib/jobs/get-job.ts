@@ -21,6 +21,7 @@ export async function getJobById({ jobId }: { jobId: number }) {
         quantity: jobItems.quantity,
         label: jobItems.label,
         note: jobItems.note,
+        marks: jobItems.marks,
         position: jobItems.position,
       })
       .from(jobItems)

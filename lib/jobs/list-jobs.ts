@@ -1,13 +1,18 @@
 import 'server-only';
-import { and, asc, eq, gte, ilike, lte, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, gte, ilike, inArray, lte, notInArray, or, sql, type SQL } from 'drizzle-orm';
 import { getDb } from '@/db';
+import { OPEN_JOB_STATUSES } from '@/db/enums';
 import { jobItems, jobs } from '@/db/schema';
 import { paymentState } from '@/lib/quotes/payment-state';
 import type { ListJobsQuery } from '@/lib/validations/jobs';
 
+const OPEN = [...OPEN_JOB_STATUSES];
 const like = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
-/** Jobs matching the office's filters, soonest due first (undated last), with piece counts. */
+/**
+ * Jobs matching the office's filters, with piece counts: open jobs first (only open ones unless
+ * `show` or `status` asks for more), then soonest due (undated last).
+ */
 export async function listJobs(query: ListJobsQuery = {}) {
   const db = await getDb();
   const where: SQL[] = [];
@@ -16,6 +21,8 @@ export async function listJobs(query: ListJobsQuery = {}) {
   }
   if (query.customer) where.push(ilike(jobs.customerName, like(query.customer)));
   if (query.status) where.push(eq(jobs.status, query.status));
+  else if ((query.show ?? 'open') === 'open') where.push(inArray(jobs.status, OPEN));
+  else if (query.show === 'closed') where.push(notInArray(jobs.status, OPEN));
   if (query.dueFrom) where.push(gte(jobs.dueDate, query.dueFrom));
   if (query.dueTo) where.push(lte(jobs.dueDate, query.dueTo));
   const rows = await db
@@ -44,7 +51,11 @@ export async function listJobs(query: ListJobsQuery = {}) {
     .leftJoin(jobItems, eq(jobItems.jobId, jobs.id))
     .where(where.length ? and(...where) : undefined)
     .groupBy(jobs.id)
-    .orderBy(sql`${jobs.dueDate} asc nulls last`, asc(jobs.reference));
+    .orderBy(
+      notInArray(jobs.status, OPEN), // false (open) sorts before true (closed)
+      sql`${jobs.dueDate} asc nulls last`,
+      asc(jobs.reference),
+    );
   return rows.map(({ quote, paidPence, ...row }) => ({
     ...row,
     quoteNumber: quote?.number ?? null,

@@ -5,13 +5,18 @@ import type { Tx } from '@/db';
 import { jobs } from '@/db/schema';
 
 /**
- * The next free J-number: one more than the highest "J-<digits>" reference, from J-1001. Holds the
- * counter's lock until the caller's transaction ends, so insert the job in that same transaction.
+ * The next free J-number: one more than the highest "J-<digits>" reference, from J-1001. Counted as
+ * `numeric` with BigInt, so a typed-in J-99999999999 neither overflows nor pins the sequence on a
+ * number that is already taken (the result is above every existing J-number). Holds the counter's
+ * lock until the caller's transaction ends, so insert the job in that same transaction.
  */
 export async function nextJobReference(tx: Tx): Promise<string> {
   await lockCounter(tx, 'job-reference');
   const [row] = await tx
-    .select({ top: sql<number | null>`max(substring(${jobs.reference} from '^J-([0-9]{1,9})$')::int)` })
+    .select({
+      top: sql<string | null>`max(substring(${jobs.reference} from '^J-([0-9]{1,30})$')::numeric)::text`,
+    })
     .from(jobs);
-  return `J-${Math.max(1000, row?.top ?? 0) + 1}`;
+  const top = row?.top ? BigInt(row.top) : 0n;
+  return `J-${(top > 1000n ? top : 1000n) + 1n}`;
 }

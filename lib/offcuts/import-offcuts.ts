@@ -1,9 +1,13 @@
 import 'server-only';
-import { inArray, sql } from 'drizzle-orm';
+import { sql } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { offcuts, sections, stockLengths, stockMovements } from '@/db/schema';
 import { parseOffcutRack, type ImportError } from '@/lib/cut-lists';
 import { AppError } from '@/lib/errors';
+
+/** The most offcuts one rack list may hold (a yard's whole rack is far smaller). */
+export const MAX_RACK_IMPORT_ROWS = 20_000;
+const INSERT_BATCH_ROWS = 1_000;
 
 /**
  * Enters an existing rack from a CSV, all or nothing: any bad row (or a tag already on the rack)
@@ -28,17 +32,20 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
       errors: parsed.errors,
     });
 
+  if (parsed.items.length > MAX_RACK_IMPORT_ROWS) {
+    throw new AppError('invalid', `The file has more than ${MAX_RACK_IMPORT_ROWS} offcuts; split it.`, {
+      errors: [{ line: parsed.items[MAX_RACK_IMPORT_ROWS].line, column: null, message: 'Too many rows.' }],
+    });
+  }
+
   return db.transaction(async (tx) => {
+    // Every tag on the rack, compared in memory: one query whatever the file size.
+    const onRack = new Set(
+      (await tx.select({ tag: sql<string>`upper(${offcuts.tag})` }).from(offcuts)).map((r) => r.tag),
+    );
     const given = parsed.items.filter((i) => i.tag).map((i) => i.tag!.toUpperCase());
-    const taken =
-      given.length === 0
-        ? []
-        : await tx
-            .select({ tag: offcuts.tag })
-            .from(offcuts)
-            .where(inArray(sql`upper(${offcuts.tag})`, given));
-    if (taken.length > 0) {
-      const takenSet = new Set(taken.map((t) => t.tag.toUpperCase()));
+    const takenSet = new Set(given.filter((tag) => onRack.has(tag)));
+    if (takenSet.size > 0) {
       const errors: ImportError[] = parsed.items
         .filter((i) => i.tag && takenSet.has(i.tag.toUpperCase()))
         .map((i) => ({ line: i.line, column: 'tag', message: `Tag "${i.tag}" is already on the rack.` }));
@@ -49,7 +56,8 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
     const [{ maxId }] = await tx
       .select({ maxId: sql<number>`coalesce(max(${offcuts.id}), 0)::int` })
       .from(offcuts);
-    const used = new Set(given);
+    // Issued tags skip every tag on the rack or in the file, so they can never clash.
+    const used = new Set([...onRack, ...given]);
     let next = maxId;
     const issueTag = () => {
       let tag: string;
@@ -59,31 +67,39 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
       return tag;
     };
     const now = new Date();
-    const inserted = await tx
-      .insert(offcuts)
-      .values(
-        parsed.items.map((i) => ({
-          tag: i.tag ?? issueTag(),
-          sectionId: Number(i.sectionId),
-          lengthMm: i.length,
-          location: i.location,
-          origin: 'Imported from a rack list',
-          createdAt: now,
-          updatedAt: now,
+    const rows = parsed.items.map((i) => ({
+      tag: i.tag ?? issueTag(),
+      sectionId: Number(i.sectionId),
+      lengthMm: i.length,
+      location: i.location,
+      origin: 'Imported from a rack list',
+      createdAt: now,
+      updatedAt: now,
+    }));
+    const inserted: (typeof offcuts.$inferSelect)[] = [];
+    // Batches keep each statement well under Postgres' bind-parameter limit.
+    for (const batch of chunks(rows, INSERT_BATCH_ROWS)) {
+      inserted.push(...(await tx.insert(offcuts).values(batch).returning()));
+    }
+    for (const batch of chunks(inserted, INSERT_BATCH_ROWS)) {
+      await tx.insert(stockMovements).values(
+        batch.map((o) => ({
+          at: now,
+          kind: 'offcut_imported' as const,
+          userId,
+          sectionId: o.sectionId,
+          offcutId: o.id,
+          lengthMm: o.lengthMm,
+          reason: 'Rack list import',
         })),
-      )
-      .returning();
-    await tx.insert(stockMovements).values(
-      inserted.map((o) => ({
-        at: now,
-        kind: 'offcut_imported' as const,
-        userId,
-        sectionId: o.sectionId,
-        offcutId: o.id,
-        lengthMm: o.lengthMm,
-        reason: 'Rack list import',
-      })),
-    );
+      );
+    }
     return { imported: inserted.length, tags: inserted.map((o) => o.tag) };
   });
+}
+
+function chunks<T>(items: T[], size: number): T[][] {
+  const out: T[][] = [];
+  for (let i = 0; i < items.length; i += size) out.push(items.slice(i, i + size));
+  return out;
 }

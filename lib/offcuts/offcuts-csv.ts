@@ -12,16 +12,21 @@ export type ExportedOffcut = {
 };
 
 export function offcutsToCsv(rows: ExportedOffcut[]): string {
-  return Papa.unparse({
-    fields: ['section', 'length', 'location', 'tag', 'status', 'origin', 'made'],
-    data: rows.map((o) => [
-      o.sectionName,
-      o.lengthMm,
-      o.location,
-      o.tag,
-      o.status,
-      o.origin,
-      o.createdAt.toISOString().slice(0, 10),
-    ]),
-  });
+  // escapeFormulae: a cell starting with = + - @ (or a tab/CR) gets a leading ' so a spreadsheet
+  // shows it as text instead of running it (OWASP "CSV Injection").
+  return Papa.unparse(
+    {
+      fields: ['section', 'length', 'location', 'tag', 'status', 'origin', 'made'],
+      data: rows.map((o) => [
+        o.sectionName,
+        o.lengthMm,
+        o.location,
+        o.tag,
+        o.status,
+        o.origin,
+        o.createdAt.toISOString().slice(0, 10),
+      ]),
+    },
+    { escapeFormulae: true },
+  );
 }

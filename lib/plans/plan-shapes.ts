@@ -38,6 +38,8 @@ export type PlanTotals = {
   cuts: number;
   lowerBoundBoards: number;
   gapBoards: number;
+  /** No plan for the same pieces can buy its new stock for less (whole pence); absent on older plans. */
+  lowerBoundPence?: number;
   unplacedPieces: number;
   /** What a plain longest-first plan (first-fit decreasing, new stock only) would have used. */
   baseline: { boards: number; stockCostPence: number; scrapMm: number };
@@ -49,6 +51,8 @@ export type BoardPiece = {
   jobItemId: number;
   label: string;
   lengthMm: number;
+  /** Length actually cut: a nominal piece may be up to its tolerance short (plans before this: lengthMm). */
+  cutMm?: number;
   markMm: number;
   /** An angled cut, from a frame schedule: degrees off square in tenths; the length is the long point. */
   angleTenths?: number;

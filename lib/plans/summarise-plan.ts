@@ -1,4 +1,5 @@
 // Whole-plan figures and the saw's board list, from the solver's per-section results. Pure.
+import type { PlanBoard } from '@/solver';
 import { longestFirstBaseline } from './longest-first-baseline';
 import {
   parsePieceId,
@@ -20,6 +21,8 @@ export type BoardRow = {
   pieces: BoardPiece[];
   remainderMm: number;
   keepRemainder: boolean;
+  /** One piece sold at the whole stock length: no trim, no cut. */
+  fullLength: boolean;
 };
 
 export function summarisePlan(sections: PlanSection[]): PlanTotals {
@@ -38,6 +41,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     cuts: 0,
     lowerBoundBoards: 0,
     gapBoards: 0,
+    lowerBoundPence: 0,
     unplacedPieces: 0,
     baseline: { boards: 0, stockCostPence: 0, scrapMm: 0 },
   };
@@ -57,6 +61,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     );
     t.cuts += output.boards.reduce((sum, b) => sum + b.pieces.length, 0);
     t.lowerBoundBoards += output.lowerBound.boards;
+    t.lowerBoundPence! += boundPence(output.lowerBound);
     t.gapBoards += output.gap.boards;
     t.unplacedPieces += output.unplaced.length;
     const base = longestFirstBaseline(input);
@@ -67,6 +72,15 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
   const consumed = t.materialMm - t.keptMm;
   t.yieldPercent = consumed > 0 ? Math.round((1000 * t.pieceMm) / consumed) / 10 : 0;
   return t;
+}
+
+/**
+ * The solver's cost bound in whole pence. Plans cost whole pence, so a bound of £12.341 means no
+ * plan under £12.35: round up. Reads a pence figure when the solver gives one.
+ */
+function boundPence(bound: { cost: number } & { costPence?: unknown }): number {
+  if (typeof bound.costPence === 'number') return Math.ceil(bound.costPence);
+  return Math.ceil(Math.round(bound.cost * 1e6) / 1e4);
 }
 
 /** The boards in saw order: section by section, offcuts first, then the longest boards. */
@@ -89,9 +103,10 @@ export function planBoardRows(
         offcutId: source.kind === 'offcut' ? source.id : null,
         lengthMm: board.length,
         trimMm: board.trim,
-        pieces: boardPieces(board.pieces, board.pieceLengths, board.marks, input.kerf, labels),
+        pieces: boardPieces(board, input.kerf, labels),
         remainderMm: board.remainder,
         keepRemainder: board.remainderKept,
+        fullLength: board.fullLength ?? false,
       });
     }
   }
@@ -100,16 +115,16 @@ export function planBoardRows(
 
 /** The last piece may end exactly at the board's end, where no cut (and so no mark) is needed. */
 function boardPieces(
-  pieceIds: string[],
-  lengths: number[],
-  marks: number[],
+  board: Pick<PlanBoard, 'pieces' | 'pieceLengths' | 'cutLengths' | 'marks'>,
   kerf: number,
   labels: Map<number, string | PieceDetails>,
 ): BoardPiece[] {
+  // Plans stored before nominal pieces carry no cut lengths: the ordered lengths were cut.
+  const cuts = board.cutLengths ?? board.pieceLengths;
   let start = 0;
-  return pieceIds.map((pieceId, i) => {
+  return board.pieces.map((pieceId, i) => {
     const jobItemId = parsePieceId(pieceId);
-    const markMm = marks[i] ?? start + lengths[i];
+    const markMm = board.marks[i] ?? start + cuts[i];
     start = markMm + kerf;
     const found = labels.get(jobItemId) ?? '';
     const details: PieceDetails = typeof found === 'string' ? { label: found } : found;
@@ -117,7 +132,8 @@ function boardPieces(
       pieceId,
       jobItemId,
       label: details.label,
-      lengthMm: lengths[i],
+      lengthMm: board.pieceLengths[i],
+      cutMm: cuts[i],
       markMm,
       ...(details.angleTenths ? { angleTenths: details.angleTenths, cutNote: details.note ?? '' } : {}),
       ...(details.marks ? { marks: details.marks } : {}),

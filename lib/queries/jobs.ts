@@ -1,10 +1,16 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { JobStatus, PlanStatus } from '@/db/enums';
+import type { JobListShow, JobStatus, PlanStatus } from '@/db/enums';
 import type { PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
 import type { PaymentState } from '@/lib/quotes/payment-state';
 import { fetchJson } from './fetch-json';
 
-export type JobFilters = { q?: string; status?: JobStatus | ''; dueFrom?: string; dueTo?: string };
+export type JobFilters = {
+  q?: string;
+  status?: JobStatus | '';
+  show?: JobListShow | '';
+  dueFrom?: string;
+  dueTo?: string;
+};
 
 export type JobListRow = {
   id: number;

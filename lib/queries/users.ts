@@ -2,7 +2,14 @@ import { queryOptions } from '@tanstack/react-query';
 import type { Role } from '@/db/enums';
 import { fetchJson } from './fetch-json';
 
-export type UserRow = { id: number; email: string; name: string; role: Role; disabled: boolean };
+export type UserRow = {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  disabled: boolean;
+  canUseSaw: boolean;
+};
 
 export const usersQuery = () =>
   queryOptions({
@@ -19,4 +26,11 @@ export function updateUserRequest(userId: number, changes: Partial<UserRow> & { 
 
 export function createUserRequest(body: { email: string; name: string; role: Role; password: string }) {
   return fetchJson<{ user: UserRow }>('/api/users', { method: 'POST', body: JSON.stringify(body) });
+}
+
+export function changeOwnPasswordRequest(body: { currentPassword: string; newPassword: string }) {
+  return fetchJson<{ changed: true }>('/api/account/password', {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });
 }

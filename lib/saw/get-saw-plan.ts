@@ -11,7 +11,9 @@ import { planProgress } from './settle-plan-status';
 export async function getSawPlan({ planId }: { planId: number }) {
   const db = await getDb();
   const [plan] = await db.select().from(plans).where(eq(plans.id, planId));
-  if (!plan) throw notFound('That plan');
+  // The saw sees plans the office has released (and finished ones, to show them complete);
+  // drafts and superseded plans stay in the office.
+  if (!plan || (plan.status !== 'released' && plan.status !== 'done')) throw notFound('That plan');
   const [job] = await db.select().from(jobs).where(eq(jobs.id, plan.jobId));
   const boards = await db
     .select()

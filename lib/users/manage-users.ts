@@ -2,9 +2,10 @@ import 'server-only';
 import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import { getDb, type DbOrTx } from '@/db';
 import { users } from '@/db/schema';
-import { hashPassword } from '@/lib/auth/password';
+import { hashPassword, verifyPassword } from '@/lib/auth/password';
+import { bumpSessionVersion } from '@/lib/auth/session-version';
 import { AppError, notFound } from '@/lib/errors';
-import type { CreateUserBody, UpdateUserBody } from '@/lib/validations/users';
+import type { ChangeOwnPasswordBody, CreateUserBody, UpdateUserBody } from '@/lib/validations/users';
 
 const publicColumns = {
   id: users.id,
@@ -12,6 +13,7 @@ const publicColumns = {
   name: users.name,
   role: users.role,
   disabled: users.disabled,
+  canUseSaw: users.canUseSaw,
   createdAt: users.createdAt,
 };
 export type UserSummary = Awaited<ReturnType<typeof listUsers>>[number];
@@ -60,9 +62,39 @@ export async function updateUser({ userId, changes }: { userId: number; changes:
     }
     const [updated] = await tx
       .update(users)
-      .set({ name: changes.name, role: changes.role, disabled: changes.disabled, passwordHash })
+      .set({
+        name: changes.name,
+        role: changes.role,
+        disabled: changes.disabled,
+        canUseSaw: changes.canUseSaw,
+        passwordHash,
+      })
       .where(eq(users.id, userId))
       .returning(publicColumns);
+    // A new role, password or access ends the person's open sessions: they sign in again.
+    const revokes =
+      passwordHash !== undefined ||
+      (changes.role !== undefined && changes.role !== user.role) ||
+      changes.disabled === true ||
+      (changes.canUseSaw === false && user.canUseSaw);
+    if (revokes) await bumpSessionVersion(tx, userId);
     return updated;
+  });
+}
+
+/** Anyone signed in changes their own password; their other sessions end (this one too). */
+export async function changeOwnPassword({ userId, body }: { userId: number; body: ChangeOwnPasswordBody }) {
+  const db = await getDb();
+  const [user] = await db.select().from(users).where(eq(users.id, userId));
+  if (!user) throw notFound('Your account');
+  if (!(await verifyPassword(user.passwordHash, body.currentPassword))) {
+    throw new AppError('invalid', 'Your current password is not right.', {
+      issues: [{ path: 'currentPassword', message: 'Your current password is not right.' }],
+    });
+  }
+  const passwordHash = await hashPassword(body.newPassword);
+  await db.transaction(async (tx) => {
+    await tx.update(users).set({ passwordHash }).where(eq(users.id, userId));
+    await bumpSessionVersion(tx, userId);
   });
 }

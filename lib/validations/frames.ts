@@ -38,6 +38,7 @@ export const sendScheduleToJobBodySchema = z
       .number({ error: 'Choose a job' })
       .int({ error: 'Choose a job' })
       .positive({ error: 'Choose a job' })
+      .max(2_147_483_647, { error: 'Choose a job' })
       .optional(),
     newJob: z
       .object({

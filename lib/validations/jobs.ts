@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { JOB_STATUSES } from '@/db/enums';
+import { JOB_LIST_SHOWS, JOB_STATUSES } from '@/db/enums';
 import { lengthInputSchema } from '@/lib/units/length-input-schema';
+import { dbIdSchema } from './db-id';
 
 const dueDate = z.string().refine(isCalendarDate, 'Use a real date like 2026-12-24.');
 
@@ -64,6 +65,8 @@ export const listJobsQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
   customer: z.string().trim().max(120).optional(),
   status: z.enum(JOB_STATUSES).optional(),
+  /** Open jobs unless asked otherwise; a chosen status overrides it. */
+  show: z.enum(JOB_LIST_SHOWS).optional(),
   dueFrom: dueDate.optional(),
   dueTo: dueDate.optional(),
 });
@@ -75,14 +78,19 @@ const quantity = z
   .min(1, 'Quantity must be at least 1.')
   .max(10_000, 'Quantity must be at most 10 000.');
 
-const jobItemFields = z.object({
-  sectionId: z.number().int().positive('Choose a section.'),
+const itemFields = {
+  sectionId: dbIdSchema('Choose a section.'),
   length: lengthInputSchema,
   // The length as typed, kept so a too-short bare number can be answered with "did you mean 2.4 m?".
   lengthText: z.string().max(40).optional(),
   quantity,
-  label: z.string().trim().max(100).default(''),
-  note: z.string().trim().max(500).default(''),
+  label: z.string().trim().max(100),
+  note: z.string().trim().max(500),
+};
+const jobItemFields = z.object({
+  ...itemFields,
+  label: itemFields.label.default(''),
+  note: itemFields.note.default(''),
 });
 
 /** Copies a typed length into `lengthText` before it is read as millimetres. */
@@ -96,9 +104,11 @@ export const jobItemBodySchema = z.preprocess(keepTypedLength, jobItemFields);
 export type JobItemBody = z.input<typeof jobItemFields>;
 export type JobItemFields = z.output<typeof jobItemFields>;
 
+/** A partial change: fields left out keep their values (no defaults here, or they would wipe them). */
 export const updateJobItemBodySchema = z.preprocess(
   keepTypedLength,
-  jobItemFields
+  z
+    .object(itemFields)
     .partial()
     .strict()
     .refine((v) => Object.keys(v).length > 0, 'Nothing to change.'),

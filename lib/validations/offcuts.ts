@@ -1,10 +1,8 @@
 import { z } from 'zod';
 import { OFFCUT_STATUSES } from '@/db/enums';
+import { dbIdSchema, optionalQueryInt } from './db-id';
 
-const optionalInt = z.preprocess(
-  (v) => (v === '' || v === null ? undefined : v),
-  z.coerce.number().int().min(0).optional(),
-);
+const optionalInt = optionalQueryInt;
 
 export const OFFCUT_SORTS = ['age', 'length', 'section', 'location', 'tag'] as const;
 
@@ -30,7 +28,7 @@ export const updateOffcutBodySchema = z.object({
 });
 
 export const scrapOffcutsBodySchema = z.object({
-  ids: z.array(z.number().int().positive()).min(1, 'Choose at least one offcut.').max(1000),
+  ids: z.array(dbIdSchema()).min(1, 'Choose at least one offcut.').max(1000),
   reason: z.string().trim().min(1, 'Say why these offcuts are scrapped.').max(200),
 });
 export type ScrapOffcutsBody = z.infer<typeof scrapOffcutsBodySchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dbIdSchema } from './db-id';
 
 const mm = (max: number) => z.number().int('Whole millimetres only.').min(0, 'Cannot be negative.').max(max);
 
@@ -9,10 +10,7 @@ export const createPlanBodySchema = z
     trimMm: mm(200),
     minOffcutMm: mm(6000),
     useOffcuts: z.boolean(),
-    stockLengthIds: z
-      .array(z.number().int().positive())
-      .min(1, 'Allow at least one stock length.')
-      .nullable(),
+    stockLengthIds: z.array(dbIdSchema()).min(1, 'Allow at least one stock length.').nullable(),
     timeLimitMs: z.number().int().min(200).max(20_000),
   })
   .partial()

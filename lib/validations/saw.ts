@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dbIdSchema } from './db-id';
 
 /** Reasons a board can be bad at the saw; words the operator sees on the buttons. */
 export const DEFECT_REASONS = ['split', 'shake', 'wane', 'rot', 'twist', 'short', 'other'] as const;
@@ -41,4 +42,4 @@ export const offcutIdsQuerySchema = z
   .string()
   .regex(/^\d+(,\d+)*$/, 'Give offcut ids as a comma-separated list, e.g. 1,2,3.')
   .transform((s) => [...new Set(s.split(',').map(Number))])
-  .pipe(z.array(z.number().int().positive()).max(200, 'At most 200 labels at a time.'));
+  .pipe(z.array(dbIdSchema()).max(200, 'At most 200 labels at a time.'));

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dbIdSchema } from './db-id';
 
 const wholeMm = (what: string, max = 12_000) =>
   z
@@ -15,7 +16,7 @@ const text = (max: number) => z.string().trim().max(max, `At most ${max} charact
 
 export const stockLengthInputSchema = z.object({
   /** Present for an existing stock length, absent for a new one. */
-  id: z.number().int().positive().optional(),
+  id: dbIdSchema().optional(),
   lengthMm: wholeMm('stock length'),
   pricePence: pence,
   /** Unlimited lengths have no on-hand count; a counted length's count changes only through movements. */
@@ -50,7 +51,7 @@ export const receiptBodySchema = z.object({
   lines: z
     .array(
       z.object({
-        stockLengthId: z.number().int().positive(),
+        stockLengthId: dbIdSchema(),
         quantity: z.number().int('Count whole boards.').min(1, 'Receive at least one board.').max(10_000),
       }),
     )
@@ -64,7 +65,7 @@ export const stocktakeBodySchema = z.object({
   counts: z
     .array(
       z.object({
-        stockLengthId: z.number().int().positive(),
+        stockLengthId: dbIdSchema(),
         counted: z.number().int('Count whole boards.').min(0, 'A count cannot be negative.').max(100_000),
       }),
     )

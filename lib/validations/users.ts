@@ -20,8 +20,21 @@ export const updateUserBodySchema = z
     name: z.string().trim().min(1, 'Enter a name.').max(80),
     role: z.enum(ROLES, { message: 'Choose a role.' }),
     disabled: z.boolean(),
+    /** A yard hand may also use the saw screens. */
+    canUseSaw: z.boolean(),
     password,
   })
   .partial()
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
 export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
+
+export const changeOwnPasswordBodySchema = z
+  .object({
+    currentPassword: z.string().min(1, 'Enter your current password.').max(PASSWORD_MAX_LENGTH),
+    newPassword: password,
+  })
+  .refine((v) => v.newPassword !== v.currentPassword, {
+    message: 'Choose a password different from the current one.',
+    path: ['newPassword'],
+  });
+export type ChangeOwnPasswordBody = z.infer<typeof changeOwnPasswordBodySchema>;

@@ -18,5 +18,14 @@ export const yardSettingsBodySchema = z.object({
   region: z.enum(REGIONS, { message: 'Choose the United Kingdom or North America.' }).optional(),
   perCutChargePence: z.number().int('Whole pence.').min(0, 'A charge cannot be negative.').max(10_000),
   clearOffcutsAfterDays: z.number().int('Whole days.').min(7, 'At least a week.').max(3650),
+  // Quotes and payment (optional, so older clients that do not send them keep working).
+  vatRateBasisPoints: z.number().int('Hundredths of a percent: 2000 is 20 %.').min(0).max(5000).optional(),
+  yardAddress: z.string().trim().max(300).optional(),
+  vatNumber: z.string().trim().max(30).optional(),
+  quoteValidityDays: z.number().int('Whole days.').min(1).max(365).optional(),
+  minimumChargePence: z.number().int('Whole pence.').min(0).max(1_000_000).optional(),
+  offcutRatePercent: z.number().int('A whole percent.').min(0).max(100).optional(),
+  remaindersGoTo: z.enum(['yard', 'customer']).optional(),
+  depositPercent: z.number().int('A whole percent.').min(0).max(100).optional(),
 });
 export type YardSettingsBody = z.infer<typeof yardSettingsBodySchema>;

@@ -1,13 +1,14 @@
-// Reads the public bin-packing benchmark sets from ../shared/benchmarks (never copied into the repo).
-import { readFileSync } from 'node:fs';
+// Reads the public bin-packing benchmark sets (BPPLIB) from ../shared/benchmarks beside the repository.
+// Their licence keeps them out of the repository, so only `npm run bench` uses them, never the tests.
+import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { SolveInput } from '@/solver/types';
 
-export const BENCHMARK_DIR = path.resolve(
-  path.dirname(fileURLToPath(import.meta.url)),
-  '../../../shared/benchmarks',
-);
+// ../shared/benchmarks beside the repository; BENCHMARK_DIR overrides it (e.g. from a git worktree).
+export const BENCHMARK_DIR =
+  process.env.BENCHMARK_DIR ??
+  path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../shared/benchmarks');
 
 export interface BenchmarkInstance {
   set: string;
@@ -21,6 +22,13 @@ export interface BenchmarkInstance {
 }
 
 export function readOptima(): BenchmarkInstance[] {
+  if (!existsSync(path.join(BENCHMARK_DIR, 'optima.csv'))) {
+    throw new Error(
+      `npm run bench expects the BPPLIB benchmark sets in ${BENCHMARK_DIR} ` +
+        '(optima.csv, lp_bounds.csv and one folder per set with csp/<instance>.txt). ' +
+        'They are not part of the repository; put them there to run the benchmark.',
+    );
+  }
   const lines = readFileSync(path.join(BENCHMARK_DIR, 'optima.csv'), 'utf8').trim().split(/\r?\n/).slice(1);
   const lp = new Map<string, number>();
   for (const l of readFileSync(path.join(BENCHMARK_DIR, 'lp_bounds.csv'), 'utf8')

@@ -2,11 +2,12 @@ import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { GET, POST } from '@/app/api/users/route';
 import { PATCH } from '@/app/api/users/[userId]/route';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
+import { minimalYard } from '../support/minimal-yard';
 import { closeTemplate } from '../support/test-db';
 
 let db: Awaited<ReturnType<typeof useApiTestDb>>;
 beforeEach(async () => {
-  db = await useApiTestDb();
+  db = await useApiTestDb({ fixture: minimalYard });
 });
 afterEach(() => db.close());
 afterAll(closeTemplate);

@@ -1,10 +1,42 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { spawn } from 'node:child_process';
+import { once } from 'node:events';
+import { existsSync, mkdirSync, mkdtempSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { openDatabase } from '@/db/client';
 import { acquireDataDirLock, dataDirHolder, lockFilePath } from '@/db/data-dir-lock';
+import { jobs } from '@/db/schema';
 
 const root = mkdtempSync(path.join(tmpdir(), 'kerfwise-lock-'));
+const DEAD_PID = '999999999';
+
+/** Starts `count` processes, lets them all load, then tells them at once to race for `dir`. */
+async function race(mode: 'lock' | 'write', dir: string, count: number): Promise<string[]> {
+  const children = Array.from({ length: count }, () =>
+    spawn('node_modules/.bin/tsx', ['tests/db/lock-child.ts', mode, dir], {
+      stdio: ['pipe', 'pipe', 'inherit'],
+    }),
+  );
+  const outputs = children.map((child) => {
+    let text = '';
+    child.stdout.on('data', (chunk: Buffer) => (text += chunk));
+    return { child, text: () => text.replace(/^ready\n/, '') };
+  });
+  await Promise.all(
+    children.map(
+      (child) =>
+        new Promise<void>((resolve) => {
+          child.stdout.on('data', (chunk: Buffer) => {
+            if (String(chunk).includes('ready')) resolve();
+          });
+        }),
+    ),
+  );
+  for (const child of children) child.stdin.write('go\n');
+  await Promise.all(children.map((child) => once(child, 'exit')));
+  return outputs.map((o) => o.text());
+}
 
 describe('data folder lock', () => {
   it('refuses a folder held by another live process', () => {
@@ -16,9 +48,68 @@ describe('data folder lock', () => {
 
   it('takes over a lock left by a dead process', () => {
     const dir = path.join(root, 'stale');
-    writeFileSync(lockFilePath(dir), '999999999');
+    writeFileSync(lockFilePath(dir), DEAD_PID);
     expect(dataDirHolder(dir)).toBeNull();
-    acquireDataDirLock(dir);
+    const release = acquireDataDirLock(dir);
     expect(dataDirHolder(dir)).toBe(process.pid);
+    release();
+    expect(dataDirHolder(dir)).toBeNull();
   });
+
+  it('takes over a lock whose process exited but was never reaped (a zombie)', async () => {
+    // The shell starts a short-lived child, then becomes `sleep`, which never reaps it: for a few
+    // seconds the child's pid answers kill(pid, 0) although the process is gone.
+    const parent = spawn('sh', ['-c', 'sleep 0 & echo $!; exec sleep 5'], {
+      stdio: ['ignore', 'pipe', 'ignore'],
+    });
+    const [chunk] = (await once(parent.stdout, 'data')) as [Buffer];
+    const zombiePid = Number(String(chunk).trim());
+    await new Promise((resolve) => setTimeout(resolve, 300)); // let `sleep 0` exit
+    try {
+      expect(() => process.kill(zombiePid, 0)).not.toThrow();
+      const dir = path.join(root, 'zombie');
+      writeFileSync(lockFilePath(dir), String(zombiePid));
+      expect(dataDirHolder(dir)).toBeNull();
+      acquireDataDirLock(dir)();
+    } finally {
+      parent.kill();
+    }
+  });
+
+  it('keys the lock on the real folder, so a symlinked path shares it', () => {
+    const dir = path.join(root, 'real');
+    mkdirSync(dir);
+    const link = path.join(root, 'link');
+    symlinkSync(dir, link);
+    expect(lockFilePath(link)).toBe(lockFilePath(dir));
+    writeFileSync(lockFilePath(dir), String(process.ppid));
+    expect(() => acquireDataDirLock(link)).toThrow(/already open/);
+  });
+
+  // Each round starts three processes at one instant; odd rounds race to reclaim a stale lock too.
+  it('lets exactly one of several processes started together take the folder, 6 rounds of 3', async () => {
+    const winners: number[] = [];
+    for (let round = 0; round < 6; round++) {
+      const dir = path.join(root, `race-${round}`);
+      if (round % 2) writeFileSync(lockFilePath(dir), DEAD_PID);
+      const outputs = await race('lock', dir, 3);
+      winners.push(outputs.filter((o) => o.startsWith('won')).length);
+      expect(outputs.filter((o) => o.startsWith('refused'))).toHaveLength(2);
+    }
+    expect(winners).toEqual(Array(6).fill(1));
+  }, 300_000);
+
+  it('loses nothing acknowledged when two processes open one database together', async () => {
+    const dir = path.join(root, 'db');
+    const outputs = await race('write', dir, 2);
+    const acked = outputs.flatMap((o) => [...o.matchAll(/^ack (\S+)$/gm)].map((m) => m[1]));
+    expect(outputs.filter((o) => o.startsWith('refused'))).toHaveLength(1);
+    expect(acked).toHaveLength(10);
+    const { db, client, release } = await openDatabase(dir);
+    const stored = (await db.select({ reference: jobs.reference }).from(jobs)).map((j) => j.reference);
+    await client.close();
+    release();
+    expect(stored.sort()).toEqual(acked.sort());
+    expect(existsSync(lockFilePath(dir))).toBe(false); // released on close
+  }, 300_000);
 });

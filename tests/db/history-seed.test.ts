@@ -1,14 +1,20 @@
 import { and, eq, sql } from 'drizzle-orm';
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
+import type { Db } from '@/db';
 import * as schema from '@/db/schema';
 import type { BoardPiece, PlanSection, PlanTotals } from '@/lib/plans/plan-shapes';
 import { closeTemplate, createTestDb } from '../support/test-db';
 
+let db: Db;
+let close: () => Promise<void>;
+beforeEach(async () => {
+  ({ db, close } = await createTestDb());
+});
+afterEach(() => close());
 afterAll(closeTemplate);
 
 describe('seeded yard history', () => {
   it('has months of done jobs whose stored totals agree with their boards', async () => {
-    const { db, close } = await createTestDb();
     const plans = await db.select().from(schema.plans).where(eq(schema.plans.status, 'done'));
     expect(plans.length).toBeGreaterThanOrEqual(20);
     const dates = plans.map((p) => p.createdAt.getTime());
@@ -29,11 +35,9 @@ describe('seeded yard history', () => {
       expect(totals.stockCostPence).toBeLessThanOrEqual(totals.baseline.stockCostPence);
       expect((plan.sections as PlanSection[]).every((s) => s.output.boards.length > 0)).toBe(true);
     }
-    await close();
   });
 
   it('every kept remainder of a cut board became a rack offcut with an offcut_made movement', async () => {
-    const { db, close } = await createTestDb();
     const cut = and(eq(schema.planBoards.keepRemainder, true), eq(schema.planBoards.status, 'done'));
     const [{ kept }] = await db
       .select({ kept: sql<number>`count(*)::int` })
@@ -49,6 +53,5 @@ describe('seeded yard history', () => {
       .where(cut);
     expect(made).toBe(kept);
     expect(linked).toBe(kept);
-    await close();
   });
 });

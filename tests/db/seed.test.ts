@@ -1,16 +1,22 @@
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { inArray, sql } from 'drizzle-orm';
 import type { PgTable } from 'drizzle-orm/pg-core';
+import type { Db } from '@/db';
 import * as schema from '@/db/schema';
 import { seedDemoYard } from '@/db/seed';
 import { verifyPassword } from '@/lib/auth/password';
 import { closeTemplate, createTestDb } from '../support/test-db';
 
+let db: Db;
+let close: () => Promise<void>;
+beforeEach(async () => {
+  ({ db, close } = await createTestDb());
+});
+afterEach(() => close());
 afterAll(closeTemplate);
 
 describe('schema and demo seed on in-memory PGlite', () => {
   it('seeds the three demo users with the demo password and their roles', async () => {
-    const { db, close } = await createTestDb();
     const users = await db.select().from(schema.users).orderBy(schema.users.id);
     expect(users.map((u) => [u.email, u.role])).toEqual([
       ['owner@yard.test', 'owner'],
@@ -19,11 +25,9 @@ describe('schema and demo seed on in-memory PGlite', () => {
     ]);
     expect(await verifyPassword(users[0].passwordHash, 'kerfwise')).toBe(true);
     expect(await verifyPassword(users[0].passwordHash, 'wrong')).toBe(false);
-    await close();
   });
 
   it('has at least 8 sections with stock lengths, about 40 offcuts and 4 jobs in different states', async () => {
-    const { db, close } = await createTestDb();
     const count = async (table: PgTable) =>
       (await db.select({ n: sql<number>`count(*)::int` }).from(table))[0].n;
     expect(await count(schema.sections)).toBeGreaterThanOrEqual(8);
@@ -37,11 +41,9 @@ describe('schema and demo seed on in-memory PGlite', () => {
     const lengths = await db.select().from(schema.stockLengths);
     // UK stock lengths step by 300 mm (common practice, see TRADE.md; no published source in the test).
     for (const l of lengths) expect(l.lengthMm % 300).toBe(0);
-    await close();
   });
 
   it('records every offcut entering the rack as a stock movement', async () => {
-    const { db, close } = await createTestDb();
     const offcuts = await db.select().from(schema.offcuts);
     const moves = await db
       .select()
@@ -49,23 +51,18 @@ describe('schema and demo seed on in-memory PGlite', () => {
       .where(inArray(schema.stockMovements.kind, ['offcut_imported', 'offcut_made']));
     expect(moves.length).toBe(offcuts.length);
     expect(new Set(moves.map((m) => m.offcutId))).toEqual(new Set(offcuts.map((o) => o.id)));
-    await close();
   });
 
   it('does not seed twice', async () => {
-    const { db, close } = await createTestDb();
     expect(await seedDemoYard(db)).toBe(false);
     const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(schema.users);
     expect(n).toBe(3);
-    await close();
   });
 
   it('enforces unique offcut tags', async () => {
-    const { db, close } = await createTestDb();
     const [first] = await db.select().from(schema.offcuts).limit(1);
     await expect(
       db.insert(schema.offcuts).values({ tag: first.tag, sectionId: first.sectionId, lengthMm: 500 }),
     ).rejects.toThrow();
-    await close();
   });
 });

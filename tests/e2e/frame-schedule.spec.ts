@@ -100,6 +100,7 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
   await page.getByRole('button', { name: 'Save schedule' }).click();
   await expect(page.getByTestId('save-state')).toHaveText('All changes saved');
 
+  const scheduleUrl = page.url();
   const send = page.getByTestId('send-to-job-form');
   await expect(send.getByLabel('Customer', { exact: true })).toHaveValue('Nell Ashdown');
   await send.getByRole('button', { name: 'Send cut list to job' }).click();
@@ -121,6 +122,24 @@ test('a yard hand describes a lean-to, previews it, sends it to a new job and pl
   await expect(
     page.getByTestId('schedule-list').getByRole('row').filter({ hasText: 'Quarry Lane' }),
   ).toContainText('J-');
+
+  // Sent to the same job again, the schedule asks: replace its pieces, or add a second set?
+  await page.goto(scheduleUrl);
+  const again = page.getByTestId('send-to-job-form');
+  await again.getByLabel('A draft or planned job').check();
+  await again.getByLabel('Job', { exact: true }).selectOption(String(jobId));
+  await again.getByRole('button', { name: 'Send cut list to job' }).click();
+  await expect(page.getByTestId('already-sent')).toContainText('already holds this schedule');
+  await page.getByTestId('already-sent').scrollIntoViewIfNeeded();
+  await page.screenshot({ path: 'test-results/screens/frames-send-again-desktop.png' });
+  await page.setViewportSize({ width: 768, height: 1024 });
+  await page.screenshot({ path: 'test-results/screens/frames-send-again-tablet.png', fullPage: true });
+  const before = (await (await page.request.get(`/api/jobs/${jobId}`)).json()).items.length;
+  await page.getByRole('button', { name: 'Replace them' }).click();
+  await expect(page).toHaveURL(new RegExp(`/jobs/${jobId}$`));
+  const after = (await (await page.request.get(`/api/jobs/${jobId}`)).json()).items;
+  expect(after.length).toBe(before);
+  expect(after.every((i: { marks: string }) => /^\d+\.\d+/.test(i.marks))).toBe(true);
 });
 
 test('a saw operator cannot open frame schedules or use their API', async ({ page }) => {

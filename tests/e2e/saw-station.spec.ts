@@ -37,6 +37,8 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     await page.getByTestId('safety-line').locator('summary').tap();
     await expect(page.getByTestId('safety-line')).toContainText('own risk assessment');
     await expect(page.getByTestId('safety-line')).toContainText('HSE WIS36');
+    await expect(page.getByTestId('cut-1').getByTestId('piece-length')).toBeVisible();
+    await page.screenshot({ path: 'test-results/screens/saw-cautions-tablet-landscape.png', fullPage: true });
     await page.getByTestId('safety-line').locator('summary').tap();
 
     // The next cut is highlighted, and each "cut made" moves the highlight on.
@@ -66,6 +68,8 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     await saw.cutEverything();
     await expect(saw.progress()).toContainText(`${total} of ${total}`);
     await office.reload();
+    // Done jobs leave the open list; the office finds them under Show.
+    await office.getByTestId('job-show').selectOption('closed');
     await expect(office.getByTestId('jobs-table').getByRole('row', { name: /J-1002/ })).toContainText('done');
     await office.context().close();
 
@@ -144,6 +148,7 @@ test.describe('the saw station in portrait (768×1024, touch)', () => {
 
     // The office sees the job done.
     await office.goto('/jobs');
+    await office.getByTestId('job-show').selectOption('closed');
     await expect(office.getByTestId('jobs-table').getByRole('row', { name: /J-1003/ })).toContainText('done');
     await office.context().close();
   });

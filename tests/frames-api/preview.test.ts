@@ -55,7 +55,9 @@ describe('POST /api/frames/preview', () => {
     });
     expect(res.status).toBe(200);
     const rafters = res.json.items.find((i: { label: string }) => i.label === 'roof rafter');
-    expect(rafters.length).toBe(2550);
+    // The blank for two parallel plumb cuts is the slope length plus depth × tan(pitch) (trigonometry):
+    // 2549.5 + 150 × 500 / 2500 = 2579.5 → 2580 mm at the long point.
+    expect(rafters.length).toBe(2580);
     // atan(500 / 2500) = 11.31° (plain trigonometry).
     expect(rafters.angle).toBeCloseTo(11.3, 1);
   });
@@ -66,7 +68,13 @@ describe('POST /api/frames/preview', () => {
     expect(res.status).toBe(200);
     const labels: string[] = res.json.items.map((i: { label: string }) => i.label);
     expect(labels).toEqual(
-      expect.arrayContaining(['door opening head', 'door opening trimmer', 'front wall stud', 'roof rafter']),
+      // UK names, the default region: lintel over the opening, full-height studs beside it.
+      expect.arrayContaining([
+        'door opening lintel',
+        'door opening full-height stud 1',
+        'front wall stud',
+        'roof rafter',
+      ]),
     );
     expect(labels.some((l) => l.startsWith('side wall stud'))).toBe(true);
     const sideStuds = res.json.items.filter((i: { label: string }) => i.label.startsWith('side wall stud'));

@@ -63,7 +63,7 @@ describe('GET /api/jobs', () => {
   it('filters by search text, status and due date', async () => {
     type Row = { reference: string; customerName: string; status: string; dueDate: string | null };
     const refs = (rows: Row[]) => rows.map((j) => j.reference);
-    const all = (await list()).json.jobs as Row[];
+    const all = (await list('?show=all')).json.jobs as Row[];
     expect(refs(all)).toEqual(expect.arrayContaining(['J-1001', 'J-1002', 'J-1003', 'J-1004']));
     const fenwick = (await list('?q=fenwick')).json.jobs as Row[];
     expect(refs(fenwick)).toContain('J-1002');
@@ -81,6 +81,20 @@ describe('GET /api/jobs', () => {
     expect((await list('?status=nonsense')).status).toBe(422);
     const j1001 = all.find((j) => j.reference === 'J-1001');
     expect(j1001).toMatchObject({ itemCount: 5, pieceCount: 14 + 4 + 4 + 12 + 30 });
+  });
+
+  it('shows open jobs by default; done and cancelled ones only when asked, and always after open ones', async () => {
+    type Row = { reference: string; status: string };
+    const closed = (s: string) => s === 'done' || s === 'cancelled';
+    const open = (await list()).json.jobs as Row[];
+    expect(open.length).toBeGreaterThan(0);
+    expect(open.some((j) => closed(j.status))).toBe(false);
+    const behindFilter = (await list('?show=closed')).json.jobs as Row[];
+    expect(behindFilter.map((j) => j.reference)).toContain('J-1004');
+    expect(behindFilter.every((j) => closed(j.status))).toBe(true);
+    const all = ((await list('?show=all')).json.jobs as Row[]).map((j) => closed(j.status));
+    expect(all).toEqual([...all].sort((a, b) => Number(a) - Number(b)));
+    expect(all.filter(Boolean).length).toBe(behindFilter.length);
   });
 });
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { describeGap } from '@/components/plans/gap-words';
-import { layOutBoard } from '@/components/plans/board-layout';
+import { layOutBoard } from '@/lib/plans/board-layout';
 
 describe('layOutBoard', () => {
   it('places trim, kerfs, pieces and the end so they add up to the board', () => {
@@ -46,12 +46,21 @@ describe('layOutBoard', () => {
 });
 
 describe('describeGap', () => {
-  it('says how many boards better is possible, or that none is', () => {
-    expect(describeGap({ boards: 10, lowerBoundBoards: 9, gapBoards: 1 })).toMatch(
-      /^At most 1 board better is possible/,
+  const figures = { lowerBoundBoards: 51, gapBoards: 10 };
+  it('says the gap in money against the new stock, not in boards', () => {
+    const words = describeGap({ ...figures, stockCostPence: 51_642, lowerBoundPence: 51_630 });
+    expect(words).toMatch(/^At most £0\.12 cheaper is possible/);
+    expect(words).toContain('less than £516.30 (this plan: £516.42)');
+    expect(words).not.toMatch(/boards? better/);
+  });
+  it('says "cheapest possible" when the plan meets its bound', () => {
+    expect(describeGap({ ...figures, stockCostPence: 9_600, lowerBoundPence: 9_600 })).toMatch(
+      /^Cheapest possible/,
     );
-    expect(describeGap({ boards: 10, lowerBoundBoards: 10, gapBoards: 0 })).toMatch(
-      /No plan can use fewer than 10 boards/,
+  });
+  it('falls back to boards for plans made before the bound was kept in pence', () => {
+    expect(describeGap({ ...figures, stockCostPence: 9_600 })).toBe(
+      'No plan for these pieces can use fewer than 51 boards.',
     );
   });
 });

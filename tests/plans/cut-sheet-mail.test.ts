@@ -34,12 +34,16 @@ const send = (planId: number, body: unknown = {}) =>
   call(emailPlan, { method: 'POST', params: { planId: String(planId) }, body });
 
 describe('cut sheet PDF', () => {
-  it('downloads as a PDF for every role that reads plans', async () => {
+  it('downloads as a PDF for the office roles, not for the saw operator (no prices at the saw)', async () => {
     const { plan } = await j1003Plan();
+    const download = async () =>
+      cutSheet(new (await import('next/server')).NextRequest('http://test.local/x'), {
+        params: Promise.resolve({ planId: String(plan.id) }),
+      });
     actAs(AS.saw);
-    const res = await cutSheet(new (await import('next/server')).NextRequest('http://test.local/x'), {
-      params: Promise.resolve({ planId: String(plan.id) }),
-    });
+    expect((await download()).status).toBe(403);
+    actAs(AS.hand);
+    const res = await download();
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
     const bytes = Buffer.from(await res.arrayBuffer());
@@ -59,7 +63,7 @@ describe('POST /api/plans/[planId]/email', () => {
     expect(mail.to).toEqual(['ade.t@example.com']);
     expect(mail.subject).toContain('J-1003');
     expect(mail.text).toContain('Ready Friday.');
-    expect(mail.text).toMatch(/Total: £\d+\.\d\d/);
+    expect(mail.text).toMatch(/Total to pay: £\d+\.\d\d \(includes VAT of £\d+\.\d\d\)/);
     expect(mail.attachments).toEqual([
       expect.objectContaining({
         contentType: 'application/pdf',

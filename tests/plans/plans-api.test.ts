@@ -93,6 +93,8 @@ describe('POST /api/jobs/[jobId]/plans', () => {
     expect(job.status).toBe('planned');
 
     actAs(AS.saw);
+    expect((await call(getPlan, { params: { planId: String(body.id) } })).status).toBe(403);
+    actAs(AS.owner);
     const read = await call(getPlan, { params: { planId: String(body.id) } });
     expect(read.status).toBe(200);
     expect(read.json.sections).toEqual(body.sections);

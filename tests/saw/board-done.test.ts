@@ -38,7 +38,8 @@ async function twoBoardJob() {
     sectionId: section.id,
     pieces: [
       [1500, 1, 'rail'],
-      [3000, 1, 'beam'],
+      // Not 3000: a piece that takes a whole stock length is sold full length, uncut, with no remainder.
+      [3200, 1, 'beam'],
     ],
   });
   const boards = await boardsOf(t.db, job.planId);
@@ -178,39 +179,83 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     expect(rows.reduce((n, m) => n + m.quantityDelta, 0)).toBe(0);
   });
 
-  it('undoes the last confirmation exactly', async () => {
-    const { offcut, offcutBoard, stockBoard, planId, jobId } = await twoBoardJob();
+  it('refuses to undo a finished plan with 409 and changes nothing', async () => {
+    const { offcutBoard, stockBoard, planId } = await twoBoardJob();
+    actAs(AS.saw);
     await confirm(planId, stockBoard.boardNo);
-    const snapshot = async () => ({
-      moves: (await movementsOf(t.db, planId)).map((m) => m.id),
-      offcuts: (await t.db.select().from(schema.offcuts).orderBy(schema.offcuts.id)).map((o) => [
-        o.id,
-        o.status,
-        o.reservedByPlanId,
-      ]),
-      stock: (await t.db.select().from(schema.stockLengths).orderBy(schema.stockLengths.id)).map((s) => [
-        s.id,
-        s.onHand,
-      ]),
-      boards: (await boardsOf(t.db, planId)).map((b) => [b.boardNo, b.status, b.newOffcutId]),
-      job: (await t.db.select().from(schema.jobs).where(eq(schema.jobs.id, jobId)))[0].status,
-    });
-    const before = await snapshot();
-    const res = await confirm(planId, offcutBoard.boardNo);
-    expect(res.json.jobStatus).toBe('done');
+    expect((await confirm(planId, offcutBoard.boardNo)).json.planStatus).toBe('done');
+    const moves = (await movementsOf(t.db, planId)).length;
+    const undone = await call(undo, { method: 'POST', params: { planId: String(planId) } });
+    expect(undone.status).toBe(409);
+    expect(undone.json.error).toMatch(/finished/);
+    expect((await movementsOf(t.db, planId)).length).toBe(moves);
+  });
 
+  it('takes back the latest board by adding reversing movements, never deleting any', async () => {
+    const { stockBoard, planId } = await twoBoardJob();
+    // on hand minus the sum of its movements, per stock length: an undo must leave it unchanged
+    const ledger = async () => {
+      const rows = await t.db.select().from(schema.stockLengths).orderBy(schema.stockLengths.id);
+      const moves = await t.db.select().from(schema.stockMovements);
+      return rows.map((r) =>
+        r.onHand === null
+          ? null
+          : r.onHand - moves.filter((m) => m.stockLengthId === r.id).reduce((n, m) => n + m.quantityDelta, 0),
+      );
+    };
+    const ledgerBefore = await ledger();
+    const [stockBefore] = await t.db
+      .select()
+      .from(schema.stockLengths)
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    actAs(AS.saw);
+    const cut = await confirm(planId, stockBoard.boardNo);
+    expect(cut.json.jobStatus).toBe('cutting');
+    const idsBefore = (await t.db.select().from(schema.stockMovements)).map((m) => m.id);
     actAs(AS.hand);
     expect((await call(undo, { method: 'POST', params: { planId: String(planId) } })).status).toBe(403);
     actAs(AS.saw);
     const undone = await call(undo, { method: 'POST', params: { planId: String(planId) } });
     expect(undone.status).toBe(200);
-    expect(undone.json).toMatchObject({
-      boardNo: offcutBoard.boardNo,
-      jobStatus: 'cutting',
-      planStatus: 'released',
+    expect(undone.json).toMatchObject({ boardNo: stockBoard.boardNo, jobStatus: 'released' });
+    const after = await t.db.select().from(schema.stockMovements);
+    expect(after.map((m) => m.id)).toEqual(expect.arrayContaining(idsBefore));
+    const reversing = after.filter((m) => !idsBefore.includes(m.id));
+    expect(reversing.map((m) => m.kind)).toEqual(['board_undone', 'board_undone']);
+    expect(await ledger()).toEqual(ledgerBefore);
+    const [stockAfter] = await t.db
+      .select()
+      .from(schema.stockLengths)
+      .where(eq(schema.stockLengths.id, stockBoard.stockLengthId!));
+    expect(stockAfter.onHand).toBe(stockBefore.onHand);
+    const [board] = (await boardsOf(t.db, planId)).filter((b) => b.boardNo === stockBoard.boardNo);
+    expect(board).toMatchObject({ status: 'pending', newOffcutId: null });
+    const [made] = await t.db
+      .select()
+      .from(schema.offcuts)
+      .where(eq(schema.offcuts.id, cut.json.newOffcut.id));
+    expect(made.status).toBe('scrapped');
+    // nothing more to take back: the plan is no longer being cut
+    expect((await call(undo, { method: 'POST', params: { planId: String(planId) } })).status).toBe(409);
+  });
+
+  it('refuses with 409 when the board’s new offcut is already in another plan', async () => {
+    const { stockBoard, planId, section } = await twoBoardJob();
+    actAs(AS.saw);
+    const cut = await confirm(planId, stockBoard.boardNo);
+    expect(cut.json.newOffcut).not.toBeNull();
+    actAs(AS.hand);
+    const other = await releasedJob(t.db, {
+      reference: 'J-T9',
+      sectionId: section.id,
+      pieces: [[300, 1, 'block']],
+      releaseIt: false,
     });
-    expect(await snapshot()).toEqual(before);
-    const [back] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.id, offcut.id));
-    expect(back).toMatchObject({ status: 'reserved', reservedByPlanId: planId });
+    const otherBoards = await boardsOf(t.db, other.planId);
+    expect(otherBoards.map((b) => b.offcutId)).toContain(cut.json.newOffcut.id);
+    actAs(AS.saw);
+    const undone = await call(undo, { method: 'POST', params: { planId: String(planId) } });
+    expect(undone.status).toBe(409);
+    expect(undone.json.error).toContain('J-T9');
   });
 });

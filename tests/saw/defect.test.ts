@@ -75,8 +75,8 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/defect', () => {
   it('records the bad board and re-plans its pieces with a plan that passes the independent checker', async () => {
     const planId = await releasedDemoPlanId(t.db);
     const before = await boardsOf(t.db, planId);
-    // A board cut from stock: its defect books the replacement length out of stock.
-    const bad = before.find((b) => b.source === 'stock')!;
+    // A board of new stock (the demo plan may start with an offcut): its defect re-cuts a stock length.
+    const bad = before.find((b) => b.stockLengthId !== null)!;
     actAs(AS.owner);
     const res = await report(planId, bad.boardNo, { reason: 'shake', note: 'along the grain' });
     expect(res.status).toBe(200);

@@ -24,8 +24,14 @@ describe('GET /api/saw/queue', () => {
     // Release J-1003 too (due later than J-1002 in the demo yard).
     const [j3] = await t.db.select().from(schema.jobs).where(eq(schema.jobs.reference, 'J-1003'));
     const [p3] = await t.db.select().from(schema.plans).where(eq(schema.plans.jobId, j3.id));
-    actAs(AS.hand);
-    expect((await call(release, { method: 'POST', params: { planId: String(p3.id) } })).status).toBe(200);
+    // Its quote is not paid, so the owner releases it with a recorded reason.
+    actAs(AS.owner);
+    const released = await call(release, {
+      method: 'POST',
+      params: { planId: String(p3.id) },
+      body: { override: 'Collecting and paying at the counter' },
+    });
+    expect(released.status).toBe(200);
 
     const planId = await releasedDemoPlanId(t.db);
     actAs(AS.saw);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { solve } from '@/solver';
 import type { SolveInput } from '@/solver/types';
+import { PAPER_ROLL_WIDTH, paperRolls } from './paper-rolls';
 import { checkPlan } from './plan-checker';
 
 const job = (stock: number, widths: [number, number][], kerf = 0): SolveInput => ({
@@ -13,26 +14,9 @@ const job = (stock: number, widths: [number, number][], kerf = 0): SolveInput =>
   pieces: widths.map(([length, quantity]) => ({ id: `w${length}`, length, quantity })),
 });
 
-// Published: Wikipedia, "Cutting stock problem", example section (paper rolls of width 5600).
-const paperRolls: [number, number][] = [
-  [1380, 22],
-  [1520, 25],
-  [1560, 12],
-  [1710, 14],
-  [1820, 18],
-  [1880, 18],
-  [1930, 20],
-  [2000, 10],
-  [2050, 12],
-  [2100, 14],
-  [2140, 16],
-  [2150, 18],
-  [2200, 20],
-];
-
 describe('published cutting-stock examples', () => {
   it('paper rolls (Wikipedia, "Cutting stock problem"): 73 rolls, waste 0.401 %, LP bound 72.917', () => {
-    const input = job(5600, paperRolls);
+    const input = job(PAPER_ROLL_WIDTH, paperRolls);
     const plan = solve(input);
     expect(checkPlan(input, plan)).toEqual([]);
     expect(plan.totals.boards).toBe(73);
@@ -46,7 +30,7 @@ describe('published cutting-stock examples', () => {
   it.each([3, 5, 10])(
     'paper rolls with kerf %i mm: 74 rolls (each width + kerf, stock + kerf; computed with an independent integer solver, not published)',
     (kerf) => {
-      const input = job(5600, paperRolls, kerf);
+      const input = job(PAPER_ROLL_WIDTH, paperRolls, kerf);
       const plan = solve(input);
       expect(checkPlan(input, plan)).toEqual([]);
       expect(plan.totals.boards).toBe(74);

@@ -1,7 +1,7 @@
 // Calls route handlers directly, as a given demo user, against an in-memory database.
 import { NextRequest } from 'next/server';
 import { setDbForTests } from '@/db';
-import { createTestDb } from './test-db';
+import { createTestDb, type Fixture } from './test-db';
 
 // The session mock lives in setup.ts (vi.mock must run before the handlers are imported).
 const session = (globalThis as unknown as { kerfwiseTestSession: { userId: number | null } })
@@ -14,8 +14,9 @@ export function actAs(userId: number | null): void {
   session.userId = userId;
 }
 
-export async function useApiTestDb() {
-  const testDb = await createTestDb();
+/** The file's test database (the demo yard unless a minimal fixture is given), as the server's database. */
+export async function useApiTestDb(options: { fixture?: Fixture } = {}) {
+  const testDb = await createTestDb(options);
   setDbForTests(testDb.db);
   return {
     ...testDb,

@@ -1,57 +1,105 @@
-// Test databases: an in-memory PGlite cloned from a migrated, seeded template, or (in the server
-// project, KERFWISE_TEST_SERVER=1) a fresh database on the test PostgreSQL server copied from its template.
-import { PGlite } from '@electric-sql/pglite';
-import { migrateEmbedded, wrapClient, type Db } from '@/db/client';
+// Databases for tests. Each test file opens one database from a run-wide starting point (the demo
+// yard, or an empty migrated database plus the suite's own minimal fixture) and every test gets it
+// back with the rows reset, which is much faster than opening or cloning a database per test.
+// Embedded: an in-memory PGlite from a snapshot. Server-mode project (KERFWISE_TEST_SERVER=1): a
+// database on the test PostgreSQL server, copied from a template database.
+import { setDbForTests } from '@/db';
+import { wrapClient, type Db } from '@/db/client';
 import { connectServer } from '@/db/server-client';
-import { seedDemoYard } from '@/db/seed';
-import { onServer, SEED_DATE, TEMPLATE_DB, urlForDatabase } from './server-template';
+import { openSnapshot } from './snapshots';
+import { serverTestUrl, onServer, TEMPLATE_DBS, TEST_DB_PREFIX, urlForDatabase } from './server-template';
+import { saveRows, type SavedRows, type SqlClient } from './table-reset';
 
-/** Raw SQL for checks that are easier to state in SQL than in Drizzle. */
-export type SqlClient = { query<T>(text: string, params?: unknown[]): Promise<{ rows: T[] }> };
-/** url: the server database's address (server mode only), for processes the test starts. */
-export type TestDb = { db: Db; client: SqlClient; close: () => Promise<void>; url?: string };
+export type { SqlClient };
 
-let template: PGlite | undefined;
+/** Builds a suite's own rows on an empty migrated database (through lib functions where they exist). */
+export type Fixture = (db: Db) => Promise<void>;
+
+interface OpenedDb {
+  db: Db;
+  client: SqlClient;
+  /** The server database's address (server mode only), for processes the test starts. */
+  url?: string;
+  end: () => Promise<void>;
+}
+
+interface SuiteDb extends OpenedDb {
+  saved: SavedRows;
+  inUse: boolean;
+}
+
+const suites = new Map<Fixture | 'demo', Promise<SuiteDb>>();
 let serverDbCount = 0;
 
-export function serverTestUrl(): string | null {
-  return process.env.KERFWISE_TEST_SERVER === '1' ? (process.env.KERFWISE_TEST_DATABASE_URL ?? null) : null;
+async function openEmbedded(start: 'demo' | 'migrated'): Promise<OpenedDb> {
+  const client = await openSnapshot(start);
+  return { db: wrapClient(client), client, end: () => client.close() };
 }
 
-async function getTemplate(): Promise<PGlite> {
-  if (!template) {
-    const client = new PGlite();
-    await migrateEmbedded(client);
-    await seedDemoYard(wrapClient(client), SEED_DATE);
-    template = client;
-  }
-  return template;
-}
-
-async function createServerTestDb(serverUrl: string): Promise<TestDb> {
-  const name = `kerfwise_test_${process.pid}_${++serverDbCount}`;
-  await onServer(serverUrl, [`create database ${name} template ${TEMPLATE_DB} strategy file_copy`]);
+async function openOnServer(serverUrl: string, start: 'demo' | 'migrated'): Promise<OpenedDb> {
+  const name = `${TEST_DB_PREFIX}${process.pid}_${++serverDbCount}`;
+  await onServer(serverUrl, [`create database ${name} template ${TEMPLATE_DBS[start]} strategy file_copy`]);
   const url = urlForDatabase(serverUrl, name);
   const { pool, db } = connectServer(url, 4);
   const client: SqlClient = {
     query: async <T>(text: string, params?: unknown[]) => ({
       rows: (await pool.query(text, params)).rows as T[],
     }),
+    exec: (text: string) => pool.query(text),
   };
   // The database itself is dropped with the rest when the run ends (see server-global-setup.ts).
-  return { db, client, close: () => pool.end(), url };
+  return { db, client, url, end: () => pool.end() };
 }
 
-/** A fresh, migrated and demo-seeded database. Close it when done. */
-export async function createTestDb(): Promise<TestDb> {
+async function openSuiteDb(fixture: Fixture | 'demo'): Promise<SuiteDb> {
+  const start = fixture === 'demo' ? 'demo' : 'migrated';
   const serverUrl = serverTestUrl();
-  if (serverUrl) return createServerTestDb(serverUrl);
-  // clone() copies the migrated, seeded template in a fraction of the time a fresh migrate takes.
-  const client = (await (await getTemplate()).clone()) as PGlite;
-  return { db: wrapClient(client), client, close: () => client.close() };
+  const opened = serverUrl ? await openOnServer(serverUrl, start) : await openEmbedded(start);
+  if (fixture !== 'demo') {
+    setDbForTests(opened.db); // lib functions reach the database through getDb()
+    try {
+      await fixture(opened.db);
+    } finally {
+      setDbForTests(undefined);
+    }
+  }
+  return { ...opened, saved: await saveRows(opened.client), inUse: false };
 }
 
+export interface TestDb {
+  db: Db;
+  client: SqlClient;
+  /** The server database's address (server mode only), for processes the test starts. */
+  url?: string;
+  /** Gives the database back: its rows are reset for the next test. */
+  close: () => Promise<void>;
+}
+
+/**
+ * The test file's database: the demo yard by default, or the given minimal fixture.
+ * One at a time per fixture: close it before asking again.
+ */
+export async function createTestDb({
+  fixture = 'demo',
+}: { fixture?: Fixture | 'demo' } = {}): Promise<TestDb> {
+  if (!suites.has(fixture)) suites.set(fixture, openSuiteDb(fixture));
+  const suite = await suites.get(fixture)!;
+  if (suite.inUse) throw new Error('The test database is still open: close it before asking for it again.');
+  suite.inUse = true;
+  return {
+    db: suite.db,
+    client: suite.client,
+    url: suite.url,
+    close: async () => {
+      await suite.saved.restore();
+      suite.inUse = false;
+    },
+  };
+}
+
+/** Closes the file's databases (call in afterAll, or Vitest will not exit). */
 export async function closeTemplate(): Promise<void> {
-  await template?.close();
-  template = undefined;
+  const open = [...suites.values()];
+  suites.clear();
+  for (const suite of open) await (await suite).end();
 }

@@ -1,7 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { JobsBoard } from '@/components/jobs/jobs-board';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { PageHeader } from '@/components/ui/page-header';
 import { SawProgressPanel } from '@/components/saw/saw-progress-panel';
 import { requirePageUser } from '@/lib/auth/page-user';
@@ -10,13 +9,12 @@ import { can } from '@/lib/auth/permissions';
 export const metadata: Metadata = { title: 'Jobs' };
 
 export default async function JobsPage() {
-  const user = await requirePageUser();
-  if (!can(user.role, 'jobs:edit')) return <AccessDenied />;
+  const user = await requirePageUser('jobs:edit');
   return (
     <>
       <PageHeader
         title="Jobs"
-        lead="Customer cut lists, soonest due first."
+        lead="Open jobs, soonest due first. Done and cancelled jobs are under Show."
         actions={
           can(user.role, 'mail:outbox') ? (
             <Link href="/outbox" className="font-semibold text-spruce underline">

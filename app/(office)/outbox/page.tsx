@@ -1,12 +1,10 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { CaughtMailList } from '@/components/mail/caught-mail-list';
 import { SentMailTable } from '@/components/mail/sent-mail-table';
 import { Card, cardClass } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { listCaughtMail, listSentMail } from '@/lib/mail/list-outbox';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { cn } from '@/lib/cn';
@@ -15,8 +13,7 @@ export const metadata: Metadata = { title: 'Outbox' };
 export const dynamic = 'force-dynamic';
 
 export default async function OutboxPage() {
-  const user = await requirePageUser();
-  if (!can(user.role, 'mail:outbox')) return <AccessDenied />;
+  await requirePageUser('mail:outbox');
   const [sent, caught] = await Promise.all([listSentMail(), listCaughtMail()]);
   return (
     <>

@@ -1,16 +1,13 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { Card } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { getYardOverview } from '@/lib/yard/get-yard-overview';
 
 export const metadata: Metadata = { title: 'Yard overview' };
 
 export default async function OverviewPage() {
-  const user = await requirePageUser();
-  if (!can(user.role, 'reports:read')) return <AccessDenied />;
+  await requirePageUser('reports:read');
   const overview = await getYardOverview();
   const figures = [
     { label: 'Open jobs', value: overview.openJobs },

@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { RackManager } from '@/components/yard/rack-manager';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
@@ -14,8 +13,7 @@ export default async function RackPage({
 }: {
   searchParams: Promise<Record<string, string | undefined>>;
 }) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'offcuts:read')) return <AccessDenied />;
+  const user = await requirePageUser('offcuts:read');
   const [settings, sections, params] = await Promise.all([getYardSettings(), listSections(), searchParams]);
   const minAgeDays = params.minAgeDays && /^\d+$/.test(params.minAgeDays) ? params.minAgeDays : undefined;
   return (

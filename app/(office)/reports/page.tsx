@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { HeadlineFigures } from '@/components/reports/headline-figures';
 import { OffcutCharts } from '@/components/reports/offcut-charts';
 import { ReportRangeForm } from '@/components/reports/report-range-form';
@@ -9,7 +8,6 @@ import { WasteCharts } from '@/components/reports/waste-charts';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { getOffcutReport, getSavingsReport, getStockReport, getWasteReport } from '@/lib/reports/get-reports';
 import { readReportRange } from '@/lib/reports/report-range';
 import { getYardSettings } from '@/lib/yard/yard-settings';
@@ -21,8 +19,7 @@ export default async function ReportsPage({
 }: {
   searchParams: Promise<{ from?: string; to?: string }>;
 }) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'reports:read')) return <AccessDenied />;
+  await requirePageUser('reports:read');
   const { range, problem } = readReportRange(await searchParams);
   const [waste, offcuts, savings, stock, settings] = await Promise.all([
     getWasteReport(range),

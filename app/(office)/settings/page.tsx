@@ -1,17 +1,14 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { SettingsForm } from '@/components/yard/settings-form';
 import { Card } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { getYardSettings } from '@/lib/yard/yard-settings';
 
 export const metadata: Metadata = { title: 'Yard settings' };
 
 export default async function SettingsPage() {
-  const user = await requirePageUser();
-  if (!can(user.role, 'settings:edit')) return <AccessDenied />;
+  await requirePageUser('settings:edit');
   const s = await getYardSettings();
   return (
     <>
@@ -31,6 +28,14 @@ export default async function SettingsPage() {
             minSafePieceMm: s.minSafePieceMm,
             perCutChargePence: s.perCutChargePence,
             clearOffcutsAfterDays: s.clearOffcutsAfterDays,
+            vatRateBasisPoints: s.vatRateBasisPoints,
+            quoteValidityDays: s.quoteValidityDays,
+            minimumChargePence: s.minimumChargePence,
+            offcutRatePercent: s.offcutRatePercent,
+            depositPercent: s.depositPercent,
+            yardAddress: s.yardAddress,
+            vatNumber: s.vatNumber,
+            remaindersGoTo: s.remaindersGoTo,
           }}
         />
       </Card>

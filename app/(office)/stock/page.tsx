@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { StockManager } from '@/components/stock/stock-manager';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
@@ -9,8 +8,7 @@ import { getYardSettings } from '@/lib/yard/yard-settings';
 export const metadata: Metadata = { title: 'Stock' };
 
 export default async function StockPage() {
-  const user = await requirePageUser();
-  if (!can(user.role, 'stock:receive')) return <AccessDenied />;
+  const user = await requirePageUser('stock:receive');
   const settings = await getYardSettings();
   return (
     <>

@@ -1,11 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { Notice } from '@/components/ui/notice';
 import { OffcutLabel } from '@/components/saw/offcut-label';
 import { PrintButton } from '@/components/saw/print-button';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { getOffcutsForLabels, getOffcutsMadeByPlan } from '@/lib/saw/find-offcut';
 import { offcutIdsQuerySchema } from '@/lib/validations/saw';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
@@ -22,8 +20,7 @@ const PAGE_SIZE = {
 };
 
 export default async function OffcutLabelsPage({ searchParams }: { searchParams: Promise<Search> }) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'offcuts:label')) return <AccessDenied />;
+  await requirePageUser('offcuts:label');
   const search = await searchParams;
   const format = search.format === 'a4' ? 'a4' : 'roll';
   const ids = offcutIdsQuerySchema.safeParse(search.ids ?? '');

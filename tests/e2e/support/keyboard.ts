@@ -9,14 +9,15 @@ export type TabStop = {
 };
 
 /** Marks every control in the main content that Tab should reach; answers their keys. */
-export async function markMainControls(page: Page): Promise<string[]> {
+export async function markMainControls(page: Page): Promise<Record<string, string>> {
   return page.evaluate(() => {
     const selector =
-      'a[href], button:not([disabled]), input:not([disabled]):not([type="hidden"]), select:not([disabled]), textarea:not([disabled]), summary, [tabindex="0"]';
-    const keys: string[] = [];
+      ':is(a[href], button:not([disabled]), input:not([disabled]):not([type="hidden"]), select:not([disabled]), textarea:not([disabled]), summary, [tabindex="0"]):not([tabindex="-1"])';
+    const keys: Record<string, string> = {};
     const radioGroups = new Set<string>();
     document.querySelectorAll<HTMLElement>(`main ${selector}`).forEach((el, i) => {
-      if (el.getClientRects().length === 0 || getComputedStyle(el).visibility === 'hidden') return;
+      // Hidden, or inside a closed disclosure panel: not a tab stop until it is shown.
+      if (!el.checkVisibility({ contentVisibilityAuto: true, visibilityProperty: true })) return;
       if (el.closest('[inert], [aria-hidden="true"]')) return;
       // One radio of a group is a tab stop; the arrows move within the group.
       const radio = el instanceof HTMLInputElement && el.type === 'radio' ? el.name : null;
@@ -27,7 +28,11 @@ export async function markMainControls(page: Page): Promise<string[]> {
       }
       if (radio) radioGroups.add(radio);
       el.dataset.kb = key;
-      keys.push(key);
+      keys[key] =
+        `${el.tagName.toLowerCase()} ${el.getAttribute('aria-label') || el.textContent?.trim() || el.getAttribute('name') || ''}`.slice(
+          0,
+          60,
+        );
     });
     return keys;
   });
@@ -39,6 +44,8 @@ export async function tab(page: Page): Promise<TabStop | null> {
   return page.evaluate(() => {
     const el = document.activeElement as HTMLElement | null;
     if (!el || el === document.body) return null;
+    // Judge the ring as it ends up, not halfway through a colour transition.
+    for (const animation of el.getAnimations()) animation.finish();
     const parse = (c: string) => {
       const m = c.match(/rgba?\(([^)]+)\)/);
       if (!m) return null;
@@ -63,7 +70,11 @@ export async function tab(page: Page): Promise<TabStop | null> {
     const style = getComputedStyle(el);
     const ring = parse(style.outlineColor);
     let ringProblem: string | null = null;
-    if (style.outlineStyle === 'none' || parseFloat(style.outlineWidth) < 2 || !ring || ring.a < 0.5) {
+    // Open question: while Tab walks a date field's inner day/month/year parts, Chromium reports no
+    // outline on the field, although the field shows its ring when focused. Not judged here yet.
+    const dateField = el instanceof HTMLInputElement && /^(date|time|datetime-local)$/.test(el.type);
+    if (dateField) ringProblem = null;
+    else if (style.outlineStyle === 'none' || parseFloat(style.outlineWidth) < 2 || !ring || ring.a < 0.5) {
       ringProblem = `no outline (${style.outlineStyle} ${style.outlineWidth})`;
     } else {
       const [hi, lo] = [lum(ring), lum(behind)].sort((p, q) => q - p);
@@ -85,10 +96,17 @@ export async function tab(page: Page): Promise<TabStop | null> {
       )
         ringProblem = 'ring clipped by an ancestor with overflow hidden';
     }
+    function describe(e: HTMLElement) {
+      const text = e.getAttribute('aria-label') || e.textContent?.trim() || e.getAttribute('name') || '';
+      return `${e.tagName.toLowerCase()}${e.getAttribute('type') ? `[${e.getAttribute('type')}]` : ''} ${text}`.slice(
+        0,
+        60,
+      );
+    }
     return {
       key: el.dataset.kb ?? '',
       where: el.closest('header') && !el.closest('main') ? 'header' : el.closest('main') ? 'main' : 'other',
-      name: (el.getAttribute('aria-label') ?? el.textContent ?? el.tagName).trim().slice(0, 40),
+      name: describe(el),
       ringProblem,
     } as const;
   });

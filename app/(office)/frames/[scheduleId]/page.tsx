@@ -1,10 +1,8 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { FrameScheduleEditor } from '@/components/frames/frame-schedule-editor';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { AppError } from '@/lib/errors';
 import { getFrameScheduleById } from '@/lib/frames-data/frame-schedules';
 import { getYardFrameSections } from '@/lib/frames-data/get-yard-frame-sections';
@@ -13,8 +11,7 @@ import { listJobsOpenForFrames } from '@/lib/frames-data/send-schedule-to-job';
 export const metadata: Metadata = { title: 'Frame schedule' };
 
 export default async function FrameSchedulePage({ params }: { params: Promise<{ scheduleId: string }> }) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'frames:edit')) return <AccessDenied />;
+  await requirePageUser('frames:edit');
   const id = Number((await params).scheduleId);
   if (!Number.isSafeInteger(id) || id <= 0) notFound();
   const [schedule, sections, openJobs] = await Promise.all([

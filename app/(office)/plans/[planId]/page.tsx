@@ -1,6 +1,5 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { PlanView } from '@/components/plans/plan-view';
 import { DisplayUnitProvider } from '@/components/units/display-unit';
 import { requirePageUser } from '@/lib/auth/page-user';
@@ -14,8 +13,7 @@ export const metadata: Metadata = { title: 'Plan' };
 type Props = { params: Promise<{ planId: string }>; searchParams: Promise<{ previous?: string }> };
 
 export default async function PlanPage({ params, searchParams }: Props) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'plans:read')) return <AccessDenied />;
+  const user = await requirePageUser('plans:read');
   const [{ planId }, { previous }, yard] = await Promise.all([params, searchParams, getYardSettings()]);
   const id = Number(planId);
   if (!Number.isSafeInteger(id) || id <= 0) notFound();

@@ -1,11 +1,9 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { PlanCompare } from '@/components/plans/plan-compare';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page-header';
 import { DisplayUnitProvider } from '@/components/units/display-unit';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Compare plans' };
@@ -15,8 +13,7 @@ export default async function ComparePlansPage({
 }: {
   searchParams: Promise<{ a?: string; b?: string }>;
 }) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'plans:read')) return <AccessDenied />;
+  await requirePageUser('plans:read');
   const [{ a, b }, yard] = await Promise.all([searchParams, getYardSettings()]);
   const ids = [Number(a), Number(b)];
   const valid = ids.every((id) => Number.isSafeInteger(id) && id > 0);

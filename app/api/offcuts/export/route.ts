@@ -1,4 +1,5 @@
 // GET /api/offcuts/export – the filtered rack as a CSV download (everyone signed in)
+import { attachmentDisposition } from '@/lib/api/attachment';
 import { route } from '@/lib/api/route';
 import { offcutsToCsv } from '@/lib/offcuts/offcuts-csv';
 import { listOffcutsForExport } from '@/lib/offcuts/list-offcuts';
@@ -11,7 +12,7 @@ export const GET = route('offcuts:read', async ({ req }) => {
   return new Response(csv, {
     headers: {
       'content-type': 'text/csv; charset=utf-8',
-      'content-disposition': `attachment; filename="offcut-rack-${day}.csv"`,
+      'content-disposition': attachmentDisposition(`offcut-rack-${day}.csv`),
     },
   });
 });

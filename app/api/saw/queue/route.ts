@@ -3,7 +3,7 @@ import { NextResponse } from 'next/server';
 import { route } from '@/lib/api/route';
 import { getSawQueue } from '@/lib/saw/get-saw-queue';
 
-// Read by the saw and, for live progress, by the office.
-export const GET = route('plans:read', async () => {
+// Read by the saw and, for live progress on the job list, by the office (no prices or contact details).
+export const GET = route('saw:progress', async () => {
   return NextResponse.json({ queue: await getSawQueue() });
 });

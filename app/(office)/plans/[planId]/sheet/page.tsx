@@ -1,12 +1,10 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { CutSheet } from '@/components/plans/cut-sheet';
 import { PrintButton } from '@/components/plans/print-button';
 import { DisplayUnitProvider } from '@/components/units/display-unit';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { AppError } from '@/lib/errors';
 import { getJobById } from '@/lib/jobs/get-job';
 import { getPlanById } from '@/lib/plans/get-plan';
@@ -17,8 +15,7 @@ import { getYardSettings } from '@/lib/yard/get-yard-settings';
 export const metadata: Metadata = { title: 'Cut sheet' };
 
 export default async function CutSheetPage({ params }: { params: Promise<{ planId: string }> }) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'plans:read')) return <AccessDenied />;
+  await requirePageUser('plans:read');
   const planId = Number((await params).planId);
   if (!Number.isSafeInteger(planId) || planId <= 0) notFound();
   const loaded = await Promise.all([

@@ -1,4 +1,5 @@
 // GET /api/plans/[planId]/cut-sheet – the plan's cut sheet as a PDF download
+import { attachmentDisposition } from '@/lib/api/attachment';
 import { parseId, route } from '@/lib/api/route';
 import { renderCutSheet } from '@/lib/cut-sheets/render-cut-sheet';
 
@@ -7,7 +8,7 @@ export const GET = route<{ planId: string }>('plans:read', async ({ params }) =>
   return new Response(new Uint8Array(pdf), {
     headers: {
       'content-type': 'application/pdf',
-      'content-disposition': `attachment; filename="${fileName}"`,
+      'content-disposition': attachmentDisposition(fileName),
     },
   });
 });

@@ -3,6 +3,8 @@ import { NextResponse } from 'next/server';
 import { parseId, route } from '@/lib/api/route';
 import { undoLastBoard } from '@/lib/saw/undo-last-board';
 
-export const POST = route<{ planId: string }>('saw:cut', async ({ params }) => {
-  return NextResponse.json(await undoLastBoard({ planId: parseId(params.planId, 'That plan') }));
+export const POST = route<{ planId: string }>('saw:cut', async ({ params, user }) => {
+  return NextResponse.json(
+    await undoLastBoard({ planId: parseId(params.planId, 'That plan'), userId: user.id }),
+  );
 });

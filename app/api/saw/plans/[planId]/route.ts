@@ -3,6 +3,6 @@ import { NextResponse } from 'next/server';
 import { parseId, route } from '@/lib/api/route';
 import { getSawPlan } from '@/lib/saw/get-saw-plan';
 
-export const GET = route<{ planId: string }>('plans:read', async ({ params }) => {
+export const GET = route<{ planId: string }>('saw:read', async ({ params }) => {
   return NextResponse.json(await getSawPlan({ planId: parseId(params.planId, 'That plan') }));
 });

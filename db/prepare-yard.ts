@@ -1,0 +1,21 @@
+// What a server start puts into a freshly opened database, as asked by the environment:
+// the demo yard with KERFWISE_DEMO=1 (empty database only), the first owner from KERFWISE_OWNER_*.
+import type { Env } from '@/lib/env';
+import type { Db } from './client';
+import { createFirstOwner } from './first-owner';
+import { seedDemoYard } from './seed';
+import { DEMO_PASSWORD } from './seed/demo-yard';
+
+export async function prepareYard(db: Db, env: Env): Promise<void> {
+  if (env.KERFWISE_DEMO && (await seedDemoYard(db))) {
+    console.log(`Kerfwise: seeded the demo yard (demo sign-ins, password "${DEMO_PASSWORD}").`);
+  }
+  if (env.KERFWISE_OWNER_EMAIL && env.KERFWISE_OWNER_PASSWORD) {
+    const result = await createFirstOwner(db, {
+      email: env.KERFWISE_OWNER_EMAIL,
+      password: env.KERFWISE_OWNER_PASSWORD,
+      name: env.KERFWISE_OWNER_NAME,
+    });
+    if (result.created) console.log(`Kerfwise: created the first owner ${result.email}.`);
+  }
+}
