@@ -22,7 +22,7 @@ const projects: TestProjectInlineConfiguration[] = [
     test: {
       name: 'pglite',
       include: ['tests/**/*.test.ts'],
-      exclude: ['tests/e2e/**', 'tests/server/**', 'node_modules/**'],
+      exclude: ['tests/e2e/**', 'tests/server/**', 'tests/instances/**', 'node_modules/**'],
       globalSetup: [snapshotSetup],
     },
   },

@@ -19,8 +19,10 @@ afterEach(async () => {
   await t.close();
 });
 
-// Short expiry so a killed worker's run is retried within the test.
+// Short expiry so a killed worker's run is retried within the test. A run's expiry is fixed when it
+// is sent, so this process (which sends) needs it as well as the workers.
 const QUICK_RETRY = { KERFWISE_PLAN_RUN_EXPIRE_SECONDS: '8', KERFWISE_QUEUE_MAINTENANCE_SECONDS: '1' };
+Object.assign(process.env, QUICK_RETRY);
 
 async function jobByReference(reference: string) {
   const [job] = await t.db.select().from(schema.jobs).where(eq(schema.jobs.reference, reference));
@@ -76,9 +78,10 @@ describe('solver runs on the queue', () => {
     await killWorker(first);
     expect((await getPlanRun(t.db, runId)).status).toBe('running');
 
-    workers.push(startWorker(t.url!, QUICK_RETRY));
+    const second = startWorker(t.url!, QUICK_RETRY);
+    workers.push(second);
     const done = await waitFor(
-      'the retried run to finish',
+      () => `the retried run to finish. Worker output:\n${first.output()}\n---\n${second.output()}`,
       async () => {
         const run = await getPlanRun(t.db, runId);
         return run.status === 'done' ? run : null;

@@ -24,7 +24,7 @@ export function killWorker(worker: WorkerProcess, signal: NodeJS.Signals = 'SIGK
 }
 
 export async function waitFor<T>(
-  what: string,
+  what: string | (() => string),
   probe: () => Promise<T | null | undefined>,
   timeoutMs: number,
 ) {
@@ -34,5 +34,5 @@ export async function waitFor<T>(
     if (value) return value;
     await new Promise((r) => setTimeout(r, 250));
   }
-  throw new Error(`Timed out waiting for ${what}`);
+  throw new Error(`Timed out waiting for ${typeof what === 'string' ? what : what()}`);
 }

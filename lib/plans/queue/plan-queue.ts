@@ -26,14 +26,17 @@ async function startBoss(url: string, role: 'sender' | 'worker'): Promise<PgBoss
   boss.on('error', (error) => console.error('Solver queue error', error));
   await boss.start(); // creates or upgrades the pgboss schema under its own advisory lock
   await boss.createQueue(PLAN_RUN_DEAD_QUEUE, { name: PLAN_RUN_DEAD_QUEUE });
-  await boss.createQueue(PLAN_RUN_QUEUE, {
+  const options = {
     name: PLAN_RUN_QUEUE,
     retryLimit: PLAN_RUN_RETRY_LIMIT,
     retryDelay: 2,
     retryBackoff: true,
     expireInSeconds: env.KERFWISE_PLAN_RUN_EXPIRE_SECONDS,
     deadLetter: PLAN_RUN_DEAD_QUEUE,
-  });
+  };
+  // createQueue leaves an existing queue as it was: update it, so changed settings take effect.
+  await boss.createQueue(PLAN_RUN_QUEUE, options);
+  await boss.updateQueue(PLAN_RUN_QUEUE, options);
   return boss;
 }
 
