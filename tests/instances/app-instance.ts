@@ -1,5 +1,5 @@
-// Starts production app instances (`next start` on an existing build) against one PostgreSQL
-// database, and talks to them over HTTP as a signed-in person would.
+// Starts production app instances (`next start` on an existing build), and talks to them over HTTP
+// as a signed-in person would. Used by the two-instance test and the load benchmark.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { createServer } from 'node:net';
 
@@ -16,14 +16,14 @@ export function freePort(): Promise<number> {
   });
 }
 
-export async function startInstance(databaseUrl: string, env: Record<string, string> = {}) {
+/** env names the database: DATABASE_URL for a PostgreSQL server, or KERFWISE_DATA_DIR (embedded). */
+export async function startInstance(env: Record<string, string>) {
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const child = spawn('npx', ['next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
     env: {
       ...process.env,
       NODE_ENV: 'production',
-      DATABASE_URL: databaseUrl,
       NEXTAUTH_URL: base,
       NEXT_TELEMETRY_DISABLED: '1',
       ...env,

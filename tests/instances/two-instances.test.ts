@@ -37,11 +37,12 @@ beforeAll(async () => {
   const url = urlForDatabase(serverUrl, DATABASE);
   // Both start on an empty database at once: migrations and the demo seed must run exactly once.
   const env = {
+    DATABASE_URL: url,
     KERFWISE_DEMO: '1',
     NEXTAUTH_SECRET: 'two-instance-test-secret-only',
     KERFWISE_SMTP_PORT: '9',
   };
-  instances = await Promise.all([startInstance(url, env), startInstance(url, env)]);
+  instances = await Promise.all([startInstance(env), startInstance(env)]);
   await Promise.all(instances.map((i) => waitUntilHealthy(i, 240_000)));
   worker = startWorker(url);
   ({ pool, db } = connectServer(url, 4));

@@ -3,6 +3,13 @@ import { eq } from 'drizzle-orm';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import * as schema from '@/db/schema';
 import { enqueuePlanRun } from '@/lib/plans/queue/enqueue-plan-run';
+import {
+  getPlanQueue,
+  PLAN_RUN_DEAD_QUEUE,
+  PLAN_RUN_QUEUE,
+  PLAN_RUN_RETRY_LIMIT,
+} from '@/lib/plans/queue/plan-queue';
+import { DEAD_RUN_MESSAGE, startPlanWorker } from '@/lib/plans/queue/plan-worker';
 import { cancelPlanRun, getPlanRun } from '@/lib/plans/queue/plan-runs';
 import { AS } from '../support/api';
 import { createTestDb, type TestDb } from '../support/test-db';
@@ -93,4 +100,39 @@ describe('solver runs on the queue', () => {
     expect(plans.length).toBe(before + 1);
     expect(plans.filter((p) => p.id === done.planId)).toHaveLength(1);
   }, 200_000);
+
+  it('a run that fails every try is retried with growing delays, then marked failed with a clear message', async () => {
+    const job = await jobByReference('J-1001');
+    const before = (await plansOf(job.id)).length;
+    const runId = await enqueuePlanRun(t.db, t.url!, { jobId: job.id, overrides: {}, userId: AS.hand });
+    // An in-process worker whose engine fails every time, as a crash would.
+    const tries: number[] = [];
+    const boss = await getPlanQueue(t.url!);
+    await startPlanWorker(t.db, boss, {
+      processRun: async () => {
+        tries.push(Date.now());
+        throw new Error('the cutting engine stopped (test)');
+      },
+      log: () => undefined,
+    });
+    try {
+      const failed = await waitFor(
+        'the run to be given up on',
+        async () => {
+          const run = await getPlanRun(t.db, runId);
+          return run.status === 'failed' ? run : null;
+        },
+        90_000,
+      );
+      expect(failed.error).toBe(DEAD_RUN_MESSAGE);
+      expect(tries).toHaveLength(PLAN_RUN_RETRY_LIMIT + 1);
+      // Backoff: retry n waits 2^n to 2^(n+1) seconds (retryDelay 2), so each gap is at least 2^n s.
+      const gaps = tries.slice(1).map((at, i) => at - tries[i]);
+      gaps.forEach((gap, i) => expect(gap).toBeGreaterThanOrEqual(2 ** (i + 1) * 1000 - 500));
+      expect((await plansOf(job.id)).length).toBe(before);
+    } finally {
+      await boss.offWork(PLAN_RUN_QUEUE);
+      await boss.offWork(PLAN_RUN_DEAD_QUEUE);
+    }
+  }, 120_000);
 });
