@@ -54,11 +54,8 @@ export type PlanRunView = {
   error: string | null;
 };
 
-export const planRunQuery = (runId: number) =>
-  queryOptions({
-    queryKey: ['plan-run', runId],
-    queryFn: () => fetchJson<PlanRunView>(`/api/plan-runs/${runId}`),
-  });
+export const cancelPlanRunRequest = (runId: number) =>
+  fetchJson<PlanRunView>(`/api/plan-runs/${runId}`, { method: 'DELETE' });
 
 const RUN_POLL_MS = 1_000;
 
