@@ -1,6 +1,6 @@
 // Thin data access for the owner's reports: read the rows, hand them to the pure computations.
 import 'server-only';
-import { and, eq, gte, inArray, lt, ne } from 'drizzle-orm';
+import { and, eq, gte, inArray, isNotNull, lt, ne, or } from 'drizzle-orm';
 import { getDb } from '@/db';
 import {
   jobs,
@@ -48,7 +48,11 @@ export async function getWasteReport(range: ReportRange) {
       .from(stockMovements)
       .where(
         and(
-          inArray(stockMovements.kind, ['receipt', 'stock_cut']),
+          or(
+            inArray(stockMovements.kind, ['receipt', 'stock_cut']),
+            // a stock board taken back at the saw cancels its cut
+            and(eq(stockMovements.kind, 'board_undone'), isNotNull(stockMovements.stockLengthId)),
+          ),
           gte(stockMovements.at, start),
           lt(stockMovements.at, end),
         ),
@@ -153,15 +157,26 @@ export async function getStockReport(range: ReportRange) {
       .from(stockLengths)
       .innerJoin(sections, eq(sections.id, stockLengths.sectionId)),
     db
-      .select({ at: stockMovements.at, stockLengthId: stockMovements.stockLengthId })
+      .select({
+        at: stockMovements.at,
+        stockLengthId: stockMovements.stockLengthId,
+        quantityDelta: stockMovements.quantityDelta,
+      })
       .from(stockMovements)
       .where(
-        and(eq(stockMovements.kind, 'stock_cut'), gte(stockMovements.at, start), lt(stockMovements.at, end)),
+        and(
+          // A board taken back at the saw ('board_undone', +1 on hand) cancels its cut.
+          inArray(stockMovements.kind, ['stock_cut', 'board_undone']),
+          gte(stockMovements.at, start),
+          lt(stockMovements.at, end),
+        ),
       ),
   ]);
   return computeStockReport({
     lengths,
-    cuts: cuts.filter((c) => c.stockLengthId !== null) as { at: Date; stockLengthId: number }[],
+    cuts: cuts.flatMap(({ at, stockLengthId, quantityDelta }) =>
+      stockLengthId === null ? [] : [{ at, stockLengthId, boards: -quantityDelta }],
+    ),
     start,
     end,
   });

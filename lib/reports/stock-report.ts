@@ -6,7 +6,8 @@ export type StockLengthRow = {
   onHand: number | null;
   active: boolean;
 };
-export type StockCutRow = { at: Date; stockLengthId: number };
+/** A board cut from a stock length (boards 1), or a cut board taken back at the saw (boards −1). */
+export type StockCutRow = { at: Date; stockLengthId: number; boards: number };
 
 export type StockLine = StockLengthRow & {
   used: number;
@@ -35,12 +36,12 @@ export function computeStockReport({
   const weeks = Math.max(1, (end.getTime() - start.getTime()) / (7 * 86_400_000));
   const used = new Map<number, number>();
   for (const c of cuts) {
-    if (c.at >= start && c.at < end) used.set(c.stockLengthId, (used.get(c.stockLengthId) ?? 0) + 1);
+    if (c.at >= start && c.at < end) used.set(c.stockLengthId, (used.get(c.stockLengthId) ?? 0) + c.boards);
   }
   const lines = lengths
     .filter((l) => l.active)
     .map((l) => {
-      const n = used.get(l.stockLengthId) ?? 0;
+      const n = Math.max(0, used.get(l.stockLengthId) ?? 0);
       const usedPerWeek = Math.round((n / weeks) * 10) / 10;
       const weeksOfCover =
         l.onHand === null || n === 0 ? null : Math.round((l.onHand / (n / weeks)) * 10) / 10;

@@ -14,10 +14,13 @@ export type DoneBoardRow = {
   pencePerMetre: number;
 };
 
-/** Receipts (stock bought) and stock cuts (stock boards taken to the saw). */
+/**
+ * Receipts (stock bought), stock cuts (stock boards taken to the saw, quantity −1) and stock boards
+ * taken back at the saw ('board_undone', quantity +1, value negative), which cancel a cut.
+ */
 export type MaterialMovementRow = {
   at: Date;
-  kind: 'receipt' | 'stock_cut';
+  kind: 'receipt' | 'stock_cut' | 'board_undone';
   quantityDelta: number;
   lengthMm: number;
   valuePence: number;
@@ -132,7 +135,7 @@ export function computeWasteReport({
       flow.boughtMm += m.quantityDelta * m.lengthMm;
       flow.boughtPence += m.valuePence;
     } else {
-      flow.cutMm += m.lengthMm;
+      flow.cutMm -= m.quantityDelta * m.lengthMm;
       flow.cutPence += m.valuePence;
     }
   }

@@ -49,7 +49,8 @@ export async function plannedJobFor(db: Db, account: 'retail' | 'trade', referen
   const plan = await call(planJob, {
     method: 'POST',
     params: { jobId: String(job.json.job.id) },
-    body: { useOffcuts: false, timeLimitMs: 500 },
+    // Generous: the solver stops once the plan meets its bound, and a loaded machine must not change the plan.
+    body: { useOffcuts: false, timeLimitMs: 10_000 },
   });
   if (plan.status !== 201) throw new Error(`planning failed: ${JSON.stringify(plan.json)}`);
   return {

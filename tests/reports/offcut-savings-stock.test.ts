@@ -140,6 +140,7 @@ describe('stock report', () => {
       Array.from({ length: n }, (_, i) => ({
         at: new Date(start.getTime() + i * 3_600_000),
         stockLengthId: id,
+        boards: 1,
       }));
     const report = computeStockReport({
       start,

@@ -123,6 +123,21 @@ describe('waste report', () => {
           lengthMm: 2400,
           valuePence: 600,
         },
+        // the second week's 3600 board was cut, then taken back at the saw: nothing used
+        {
+          at: new Date('2026-09-17T10:00:00Z'),
+          kind: 'stock_cut',
+          quantityDelta: -1,
+          lengthMm: 3600,
+          valuePence: 900,
+        },
+        {
+          at: new Date('2026-09-17T10:05:00Z'),
+          kind: 'board_undone',
+          quantityDelta: 1,
+          lengthMm: 3600,
+          valuePence: -900,
+        },
       ],
     });
     // 20 × 4800 = 96 000 mm bought in week 1; 4800 cut in week 1 and 2400 in week 2.

@@ -3,6 +3,8 @@ import { eq } from 'drizzle-orm';
 import { POST as done } from '@/app/api/plans/[planId]/boards/[boardNo]/done/route';
 import { POST as undo } from '@/app/api/plans/[planId]/undo-board/route';
 import * as schema from '@/db/schema';
+import { getStockReport, getWasteReport } from '@/lib/reports/get-reports';
+import { defaultReportRange } from '@/lib/reports/report-range';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 import {
@@ -204,6 +206,17 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
       );
     };
     const ledgerBefore = await ledger();
+    // what the owner's stock and waste reports say was used of this board's stock length
+    const reportedUse = async () => {
+      const range = defaultReportRange(new Date());
+      const stock = await getStockReport(range);
+      const waste = await getWasteReport(range);
+      return {
+        boards: stock.lines.find((l) => l.stockLengthId === stockBoard.stockLengthId)?.used,
+        cutMm: waste.totals.cutMm,
+      };
+    };
+    const useBefore = await reportedUse();
     const [stockBefore] = await t.db
       .select()
       .from(schema.stockLengths)
@@ -211,6 +224,10 @@ describe('POST /api/plans/[planId]/boards/[boardNo]/done', () => {
     actAs(AS.saw);
     const cut = await confirm(planId, stockBoard.boardNo);
     expect(cut.json.jobStatus).toBe('cutting');
+    expect(await reportedUse()).toEqual({
+      boards: useBefore.boards! + 1,
+      cutMm: useBefore.cutMm + stockBefore.lengthMm,
+    });
     const idsBefore = (await t.db.select().from(schema.stockMovements)).map((m) => m.id);
     actAs(AS.hand);
     expect((await call(undo, { method: 'POST', params: { planId: String(planId) } })).status).toBe(403);

@@ -58,7 +58,8 @@ export async function releasedJob(
   const planned = await call(planJob, {
     method: 'POST',
     params: { jobId: String(job.id) },
-    body: { timeLimitMs: 500 },
+    // Generous: the solver stops once the plan meets its bound, and a loaded machine must not change the plan.
+    body: { timeLimitMs: 10_000 },
   });
   if (planned.status !== 201) throw new Error(`planning failed: ${JSON.stringify(planned.json)}`);
   const planId = planned.json.id as number;

@@ -141,7 +141,7 @@ describe('API routes', () => {
     }
     recordCells('api', cells, leaks.length);
     expect(leaks).toEqual([]);
-  });
+  }, 300_000); // hundreds of handler calls: minutes on a loaded 2-core machine
 });
 
 describe('pages', () => {
@@ -204,7 +204,7 @@ describe('pages', () => {
     }
     recordCells('pages', cells, leaks.length);
     expect(leaks).toEqual([]);
-  });
+  }, 300_000); // hundreds of handler calls: minutes on a loaded 2-core machine
 
   it('keeps the saw operator out of jobs, office plans and cut sheets', () => {
     const saw = { role: 'saw_operator' as const };
