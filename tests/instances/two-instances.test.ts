@@ -75,7 +75,8 @@ async function twoPlansOneOffcut(sectionId: number, n: number) {
       .values({ reference: `J-TWO-${n}${side}`, customerName: 'Two-instance test' })
       .returning();
     await db.insert(schema.jobItems).values({ jobId: job.id, sectionId, lengthMm: 1500, quantity: 1 });
-    const plan = await createPlan({ jobId: job.id, overrides: { timeLimitMs: 200 }, userId: 2 });
+    // Generous: the solver stops once the plan meets its bound, and a loaded machine must not change it.
+    const plan = await createPlan({ jobId: job.id, overrides: { timeLimitMs: 10_000 }, userId: 2 });
     planIds.push(plan.id);
   }
   return { offcut, planIds };
