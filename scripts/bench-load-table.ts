@@ -5,6 +5,7 @@ export type LoadRow = {
   pageRps: number;
   pageP95: number;
   plans: number;
+  failed: number;
   turnaroundMedian: number;
   turnaroundP95: number;
 };
@@ -33,11 +34,11 @@ export function loadTable(
       'Page figures cover the tablets and office clients only; turnaround is from the plan request to the ' +
       'stored plan.',
     '',
-    '| setup | planners | page requests/s | page p95 ms | plans done | turnaround median ms | turnaround p95 ms |',
-    '| --- | --- | --- | --- | --- | --- | --- |',
+    '| setup | planners | page requests/s | page p95 ms | plans done | plans failed | turnaround median ms | turnaround p95 ms |',
+    '| --- | --- | --- | --- | --- | --- | --- | --- |',
     ...rows.map(
       (r) =>
-        `| ${r.setup} | ${r.planners} | ${r.pageRps.toFixed(1)} | ${ms(r.pageP95)} | ${r.plans} | ` +
+        `| ${r.setup} | ${r.planners} | ${r.pageRps.toFixed(1)} | ${ms(r.pageP95)} | ${r.plans} | ${r.failed} | ` +
         `${ms(r.turnaroundMedian)} | ${ms(r.turnaroundP95)} |`,
     ),
     '',
