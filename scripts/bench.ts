@@ -39,7 +39,7 @@ const median = (xs: number[]) => {
 };
 
 // The product loads the integer step in its worker; the bench measures the same engine.
-await prepareSolver();
+await prepareSolver({ warmUp: true });
 const setRows: SetRow[] = [];
 const published = chosen.filter((s) => s in SET_LIMITS);
 const all = published.length > 0 ? readOptima() : [];

@@ -1,7 +1,7 @@
 // Reads one job as JSON on stdin, writes its plan as JSON on stdout. Bad input: exit 2, one line on stderr.
 
 import { solveInputSchema } from './input-schema';
-import { prepareSolver } from './highs-engine';
+import { prepareSolver } from './prepare';
 import { solve } from './solve';
 
 async function readStdin(): Promise<string> {

@@ -7,7 +7,7 @@
 
 import { boardFits } from './board-fit';
 import type { Pattern } from './column-generation';
-import { highsEngine } from './highs-engine';
+import { highsEngine, runUntil } from './highs-engine';
 import type { Model } from './model';
 import { boardScrap, isKept, makeBoard, remainderOf, type PackedBoard, type Packing } from './packing';
 import type { SearchBudget } from './search-budget';
@@ -28,6 +28,8 @@ export function exactStep(
   plans: Packing[],
   lpPool: Pattern[],
   budget: SearchBudget,
+  /** A cost already proven cheapest: only phase 2 (tidying among plans of this cost) runs. */
+  provenCost: number | null = null,
 ): Packing | null {
   const highs = highsEngine();
   if (!highs || demand.every((d) => d === 0)) return null;
@@ -36,13 +38,14 @@ export function exactStep(
   const step = costStep(model.bins.map((b) => b.costUnits));
 
   const solveWith = (objective: number[], costCap: number | null): number[] | null => {
-    // HiGHS checks its clock between steps and can overrun it severalfold in WebAssembly here, so
-    // each phase gets a share of what is left.
+    // Each phase gets a share of what is left; a callback stops HiGHS at the end of that share.
     const seconds = (budget.remainingMs() * (costCap === null ? 0.4 : 0.5)) / 1000;
     if (seconds < 0.02) return null;
     const text = writeModel(model, demand, limits, columns, objective, costCap);
+    const mip = highs.createModel();
     try {
-      const res = highs.solve(text, {
+      mip.readModel({ format: 'lp', data: text });
+      mip.options.set({
         time_limit: seconds,
         mip_rel_gap: 0,
         // Costs are multiples of `step`: closing the gap to below one step proves phase 1.
@@ -52,21 +55,32 @@ export function exactStep(
         output_flag: false,
         random_seed: 0,
       });
-      if (!('Columns' in res) || res.Status === 'Infeasible') return null;
-      if (!['Optimal', 'Time limit reached'].includes(res.Status)) return null;
-      const x = columns.map((_, c) => Math.round(res.Columns[`x${c}`]?.Primal ?? 0));
+      runUntil(highs, mip, performance.now() + seconds * 1000);
+      if (Number(mip.info.get('primal_solution_status')) !== 2) return null;
+      const values = mip.getSolution().colValue;
+      const x = columns.map(() => 0);
+      for (let k = 0; k < values.length; k++) {
+        const c = Number(mip.getColName(k).slice(1));
+        if (c < x.length) x[c] = Math.round(values[k]);
+      }
       return x.every((v) => Number.isFinite(v) && v >= 0) ? x : null;
     } catch {
       return null;
+    } finally {
+      mip.dispose();
     }
   };
 
   const costs = columns.map((c) => model.bins[c.bin].costUnits);
-  const first = solveWith(costs, null);
-  if (!first) return null;
-  let packing = toPacking(model, columns, first, demand);
-  if (!isValid(model, packing, demand, limits)) return null;
-  const cost = first.reduce((s, x, c) => s + x * costs[c], 0);
+  let packing: Packing | null = null;
+  let cost = provenCost ?? 0;
+  if (provenCost === null) {
+    const first = solveWith(costs, null);
+    if (!first) return null;
+    packing = toPacking(model, columns, first, demand);
+    if (!isValid(model, packing, demand, limits)) return null;
+    cost = first.reduce((s, x, c) => s + x * costs[c], 0);
+  }
   // Among plans of this cost: less scrap, then offcuts before new stock, then fewer kept remainders.
   const prefer = columns.map((c) => {
     const board = makeBoard(model, c.bin, c.items);

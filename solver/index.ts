@@ -1,5 +1,5 @@
 export { solve } from './solve';
-export { prepareSolver } from './highs-engine';
+export { prepareSolver } from './prepare';
 export { solveInputSchema, stockInputSchema, offcutInputSchema, pieceInputSchema } from './input-schema';
 export type { SolveInputRaw } from './input-schema';
 export type {

@@ -1,6 +1,7 @@
 // The public entry point: validated job in, cheapest plan found plus its lower bound out.
 
 import type { Pattern } from './column-generation';
+import { arcFlowStep } from './arc-flow';
 import { exactStep } from './exact-step';
 import { firstFitDecreasing, longestFirst, sequentialFill } from './greedy-fill';
 import { lengthBound, lpBound, maxBound } from './lower-bounds';
@@ -14,6 +15,9 @@ import type { PlanBound, SolveInput, SolvePlan } from './types';
 
 /** Iteration caps that fix the search path (see README, "Determinism"). */
 export const SEARCH_CAPS = { lpPivots: 20_000 };
+
+/** Share of the time left that the arc-flow model may use; the rest tidies the plan up. */
+const ARC_FLOW_SHARE = 0.8;
 
 export function solve(input: SolveInput): SolvePlan {
   const started = performance.now();
@@ -40,6 +44,20 @@ export function solve(input: SolveInput): SolvePlan {
     const lengthTarget = bound.boards;
     consider(quickTargetSearch(model, best, lengthTarget, budget));
   }
+  let costCap: number | null = null;
+  // The complete integer model: the cheapest cost there is, or a stronger bound when time runs out.
+  const runArcFlow = () => {
+    if (!allPlaced || meetsBound(model, best, bound) || budget.expired()) return;
+    const exact = arcFlowStep(model, demand, limits, best, budget.remainingMs() * ARC_FLOW_SHARE);
+    if (!exact) return;
+    consider(exact.packing);
+    const cost = fromUnits(exact.proven ? scorePacking(model, best).cost : exact.boundUnits);
+    bound = maxBound(bound, { boards: bound.boards, cost, method: 'integer' });
+    if (exact.proven) costCap = scorePacking(model, best).cost;
+  };
+  // With several board kinds (a yard's job) the integer model goes first; with one kind the own
+  // searches and the pattern step close most jobs faster, and the integer model gets what is left.
+  const severalKinds = model.bins.length > 1;
   if (allPlaced && !meetsBound(model, best, bound) && !budget.expired()) {
     const lengthTarget = bound.boards;
     const lp = lpBound(model, demand, limits, {
@@ -50,19 +68,22 @@ export function solve(input: SolveInput): SolvePlan {
     });
     bound = maxBound(bound, lp?.bound ?? null);
     lpPool = lp?.pool ?? [];
-    if (!meetsBound(model, best, bound)) {
+    if (severalKinds) runArcFlow();
+    if (!meetsBound(model, best, bound) && !budget.expired()) {
       // Untrimmed boards widen the LP's patterns beyond what trimmed boards hold: bound only.
       const guide = model.relaxed ? null : lp;
       consider(improvePacking(model, best, bound, guide, budget, lengthTarget));
     }
   }
-  // The integer step: cheaper when the bound is not met, and tidier (offcuts, scrap) when it is.
+  // The pattern step: cheaper when the bound is not met, and tidier (offcuts, scrap) when it is.
   const unusedOffcuts = model.bins.some(
     (b, j) => b.source === 'offcut' && !best.boards.some((pb) => pb.bin === j),
   );
   if (allPlaced && (!meetsBound(model, best, bound) || unusedOffcuts) && !budget.expired()) {
-    consider(exactStep(model, demand, limits, [...firstPlans, ffd, byHand, best], lpPool, budget));
+    const plans = [...firstPlans, ffd, byHand, best];
+    consider(exactStep(model, demand, limits, plans, lpPool, budget, costCap));
   }
+  if (!severalKinds) runArcFlow();
   if (best.unplaced.some((n) => n > 0)) bound = lengthBound(model, placedDemand(model, best), limits);
   return buildPlan(model, best, bound, {
     timeMs: Math.round(performance.now() - started),

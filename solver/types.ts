@@ -94,8 +94,8 @@ export interface PlanBound {
   boards: number;
   /** No plan that places the same pieces can cost less. */
   cost: number;
-  /** Where the cost bound came from: the length bound or the pattern LP. */
-  method: 'length' | 'lp';
+  /** Where the cost bound came from: the length bound, the pattern LP or the integer (arc-flow) model. */
+  method: 'length' | 'lp' | 'integer';
 }
 
 export interface SolvePlan {

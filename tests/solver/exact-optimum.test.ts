@@ -87,8 +87,29 @@ describe('solver cost equals an independent exact reference', () => {
         expect(best).not.toBeNull();
         expect(pence(plan.totals.cost)).toBe(best);
         expect(pence(plan.lowerBound.cost)).toBeLessThanOrEqual(best!);
+        // With time to spare the solver proves it: its bound reaches the plan's cost.
+        expect(plan.provenOptimal).toBe(true);
+        expect(pence(plan.lowerBound.cost)).toBe(best);
       }),
       { numRuns: 20, seed: 20261202 },
+    );
+  });
+
+  it('small nominal jobs (up to 7 pieces, untrimmed and full-length boards): brute force, proven', () => {
+    fc.assert(
+      fc.property(
+        yardJob(3, true).filter((j) => j.pieces.reduce((s, p) => s + p.quantity, 0) <= 7),
+        (job) => {
+          const plan = solve(job);
+          expect(checkPlan(job, plan)).toEqual([]);
+          const best = bruteForceCost(job);
+          expect(pence(plan.totals.cost)).toBe(best);
+          expect(plan.provenOptimal).toBe(true);
+          // The label names where the bound came from; an integer-model bound is the proven cost.
+          if (plan.lowerBound.method === 'integer') expect(pence(plan.lowerBound.cost)).toBe(best);
+        },
+      ),
+      { numRuns: 30, seed: 20261203 },
     );
   });
 });
