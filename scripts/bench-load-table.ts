@@ -17,6 +17,20 @@ export function percentile(values: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 }
 
+const LOAD_HEADING = '## Load: one embedded instance against server mode';
+
+/** The load section of an existing docs/benchmarks.md (with its leading newline), or ''. */
+export function keptLoadSection(doc: string): string {
+  const at = doc.indexOf(`\n${LOAD_HEADING}`);
+  return at < 0 ? '' : doc.slice(at);
+}
+
+/** The document without its load section, ready for a new one. */
+export function withoutLoadSection(doc: string): string {
+  const at = doc.indexOf(`\n${LOAD_HEADING}`);
+  return (at < 0 ? doc : doc.slice(0, at)).trimEnd() + '\n';
+}
+
 const ms = (v: number) => (Number.isNaN(v) ? '–' : String(Math.round(v)));
 
 export function loadTable(
@@ -25,7 +39,7 @@ export function loadTable(
 ): string {
   const lines = [
     '',
-    '## Load: one embedded instance against server mode',
+    LOAD_HEADING,
     '',
     `Measured by \`npm run bench:load\` on ${new Date().toISOString().slice(0, 10)}, Node ${process.version}, ` +
       `loopback, on the shared 2-core machine (other work was running; figures are noisy). Each level runs ` +

@@ -10,7 +10,7 @@ import path from 'node:path';
 import { api, signIn, startInstance, stopInstance, waitUntilHealthy } from '../tests/instances/app-instance';
 import { killWorker, startWorker } from '../tests/server/worker-process';
 import { onServer, urlForDatabase } from '../tests/support/server-template';
-import { loadTable, percentile, type LoadRow } from './bench-load-table';
+import { loadTable, percentile, withoutLoadSection, type LoadRow } from './bench-load-table';
 
 const arg = (name: string, fallback: string) => {
   const i = process.argv.indexOf(`--${name}`);
@@ -165,8 +165,5 @@ if (!serverUrl) console.log('Server mode skipped: set KERFWISE_BENCH_DATABASE_UR
 const table = loadTable(rows, { seconds: SECONDS, tablets: TABLETS, officeClients: OFFICE_CLIENTS });
 console.log(table);
 const docs = 'docs/benchmarks.md';
-const current = readFileSync(docs, 'utf8');
-const marker = '\n## Load: one embedded instance against server mode';
-const kept = current.includes(marker) ? current.slice(0, current.indexOf(marker)) : current.trimEnd();
-writeFileSync(docs, `${kept}\n${table}`);
+writeFileSync(docs, `${withoutLoadSection(readFileSync(docs, 'utf8'))}${table}`);
 process.exit(0);
