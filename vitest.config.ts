@@ -1,5 +1,45 @@
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vitest/config';
+import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
+
+// The data-layer and API suites run twice: on embedded PGlite, and on a PostgreSQL server when
+// KERFWISE_TEST_DATABASE_URL names one (`.ci/run` starts a throwaway cluster and sets it).
+const serverSuites = [
+  'tests/api/**/*.test.ts',
+  'tests/frames-api/**/*.test.ts',
+  'tests/jobs/**/*.test.ts',
+  'tests/plans/**/*.test.ts',
+  'tests/quotes/quotes-api.test.ts',
+  'tests/saw/**/*.test.ts',
+  'tests/stock/**/*.test.ts',
+  'tests/server/**/*.test.ts',
+];
+const serverUrl = process.env.KERFWISE_TEST_DATABASE_URL;
+const snapshotSetup = 'tests/support/global-setup.ts';
+
+const projects: TestProjectInlineConfiguration[] = [
+  {
+    extends: true,
+    test: {
+      name: 'pglite',
+      include: ['tests/**/*.test.ts'],
+      exclude: ['tests/e2e/**', 'tests/server/**', 'tests/instances/**', 'node_modules/**'],
+      globalSetup: [snapshotSetup],
+    },
+  },
+];
+if (serverUrl) {
+  projects.push({
+    extends: true,
+    test: {
+      name: 'postgres',
+      include: serverSuites,
+      env: { KERFWISE_TEST_SERVER: '1' },
+      globalSetup: [snapshotSetup, 'tests/support/server-global-setup.ts'],
+    },
+  });
+} else {
+  console.log('PostgreSQL suites skipped: KERFWISE_TEST_DATABASE_URL is not set (.ci/run sets it).');
+}
 
 export default defineConfig({
   resolve: {
@@ -13,14 +53,12 @@ export default defineConfig({
     ],
   },
   test: {
-    include: ['tests/**/*.test.ts'],
-    exclude: ['tests/e2e/**', 'node_modules/**'],
     environment: 'node',
     testTimeout: 30_000,
     // The first file to need the demo yard seeds it for the whole run; on a busy machine that is slow.
     hookTimeout: 300_000,
     pool: 'forks',
     setupFiles: ['tests/support/setup.ts'],
-    globalSetup: ['tests/support/global-setup.ts'],
+    projects,
   },
 });

@@ -6,15 +6,19 @@ import { migrate } from 'drizzle-orm/pglite/migrator';
 import * as schema from './schema';
 import { acquireDataDirLock, realDataDir } from './data-dir-lock';
 
-export type Db = PgliteDatabase<typeof schema>;
-export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
-/** Either the database or an open transaction: data-access functions accept both. */
-export type DbOrTx = Db | Tx;
+export type { Db, DbOrTx, Tx } from './types';
+/** The embedded database with PGlite's own result types (backups and tests use them). */
+export type EmbeddedDb = PgliteDatabase<typeof schema>;
 
 export const migrationsFolder = path.resolve(/*turbopackIgnore: true*/ process.cwd(), 'drizzle');
 
-export function wrapClient(client: PGlite): Db {
+export function wrapClient(client: PGlite): EmbeddedDb {
   return drizzle({ client, schema });
+}
+
+/** Applies the migrations folder to an embedded database. */
+export async function migrateEmbedded(client: PGlite): Promise<void> {
+  await migrate(drizzle({ client, schema }), { migrationsFolder });
 }
 
 /**
@@ -26,6 +30,6 @@ export async function openDatabase(dir: string | null) {
   const release = dir ? acquireDataDirLock(dir) : () => {};
   const client = dir ? new PGlite(realDataDir(dir)) : new PGlite();
   const db = wrapClient(client);
-  await migrate(db, { migrationsFolder });
+  await migrateEmbedded(client);
   return { client, db, release };
 }

@@ -16,6 +16,10 @@ export type OffcutStatus = (typeof OFFCUT_STATUSES)[number];
 export const PLAN_STATUSES = ['planned', 'released', 'superseded', 'done'] as const;
 export type PlanStatus = (typeof PLAN_STATUSES)[number];
 
+/** A queued planning request: waiting for a worker, being solved, stored, given up on, or called off. */
+export const PLAN_RUN_STATUSES = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
+export type PlanRunStatus = (typeof PLAN_RUN_STATUSES)[number];
+
 export const BOARD_STATUSES = ['pending', 'done', 'defective'] as const;
 export type BoardStatus = (typeof BOARD_STATUSES)[number];
 

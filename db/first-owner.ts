@@ -1,11 +1,9 @@
 // Creates the first owner of a yard with no accounts yet: the production way in (no demo users).
 import { sql } from 'drizzle-orm';
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
 import { hashPassword } from '@/lib/auth/password';
 import { createUserBodySchema } from '@/lib/validations/users';
 import * as schema from './schema';
-
-type SetupDb = PgliteDatabase<typeof schema>;
+import type { Db } from './types';
 
 /** The yard name until the owner sets theirs on the settings page. */
 const NEW_YARD_NAME = 'My timber yard';
@@ -14,7 +12,7 @@ export type FirstOwnerResult = { created: true; email: string } | { created: fal
 
 /** Creates the owner (and the yard's settings row) when the database has no users; else does nothing. */
 export async function createFirstOwner(
-  db: SetupDb,
+  db: Db,
   input: { email: string; password: string; name?: string },
 ): Promise<FirstOwnerResult> {
   const parsed = createUserBodySchema.safeParse({ ...input, name: input.name ?? 'Owner', role: 'owner' });

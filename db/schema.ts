@@ -22,6 +22,7 @@ import {
   MOVEMENT_KINDS,
   OFFCUT_STATUSES,
   PAYMENT_KINDS,
+  PLAN_RUN_STATUSES,
   PLAN_STATUSES,
   REGIONS,
   ROLES,
@@ -256,6 +257,32 @@ export const plans = pgTable('plans', {
 });
 export type Plan = typeof plans.$inferSelect;
 export type NewPlan = typeof plans.$inferInsert;
+
+// A planning request handed to the solver workers (server mode). The worker stores the plan and
+// sets plan_id in one transaction, so a retried run never stores a second plan.
+export const planRuns = pgTable(
+  'plan_runs',
+  {
+    id: serial('id').primaryKey(),
+    jobId: integer('job_id')
+      .notNull()
+      .references(() => jobs.id, { onDelete: 'cascade' }),
+    status: text('status', { enum: PLAN_RUN_STATUSES }).notNull().default('queued'),
+    overrides: jsonb('overrides').notNull(),
+    sectionsTotal: integer('sections_total').notNull().default(0),
+    sectionsDone: integer('sections_done').notNull().default(0),
+    attempts: integer('attempts').notNull().default(0),
+    planId: integer('plan_id').references(() => plans.id, { onDelete: 'set null' }),
+    error: text('error'),
+    createdBy: integer('created_by')
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('plan_runs_job_idx').on(t.jobId)],
+);
+export type PlanRun = typeof planRuns.$inferSelect;
 
 // The boards of a plan in saw order: what the operator fetches, cuts and confirms.
 export const planBoards = pgTable(

@@ -4,6 +4,13 @@ import { z } from 'zod';
 
 const envSchema = z.object({
   KERFWISE_DATA_DIR: z.string().min(1).default('.data'),
+  // Set: a PostgreSQL server (several app instances and workers may share it). Unset: embedded PGlite.
+  DATABASE_URL: z.string().min(1).optional(),
+  // Server mode: how long a solver run may stay active before it counts as crashed and is retried,
+  // and how often the queue looks for such runs.
+  KERFWISE_PLAN_RUN_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(120),
+  KERFWISE_QUEUE_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
+  KERFWISE_DB_POOL_SIZE: z.coerce.number().int().min(1).max(100).default(10),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   NEXTAUTH_URL: z.string().url().optional(),
   KERFWISE_SMTP_HOST: z.string().default('127.0.0.1'),
@@ -39,4 +46,9 @@ export function getEnv(): Env {
 /** Absolute path of the embedded database folder. */
 export function dataDirPath(): string {
   return path.resolve(/*turbopackIgnore: true*/ process.cwd(), getEnv().KERFWISE_DATA_DIR);
+}
+
+/** The PostgreSQL server's URL, or null for the embedded database. */
+export function databaseUrl(): string | null {
+  return getEnv().DATABASE_URL ?? null;
 }

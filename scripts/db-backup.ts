@@ -5,8 +5,12 @@ import { openDatabase } from '../db/client';
 import { takeSnapshot, writeBackup } from '../db/backup';
 import { requestSnapshot } from '../db/backup-socket';
 import { dataDirHolder } from '../db/data-dir-lock';
-import { dataDirPath } from '../lib/env';
+import { databaseUrl, dataDirPath } from '../lib/env';
 
+if (databaseUrl()) {
+  console.error('Kerfwise: DATABASE_URL is set: use pg_dump on the PostgreSQL server (see docs/deploy.md).');
+  process.exit(1);
+}
 const file = process.argv[2];
 if (!file) {
   console.error('Usage: npm run db:backup -- FILE   (e.g. backups/kerfwise-2026-12-02.tar.gz)');

@@ -3,8 +3,14 @@
 import { readVerifiedBackup, restoreSnapshot } from '../db/backup';
 import { openDatabase } from '../db/client';
 import { acquireDataDirLock } from '../db/data-dir-lock';
-import { dataDirPath } from '../lib/env';
+import { databaseUrl, dataDirPath } from '../lib/env';
 
+if (databaseUrl()) {
+  console.error(
+    'Kerfwise: DATABASE_URL is set: use pg_restore on the PostgreSQL server (see docs/deploy.md).',
+  );
+  process.exit(1);
+}
 const file = process.argv[2];
 if (!file) {
   console.error('Usage: npm run db:restore -- FILE   (into an empty KERFWISE_DATA_DIR, server stopped)');

@@ -1,11 +1,25 @@
 // `npm run setup:owner -- EMAIL [NAME]`: creates the first owner of a yard with no accounts.
 // The password comes from KERFWISE_OWNER_PASSWORD or is asked for (kept out of the shell history).
-// Takes the data folder's lock, so run it with the server stopped; or set KERFWISE_OWNER_EMAIL and
+// Embedded, it takes the data folder's lock, so run it with the server stopped; with DATABASE_URL it
+// connects to the PostgreSQL server (servers may be running). Or set KERFWISE_OWNER_EMAIL and
 // KERFWISE_OWNER_PASSWORD for the server, which creates the owner itself at start.
 import { createInterface } from 'node:readline/promises';
 import { openDatabase } from '../db/client';
 import { createFirstOwner } from '../db/first-owner';
+import { openServerDatabase } from '../db/server-client';
+import type { Db } from '../db/types';
 import { dataDirPath, getEnv } from '../lib/env';
+
+/** The yard's database, whichever kind, and how to let go of it. */
+async function open(): Promise<{ db: Db; close: () => Promise<void> }> {
+  const url = getEnv().DATABASE_URL;
+  if (url) {
+    const { db, pool } = await openServerDatabase(url, { poolSize: 1 });
+    return { db, close: () => pool.end() };
+  }
+  const { db, client, release } = await openDatabase(dataDirPath());
+  return { db, close: async () => (await client.close(), release()) };
+}
 
 async function askPassword(): Promise<string> {
   const rl = createInterface({ input: process.stdin, output: process.stdout, terminal: true });
@@ -23,7 +37,7 @@ if (!email) {
 }
 let opened;
 try {
-  opened = await openDatabase(dataDirPath());
+  opened = await open();
 } catch (error) {
   console.error(`Kerfwise: ${(error as Error).message}`);
   process.exit(1);
@@ -42,6 +56,5 @@ try {
   console.error(`Kerfwise: ${(error as Error).message}`);
   process.exitCode = 1;
 } finally {
-  await opened.client.close();
-  opened.release();
+  await opened.close();
 }

@@ -7,7 +7,12 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { formatPence } from '@/components/plans/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
-import { createPlanRequest } from '@/lib/queries/plans';
+import {
+  cancelPlanRunRequest,
+  createPlanRequest,
+  describePlanRun,
+  type PlanRunView,
+} from '@/lib/queries/plans';
 
 /** Plan the job with the yard's settings, list its plans, and pick two to compare. */
 export function JobPlans({
@@ -21,6 +26,8 @@ export function JobPlans({
 }) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
+  // Server mode: the queued run being followed, so the page can show its progress and call it off.
+  const [run, setRun] = useState<PlanRunView | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [picked, setPicked] = useState<number[]>([]);
 
@@ -28,10 +35,11 @@ export function JobPlans({
     setBusy(true);
     setError(null);
     try {
-      const created = await createPlanRequest(jobId);
+      const created = await createPlanRequest(jobId, {}, setRun);
       router.push(`/plans/${created.id}`);
     } catch (e) {
       setError((e as Error).message);
+      setRun(null);
       setBusy(false);
     }
   }
@@ -41,9 +49,16 @@ export function JobPlans({
   return (
     <div className="space-y-4">
       {canPlan && (
-        <Button onClick={plan} disabled={busy} size="lg">
-          {busy ? 'Finding the best plan…' : 'Plan this job'}
-        </Button>
+        <div className="flex flex-wrap items-center gap-3">
+          <Button onClick={plan} disabled={busy} size="lg">
+            {busy ? (run ? describePlanRun(run) : 'Finding the best plan…') : 'Plan this job'}
+          </Button>
+          {busy && run && (run.status === 'queued' || run.status === 'running') && (
+            <Button variant="secondary" onClick={() => void cancelPlanRunRequest(run.runId)}>
+              Stop planning
+            </Button>
+          )}
+        </div>
       )}
       {error && <Notice tone="error">{error}</Notice>}
       {plans.length > 0 && (

@@ -1,10 +1,10 @@
 // Demo customers (invented): the demo jobs' customers with contact details and accounts. Any other
 // customer name on a seeded job becomes a plain retail record, as the migration does for real yards.
 import { sql } from 'drizzle-orm';
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type { Tx } from '../types';
 import * as schema from '../schema';
 
-type SeedTx = Parameters<Parameters<PgliteDatabase<typeof schema>['transaction']>[0]>[0];
+type SeedTx = Tx;
 
 export const demoYardDetails = {
   yardAddress: 'Unit 4, Wharf Road, Kelderby KD3 7QX',

@@ -1,7 +1,7 @@
 // Plans two of the demo jobs with the real cutting engine, and releases one to the saw, so the
 // saw queue and plan pages have something to show on a fresh yard.
 import { eq } from 'drizzle-orm';
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type { Db } from '../types';
 import { solve } from '@/solver';
 import { composePlan } from '@/lib/plans/compose-plan';
 import { insertPlan } from '@/lib/plans/insert-plan';
@@ -10,7 +10,7 @@ import type { PlanSettings } from '@/lib/plans/plan-shapes';
 import { releasePlanInTx } from '@/lib/plans/release-plan-in-tx';
 import * as schema from '../schema';
 
-type SeedDb = PgliteDatabase<typeof schema>;
+type SeedDb = Db;
 
 /** Job references to plan, and whether to release them to the saw. */
 const PLANNED = [

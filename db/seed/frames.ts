@@ -1,9 +1,9 @@
 // A demo frame schedule: an invented customer's lean-to, the kind of sketch yard hands are given.
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type { Db } from '../types';
 import { frameSchedulePanelSchema, type FrameSchedulePanelInput } from '@/lib/frames';
 import * as schema from '../schema';
 
-type SeedTx = Pick<PgliteDatabase<typeof schema>, 'insert'>;
+type SeedTx = Pick<Db, 'insert'>;
 
 /** Panels by section code; ids let the opening, door and cladding find their wall. */
 function leanToPanels(section: (code: string) => number): FrameSchedulePanelInput[] {

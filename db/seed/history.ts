@@ -3,7 +3,7 @@
 // Stock on hand ends equal to the sum of each stock length's movements.
 // Rows are built in memory with ids taken after the current maximum and inserted in bulk (seeding stays fast).
 import { eq, sql } from 'drizzle-orm';
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type { Tx } from '../types';
 import {
   offcutSourceId,
   pieceIdFor,
@@ -18,7 +18,7 @@ import { pastCustomers, pastJobKinds } from './history-jobs';
 import { summarisePlan } from '@/lib/plans/summarise-plan';
 import { boardPiecesOf, sourceOf } from './history-plan';
 
-type SeedTx = Parameters<Parameters<PgliteDatabase<typeof schema>['transaction']>[0]>[0];
+type SeedTx = Tx;
 type Offcut = typeof schema.offcuts.$inferInsert & { id: number; createdAt: Date };
 
 const DAY_MS = 86_400_000;
@@ -45,10 +45,8 @@ function groupBy<T, K>(list: T[], key: (item: T) => K): Map<K, T[]> {
 }
 
 async function maxId(tx: SeedTx, table: string): Promise<number> {
-  const { rows } = await tx.execute<{ n: number }>(
-    sql.raw(`select coalesce(max(id), 0)::int as n from ${table}`),
-  );
-  return rows[0].n;
+  const [row] = await tx.select({ n: sql<number>`coalesce(max(id), 0)::int` }).from(sql.raw(table));
+  return row.n;
 }
 
 export async function seedHistory(

@@ -1,6 +1,6 @@
 // Seeds the demo yard into an empty database. Does nothing when users already exist.
 import { sql } from 'drizzle-orm';
-import type { PgliteDatabase } from 'drizzle-orm/pglite';
+import type { Db } from '../types';
 import { hashPassword } from '@/lib/auth/password';
 import { seedDemoCustomers } from './customers';
 import * as schema from '../schema';
@@ -18,7 +18,7 @@ import {
 import { seedDemoFrameSchedules } from './frames';
 import { seedHistory } from './history';
 
-type SeedDb = PgliteDatabase<typeof schema>;
+type SeedDb = Db;
 const DAY_MS = 86_400_000;
 
 export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolean> {

@@ -1,9 +1,10 @@
 import 'server-only';
 import { and, eq, inArray, sql } from 'drizzle-orm';
-import { getDb, type Tx } from '@/db';
+import { getDb } from '@/db';
 import { jobItems, jobs, plans } from '@/db/schema';
 import { resolveJobCustomer } from '@/lib/customers/resolve-job-customer';
 import { AppError, notFound } from '@/lib/errors';
+import { nextJobReference } from '@/lib/jobs/next-job-reference';
 import { generateFrameItems } from '@/lib/frames';
 import type { SendScheduleToJobBody } from '@/lib/validations/frames';
 import { assertKnownSections } from './assert-known-sections';
@@ -12,14 +13,6 @@ import { getFrameScheduleById } from './frame-schedules';
 import { getYardFrameSections } from './get-yard-frame-sections';
 
 const OPEN_STATUSES = ['draft', 'planned'] as const;
-
-/** Next free "J-nnnn" reference after the highest one in use. */
-async function nextJobReference(tx: Tx): Promise<string> {
-  const [{ top }] = await tx
-    .select({ top: sql<number | null>`max(substring(${jobs.reference} from '^J-([0-9]+)$')::int)` })
-    .from(jobs);
-  return `J-${(top ?? 1000) + 1}`;
-}
 
 /**
  * Adds a schedule's cut list, summed by section, to a draft or planned job or to a new job, in one

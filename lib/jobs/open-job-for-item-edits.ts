@@ -9,7 +9,7 @@ import { AppError, notFound } from '@/lib/errors';
  * draft and its plans are superseded: they were made for the old list.
  */
 export async function openJobForItemEdits(tx: Tx, jobId: number) {
-  const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId));
+  const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId)).for('update');
   if (!job) throw notFound('That job');
   if (job.status === 'cancelled')
     throw new AppError('conflict', `Job ${job.reference} is cancelled; reopen it to change its cut list.`);

@@ -10,7 +10,7 @@ import type { UpdateJobBody } from '@/lib/validations/jobs';
 export async function updateJob({ jobId, body }: { jobId: number; body: UpdateJobBody }) {
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId));
+    const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId)).for('update');
     if (!job) throw notFound('That job');
     const changes: Partial<NewJob> = { updatedAt: new Date() };
     if (body.customerId !== undefined || body.newCustomer !== undefined || body.customer !== undefined) {

@@ -1,6 +1,7 @@
 import 'server-only';
 import { sql } from 'drizzle-orm';
 import { getDb } from '@/db';
+import { lockCounter } from '@/db/counter-lock';
 import { offcuts, sections, stockLengths, stockMovements } from '@/db/schema';
 import { parseOffcutRack, type ImportError } from '@/lib/cut-lists';
 import { AppError } from '@/lib/errors';
@@ -53,6 +54,8 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
         errors,
       });
     }
+    // Another instance issuing tags at the same moment would read the same maximum: wait for it.
+    await lockCounter(tx, 'offcut-tag');
     const [{ maxId }] = await tx
       .select({ maxId: sql<number>`coalesce(max(${offcuts.id}), 0)::int` })
       .from(offcuts);

@@ -14,7 +14,12 @@ export async function scrapOffcuts({ body, userId }: { body: ScrapOffcutsBody; u
   const db = await getDb();
   const ids = [...new Set(body.ids)];
   return db.transaction(async (tx) => {
-    const rows = await tx.select().from(offcuts).where(inArray(offcuts.id, ids));
+    const rows = await tx
+      .select()
+      .from(offcuts)
+      .where(inArray(offcuts.id, ids))
+      .orderBy(offcuts.id)
+      .for('update');
     const missing = ids.filter((id) => !rows.some((r) => r.id === id));
     if (missing.length > 0) throw new AppError('not_found', `No offcut with id ${missing.join(', ')}.`);
     const blocked = rows.filter((r) => r.status !== 'available');

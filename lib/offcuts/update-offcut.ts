@@ -16,7 +16,7 @@ export async function updateOffcutLocation({
 }) {
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [offcut] = await tx.select().from(offcuts).where(eq(offcuts.id, offcutId));
+    const [offcut] = await tx.select().from(offcuts).where(eq(offcuts.id, offcutId)).for('update');
     if (!offcut) throw notFound('That offcut');
     if (offcut.status === 'used' || offcut.status === 'scrapped') {
       throw new AppError('conflict', `Offcut ${offcut.tag} is ${offcut.status} and no longer on the rack.`);

@@ -1,5 +1,5 @@
 import 'server-only';
-import { getDb } from '@/db';
+import { getDb, type DbOrTx } from '@/db';
 import { AppError } from '@/lib/errors';
 import type { CreatePlanBody } from '@/lib/validations/plans';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
@@ -11,20 +11,15 @@ import type { PlanSettings } from './plan-shapes';
 import { runSolver } from './run-solver';
 
 const DEFAULT_TIME_LIMIT_MS = 2_000;
+export const PLANNABLE_JOB_STATUSES = ['draft', 'planned'];
 
-/** Plans a job section by section with the solver and stores the plan with its saw board list. */
-export async function createPlan({
-  jobId,
-  overrides,
-  userId,
-}: {
-  jobId: number;
-  overrides: CreatePlanBody;
-  userId: number;
-}) {
-  const db = await getDb();
+/** Everything a planning run needs, after checking the job can be planned now. */
+export async function preparePlanning(
+  db: DbOrTx,
+  { jobId, overrides }: { jobId: number; overrides: CreatePlanBody },
+) {
   const data = await loadPlanningData(db, jobId);
-  if (['released', 'cutting', 'done', 'cancelled'].includes(data.job.status)) {
+  if (!PLANNABLE_JOB_STATUSES.includes(data.job.status)) {
     throw new AppError(
       'conflict',
       `Job ${data.job.reference} is ${data.job.status}; only draft or planned jobs can be planned.`,
@@ -40,17 +35,27 @@ export async function createPlan({
     stockLengthIds: overrides.stockLengthIds ?? null,
     timeLimitMs: overrides.timeLimitMs ?? DEFAULT_TIME_LIMIT_MS,
   };
+  // A shortest kept offcut set for this plan overrides each section's own.
+  const planned =
+    overrides.minOffcutMm === undefined
+      ? data
+      : { ...data, sections: data.sections.map((s) => ({ ...s, minKeepMm: null })) };
+  return { data: planned, settings, perCutChargePence: yard.perCutChargePence };
+}
 
-  const plan = await composePlan({
-    // A shortest kept offcut set for this plan overrides each section's own.
-    data:
-      overrides.minOffcutMm === undefined
-        ? data
-        : { ...data, sections: data.sections.map((s) => ({ ...s, minKeepMm: null })) },
-    settings,
-    perCutChargePence: yard.perCutChargePence,
-    solve: runSolver,
-  });
+/** Plans a job section by section with the solver and stores the plan with its saw board list. */
+export async function createPlan({
+  jobId,
+  overrides,
+  userId,
+}: {
+  jobId: number;
+  overrides: CreatePlanBody;
+  userId: number;
+}) {
+  const db = await getDb();
+  const { data, settings, perCutChargePence } = await preparePlanning(db, { jobId, overrides });
+  const plan = await composePlan({ data, settings, perCutChargePence, solve: runSolver });
   const planId = await insertPlan(db, { jobId, settings, plan, userId });
   return getPlanById({ planId });
 }

@@ -5,9 +5,9 @@ import { jobs, offcuts, planBoards, plans, stockMovements } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
 
 export async function releasePlanInTx(tx: Tx, { planId, userId }: { planId: number; userId: number }) {
-  const [plan] = await tx.select().from(plans).where(eq(plans.id, planId));
+  const [plan] = await tx.select().from(plans).where(eq(plans.id, planId)).for('update');
   if (!plan) throw notFound('That plan');
-  const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId));
+  const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId)).for('update');
   if (plan.status !== 'planned' || !['draft', 'planned'].includes(job.status)) {
     throw new AppError(
       'conflict',
@@ -17,7 +17,12 @@ export async function releasePlanInTx(tx: Tx, { planId, userId }: { planId: numb
   const boards = await tx.select().from(planBoards).where(eq(planBoards.planId, planId));
   const offcutIds = boards.flatMap((b) => (b.offcutId ? [b.offcutId] : []));
   if (offcutIds.length) {
-    const rows = await tx.select().from(offcuts).where(inArray(offcuts.id, offcutIds));
+    const rows = await tx
+      .select()
+      .from(offcuts)
+      .where(inArray(offcuts.id, offcutIds))
+      .orderBy(offcuts.id)
+      .for('update');
     const taken = rows.filter((o) => o.status !== 'available');
     if (taken.length) {
       throw new AppError(

@@ -8,7 +8,7 @@ import { AppError, notFound } from '@/lib/errors';
 export async function unreleasePlan({ planId, userId }: { planId: number; userId: number }) {
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [plan] = await tx.select().from(plans).where(eq(plans.id, planId));
+    const [plan] = await tx.select().from(plans).where(eq(plans.id, planId)).for('update');
     if (!plan) throw notFound('That plan');
     if (plan.status !== 'released') throw new AppError('conflict', 'Only a released plan can be taken back.');
     const started = await tx
@@ -16,7 +16,7 @@ export async function unreleasePlan({ planId, userId }: { planId: number; userId
       .from(planBoards)
       .where(and(eq(planBoards.planId, planId), eq(planBoards.status, 'done')));
     if (started.length) throw new AppError('conflict', 'The saw has already cut boards of this plan.');
-    const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId));
+    const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId)).for('update');
     const reserved = await tx
       .update(offcuts)
       .set({ status: 'available', reservedByPlanId: null, updatedAt: new Date() })

@@ -45,8 +45,52 @@ export const planQuery = (planId: number) =>
 
 export type PlanOverrides = Partial<PlanSettings>;
 
-export const createPlanRequest = (jobId: number, overrides: PlanOverrides = {}) =>
-  fetchJson<PlanViewData>(`/api/jobs/${jobId}/plans`, { method: 'POST', body: JSON.stringify(overrides) });
+export type PlanRunView = {
+  runId: number;
+  jobId: number;
+  status: 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+  sectionsTotal: number;
+  sectionsDone: number;
+  planId: number | null;
+  error: string | null;
+};
+
+export const cancelPlanRunRequest = (runId: number) =>
+  fetchJson<PlanRunView>(`/api/plan-runs/${runId}`, { method: 'DELETE' });
+
+const RUN_POLL_MS = 1_000;
+
+/**
+ * Plans a job and resolves with the plan. The server answers with the plan itself (embedded) or with
+ * a run id (the solver workers took it); then this follows the run, reporting each state, until done.
+ */
+export async function createPlanRequest(
+  jobId: number,
+  overrides: PlanOverrides = {},
+  onProgress?: (run: PlanRunView) => void,
+): Promise<PlanViewData> {
+  const answer = await fetchJson<PlanViewData | { runId: number }>(`/api/jobs/${jobId}/plans`, {
+    method: 'POST',
+    body: JSON.stringify(overrides),
+  });
+  if (!('runId' in answer)) return answer;
+  for (;;) {
+    const run = await fetchJson<PlanRunView>(`/api/plan-runs/${answer.runId}`);
+    onProgress?.(run);
+    if (run.status === 'done' && run.planId) return fetchJson<PlanViewData>(`/api/plans/${run.planId}`);
+    if (run.status === 'failed') throw new Error(run.error ?? 'The cutting engine could not plan this job.');
+    if (run.status === 'cancelled') throw new Error('This planning run was cancelled.');
+    await new Promise((resolve) => setTimeout(resolve, RUN_POLL_MS));
+  }
+}
+
+/** Words for a run's state while the page waits. */
+export function describePlanRun(run: PlanRunView): string {
+  if (run.status === 'queued') return 'Waiting for a free solver…';
+  if (run.status === 'running')
+    return `Solving section ${Math.min(run.sectionsDone + 1, run.sectionsTotal)} of ${run.sectionsTotal}…`;
+  return run.status === 'done' ? 'Done, opening the plan…' : 'Stopped.';
+}
 
 export const releasePlanRequest = (planId: number, { override, confirmShortfall }: ReleasePlanBody = {}) =>
   fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, {

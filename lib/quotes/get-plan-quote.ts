@@ -2,6 +2,7 @@
 // An accepted quote is never re-priced; re-planning makes a new plan and so a new quote version.
 import { eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '@/db';
+import { lockCounter } from '@/db/counter-lock';
 import { quotes, type Quote } from '@/db/schema';
 import { loadQuoteInput } from './load-quote-input';
 import { priceQuote } from './price-quote';
@@ -14,22 +15,27 @@ export async function getPlanQuote(db: DbOrTx, { planId, now = new Date() }: { p
   if (existing) return existing;
   const { job, yard, input } = await loadQuoteInput(db, planId);
   const figures = priceQuote(input);
-  const [{ version }] = await db
-    .select({ version: sql<number>`coalesce(max(${quotes.version}), 0)::int + 1` })
-    .from(quotes)
-    .where(eq(quotes.jobId, job.id));
-  const [created] = await db
-    .insert(quotes)
-    .values({
-      planId,
-      jobId: job.id,
-      number: quoteNumber(job.reference, version),
-      version,
-      ...figures,
-      validUntil: new Date(now.getTime() + yard.quoteValidityDays * DAY_MS),
-    })
-    .onConflictDoNothing({ target: quotes.planId })
-    .returning();
+  // Versions count up per job; the counter lock keeps two instances from numbering two plans alike.
+  const created = await db.transaction(async (tx) => {
+    await lockCounter(tx, 'quote-number');
+    const [{ version }] = await tx
+      .select({ version: sql<number>`coalesce(max(${quotes.version}), 0)::int + 1` })
+      .from(quotes)
+      .where(eq(quotes.jobId, job.id));
+    const [row] = await tx
+      .insert(quotes)
+      .values({
+        planId,
+        jobId: job.id,
+        number: quoteNumber(job.reference, version),
+        version,
+        ...figures,
+        validUntil: new Date(now.getTime() + yard.quoteValidityDays * DAY_MS),
+      })
+      .onConflictDoNothing({ target: quotes.planId })
+      .returning();
+    return row;
+  });
   // Two first requests at once: the other one made it.
   return created ?? (await db.select().from(quotes).where(eq(quotes.planId, planId)))[0];
 }

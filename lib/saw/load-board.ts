@@ -5,9 +5,9 @@ import { jobs, planBoards, plans } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
 
 export async function loadPlanForSaw(tx: Tx, planId: number) {
-  const [plan] = await tx.select().from(plans).where(eq(plans.id, planId));
+  const [plan] = await tx.select().from(plans).where(eq(plans.id, planId)).for('update');
   if (!plan) throw notFound('That plan');
-  const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId));
+  const [job] = await tx.select().from(jobs).where(eq(jobs.id, plan.jobId)).for('update');
   return { plan, job };
 }
 

@@ -17,7 +17,11 @@ export async function takeStock({ body, userId }: { body: StocktakeBody; userId:
     const at = new Date();
     const movements = [];
     for (const { stockLengthId, counted } of body.counts) {
-      const [length] = await tx.select().from(stockLengths).where(eq(stockLengths.id, stockLengthId));
+      const [length] = await tx
+        .select()
+        .from(stockLengths)
+        .where(eq(stockLengths.id, stockLengthId))
+        .for('update');
       if (!length) throw notFound(`Stock length ${stockLengthId}`);
       const [{ total }] = await tx
         .select({ total: sql<number>`coalesce(sum(${stockMovements.quantityDelta}), 0)::int` })

@@ -48,7 +48,7 @@ export async function updateUser({ userId, changes }: { userId: number; changes:
   const db = await getDb();
   const passwordHash = changes.password ? await hashPassword(changes.password) : undefined;
   return db.transaction(async (tx) => {
-    const [user] = await tx.select().from(users).where(eq(users.id, userId));
+    const [user] = await tx.select().from(users).where(eq(users.id, userId)).for('update');
     if (!user) throw notFound('That user');
     const losesOwner =
       user.role === 'owner' &&

@@ -6,14 +6,14 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { readVerifiedBackup, restoreSnapshot, writeBackup } from '@/db/backup';
 import { requestSnapshot, serveBackups } from '@/db/backup-socket';
 import { setDbForTests } from '@/db';
-import { openDatabase, type Db } from '@/db/client';
+import { openDatabase, type EmbeddedDb } from '@/db/client';
 import { acquireDataDirLock } from '@/db/data-dir-lock';
 import * as schema from '@/db/schema';
 import { minimalYard } from '../support/minimal-yard';
 
 const root = mkdtempSync(path.join(tmpdir(), 'kerfwise-backup-'));
 /** Every row of every table the database has (the migrations' own table too), in a fixed order. */
-async function everyTable(db: Db): Promise<Record<string, unknown[]>> {
+async function everyTable(db: EmbeddedDb): Promise<Record<string, unknown[]>> {
   const { rows: tables } = await db.execute<{ name: string }>(sql`
     select format('%I.%I', table_schema, table_name) as name from information_schema.tables
     where table_type = 'BASE TABLE' and table_schema not in ('pg_catalog', 'information_schema')

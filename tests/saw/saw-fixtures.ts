@@ -94,6 +94,10 @@ export async function movementsOf(db: Db, planId: number) {
 }
 
 export async function releasedDemoPlanId(db: Db) {
-  const [plan] = await db.select().from(schema.plans).where(eq(schema.plans.status, 'released'));
+  const [plan] = await db
+    .select()
+    .from(schema.plans)
+    .where(eq(schema.plans.status, 'released'))
+    .orderBy(schema.plans.id);
   return plan.id;
 }

@@ -3,7 +3,6 @@
 // so new routes are fuzzed too. Run counts are modest to keep the suite quick.
 import { readdirSync } from 'node:fs';
 import path from 'node:path';
-import { sql } from 'drizzle-orm';
 import fc from 'fast-check';
 import { NextRequest } from 'next/server';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -119,7 +118,7 @@ beforeAll(async () => {
         `select '${name}' as t, coalesce(md5(string_agg(x::text, '|' order by x::text)), '') as h from "${name}" x`,
     )
     .join(' union all ');
-  digest = async () => JSON.stringify((await t.db.execute(sql.raw(query))).rows);
+  digest = async () => JSON.stringify((await t.client.query(query)).rows);
 });
 afterAll(async () => {
   await t.close();

@@ -106,5 +106,5 @@ describe('stock movement invariants', () => {
       .from(schema.stockLengths)
       .where(sql`${schema.stockLengths.onHand} < 0`);
     expect(negatives).toBe(0);
-  });
+  }, 120_000); // 15 random runs of many transactions each; on a busy server that takes a while
 });

@@ -8,8 +8,9 @@ import { inject } from 'vitest';
 import { migrationsFolder, wrapClient } from '@/db/client';
 import { seedDemoYard } from '@/db/seed';
 
-/** The demo yard is seeded as of this moment, so dated history and reports are the same every run. */
-export const DEMO_NOW = new Date('2026-11-20T09:00:00Z');
+import { DEMO_NOW } from './demo-now';
+
+export { DEMO_NOW };
 
 const builders = {
   /** All migrations applied, no rows: the base of a suite's own minimal fixture. */

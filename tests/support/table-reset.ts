@@ -1,6 +1,12 @@
 // Puts a database's rows back as they were, in milliseconds, so tests in one file can share one
-// PGlite instance (opening or cloning one takes seconds on this machine).
-import type { PGlite } from '@electric-sql/pglite';
+// database (opening or cloning one takes seconds on this machine). Works on PGlite and on a server.
+
+/** What both an embedded PGlite and a server pool offer for raw SQL. */
+export interface SqlClient {
+  query<T>(text: string, params?: unknown[]): Promise<{ rows: T[] }>;
+  /** Several statements in one string, no parameters. */
+  exec(text: string): Promise<unknown>;
+}
 
 const SAVED = 'test_saved_rows';
 const ident = (name: string) => `"${name.replace(/"/g, '""')}"`;
@@ -10,7 +16,7 @@ export interface SavedRows {
 }
 
 /** Copies every table of the public schema aside, with the sequences' positions. */
-export async function saveRows(client: PGlite): Promise<SavedRows> {
+export async function saveRows(client: SqlClient): Promise<SavedRows> {
   const tables = (
     await client.query<{ name: string }>(
       `select tablename as name from pg_tables where schemaname = 'public' order by tablename`,

@@ -1,41 +1,76 @@
-// In-memory databases for tests. Each test file opens one PGlite from a run-wide snapshot (the demo
+// Databases for tests. Each test file opens one database from a run-wide starting point (the demo
 // yard, or an empty migrated database plus the suite's own minimal fixture) and every test gets it
 // back with the rows reset, which is much faster than opening or cloning a database per test.
-import type { PGlite } from '@electric-sql/pglite';
+// Embedded: an in-memory PGlite from a snapshot. Server-mode project (KERFWISE_TEST_SERVER=1): a
+// database on the test PostgreSQL server, copied from a template database.
 import { setDbForTests } from '@/db';
 import { wrapClient, type Db } from '@/db/client';
+import { connectServer } from '@/db/server-client';
 import { openSnapshot } from './snapshots';
-import { saveRows, type SavedRows } from './table-reset';
+import { serverTestUrl, onServer, TEMPLATE_DBS, TEST_DB_PREFIX, urlForDatabase } from './server-template';
+import { saveRows, type SavedRows, type SqlClient } from './table-reset';
+
+export type { SqlClient };
 
 /** Builds a suite's own rows on an empty migrated database (through lib functions where they exist). */
 export type Fixture = (db: Db) => Promise<void>;
 
-interface SuiteDb {
+interface OpenedDb {
   db: Db;
-  client: PGlite;
+  client: SqlClient;
+  /** The server database's address (server mode only), for processes the test starts. */
+  url?: string;
+  end: () => Promise<void>;
+}
+
+interface SuiteDb extends OpenedDb {
   saved: SavedRows;
   inUse: boolean;
 }
 
 const suites = new Map<Fixture | 'demo', Promise<SuiteDb>>();
+let serverDbCount = 0;
+
+async function openEmbedded(start: 'demo' | 'migrated'): Promise<OpenedDb> {
+  const client = await openSnapshot(start);
+  return { db: wrapClient(client), client, end: () => client.close() };
+}
+
+async function openOnServer(serverUrl: string, start: 'demo' | 'migrated'): Promise<OpenedDb> {
+  const name = `${TEST_DB_PREFIX}${process.pid}_${++serverDbCount}`;
+  await onServer(serverUrl, [`create database ${name} template ${TEMPLATE_DBS[start]} strategy file_copy`]);
+  const url = urlForDatabase(serverUrl, name);
+  const { pool, db } = connectServer(url, 4);
+  const client: SqlClient = {
+    query: async <T>(text: string, params?: unknown[]) => ({
+      rows: (await pool.query(text, params)).rows as T[],
+    }),
+    exec: (text: string) => pool.query(text),
+  };
+  // The database itself is dropped with the rest when the run ends (see server-global-setup.ts).
+  return { db, client, url, end: () => pool.end() };
+}
 
 async function openSuiteDb(fixture: Fixture | 'demo'): Promise<SuiteDb> {
-  const client = await openSnapshot(fixture === 'demo' ? 'demo' : 'migrated');
-  const db = wrapClient(client);
+  const start = fixture === 'demo' ? 'demo' : 'migrated';
+  const serverUrl = serverTestUrl();
+  const opened = serverUrl ? await openOnServer(serverUrl, start) : await openEmbedded(start);
   if (fixture !== 'demo') {
-    setDbForTests(db); // lib functions reach the database through getDb()
+    setDbForTests(opened.db); // lib functions reach the database through getDb()
     try {
-      await fixture(db);
+      await fixture(opened.db);
     } finally {
       setDbForTests(undefined);
     }
   }
-  return { db, client, saved: await saveRows(client), inUse: false };
+  return { ...opened, saved: await saveRows(opened.client), inUse: false };
 }
 
 export interface TestDb {
   db: Db;
-  client: PGlite;
+  client: SqlClient;
+  /** The server database's address (server mode only), for processes the test starts. */
+  url?: string;
   /** Gives the database back: its rows are reset for the next test. */
   close: () => Promise<void>;
 }
@@ -54,6 +89,7 @@ export async function createTestDb({
   return {
     db: suite.db,
     client: suite.client,
+    url: suite.url,
     close: async () => {
       await suite.saved.restore();
       suite.inUse = false;
@@ -65,5 +101,5 @@ export async function createTestDb({
 export async function closeTemplate(): Promise<void> {
   const open = [...suites.values()];
   suites.clear();
-  for (const suite of open) await (await suite).client.close();
+  for (const suite of open) await (await suite).end();
 }

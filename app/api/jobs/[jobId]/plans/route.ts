@@ -1,9 +1,10 @@
-// POST /api/jobs/[jobId]/plans – plan a job with the cutting engine (optional setting overrides)
+// POST /api/jobs/[jobId]/plans – plan a job with the cutting engine (optional setting overrides):
+// 201 with the plan, or 202 with { runId } when the solver workers take it (server mode)
 import { NextResponse } from 'next/server';
 import { parseId, route } from '@/lib/api/route';
 import { AppError } from '@/lib/errors';
 import { getJobById } from '@/lib/jobs/get-job';
-import { createPlan } from '@/lib/plans/create-plan';
+import { planJob } from '@/lib/plans/queue/plan-job';
 import { createPlanBodySchema } from '@/lib/validations/plans';
 
 export const POST = route<{ jobId: string }>('plans:create', async ({ req, user, params }) => {
@@ -16,8 +17,9 @@ export const POST = route<{ jobId: string }>('plans:create', async ({ req, user,
     throw new AppError('invalid', 'The request body must be JSON.');
   }
   const overrides = createPlanBodySchema.parse(raw);
-  const plan = await createPlan({ jobId, overrides, userId: user.id });
-  return NextResponse.json(plan, { status: 201 });
+  const result = await planJob({ jobId, overrides, userId: user.id });
+  if (result.kind === 'queued') return NextResponse.json({ runId: result.runId }, { status: 202 });
+  return NextResponse.json(result.plan, { status: 201 });
 });
 
 // GET /api/jobs/[jobId]/plans – the job's plans, newest first
