@@ -54,6 +54,9 @@ export async function recordDefect(
       userId,
       at,
       reason: `Bad board (${reason}) for ${where}`,
+      // The operator is holding the bad board: it is there, whatever the count says (the owner is
+      // still flagged to recount when the count showed none).
+      boardThere: true,
     });
   }
   if (board.source === 'offcut' && board.offcutId) {
