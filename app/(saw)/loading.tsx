@@ -1,5 +1,0 @@
-import { PageLoading } from '@/components/layout/page-loading';
-
-export default function GroupLoading() {
-  return <PageLoading />;
-}
