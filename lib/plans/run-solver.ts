@@ -7,8 +7,11 @@ import { AppError } from '@/lib/errors';
 
 /** Loading the solver into a fresh thread; generous because a busy machine can be slow to start one. */
 const START_LIMIT_MS = 30_000;
-/** The solver stops itself at timeLimitMs; this only catches a stuck worker. */
-const GRACE_MS = 5_000;
+/**
+ * The solver stops itself at timeLimitMs; this only catches a stuck worker. Generous, because on a
+ * busy machine a cold thread's first integer model (HiGHS compiling as it runs) can overrun by seconds.
+ */
+const GRACE_MS = 15_000;
 
 /**
  * The worker file is found from the project folder, not from import.meta.url: under the bundler
