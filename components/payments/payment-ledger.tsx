@@ -1,19 +1,12 @@
 import { formatPence } from '@/lib/format/money';
 import type { PaymentsOverview } from '@/lib/quotes/get-payments-overview';
+import { PaymentsTableHead } from './payments-table-head';
 
 export function PaymentLedger({ rows }: { rows: PaymentsOverview['payments'] }) {
   if (!rows.length) return <p>No payments yet.</p>;
   return (
     <table className="w-full text-left text-sm" data-testid="payment-ledger">
-      <thead>
-        <tr>
-          {['When', 'Job', 'Customer', 'What', 'Amount', 'By', 'Note'].map((h) => (
-            <th key={h} className="py-1 pr-3 font-semibold">
-              {h}
-            </th>
-          ))}
-        </tr>
-      </thead>
+      <PaymentsTableHead columns={['When', 'Job', 'Customer', 'What', 'Amount', 'By', 'Note']} />
       <tbody>
         {rows.map((p) => (
           <tr key={p.id} className="border-t border-sand">

@@ -2,20 +2,15 @@ import { formatPence } from '@/lib/format/money';
 import type { PaymentsOverview } from '@/lib/quotes/get-payments-overview';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { formatCustomerDate } from '@/lib/format/customer-date';
+import { PaymentsTableHead } from './payments-table-head';
 
 export function QuoteStateTable({ rows }: { rows: PaymentsOverview['outstanding'] }) {
   if (!rows.length) return <p>None.</p>;
   return (
     <table className="w-full text-left text-sm">
-      <thead>
-        <tr>
-          {['Quote', 'Customer', 'State', 'Total', 'Paid', 'Balance', 'Valid until'].map((h) => (
-            <th key={h} className="py-1 pr-3 font-semibold">
-              {h}
-            </th>
-          ))}
-        </tr>
-      </thead>
+      <PaymentsTableHead
+        columns={['Quote', 'Customer', 'State', 'Total', 'Paid', 'Balance', 'Valid until']}
+      />
       <tbody>
         {rows.map((r) => (
           <tr key={r.quoteId} className="border-t border-sand">
