@@ -3,6 +3,8 @@ import { defineConfig, devices } from '@playwright/test';
 // Browser tests run against a production build on its own port with a fresh data folder.
 // PW_PORT lets several worktrees run their browser tests side by side.
 const PORT = Number(process.env.PW_PORT ?? 3107);
+// PW_SKIP_BUILD=1 reuses the last production build when only tests changed (never in CI).
+const SKIP_BUILD = process.env.PW_SKIP_BUILD === '1' && !process.env.CI;
 const baseURL = `http://127.0.0.1:${PORT}`;
 const dataDir = `.data-e2e-${PORT}`;
 // The mail catcher listens for SMTP 500 below the app's port (3141 → 2641) unless PW_SMTP_PORT says
@@ -61,7 +63,7 @@ export default defineConfig({
     {
       // The build must not open the data folder: a lock it left behind would refuse the server.
       command:
-        `rm -rf ${dataDir} ${dataDir}.lock && npx next build && ` +
+        `rm -rf ${dataDir} ${dataDir}.lock && ${SKIP_BUILD ? 'true' : 'npx next build'} && ` +
         `(test ! -e ${dataDir}.lock || (echo 'next build opened the data folder' >&2 && exit 1)) && ` +
         `npx next start -p ${PORT} -H 127.0.0.1`,
       url: `${baseURL}/api/health`,

@@ -38,7 +38,8 @@ if (serverUrl) {
     },
   });
 } else {
-  console.log('PostgreSQL suites skipped: KERFWISE_TEST_DATABASE_URL is not set (.ci/run sets it).');
+  // Said from a global setup: the config itself is loaded more than once, so a log here printed twice.
+  projects[0].test!.globalSetup = [snapshotSetup, 'tests/support/postgres-skipped-notice.ts'];
 }
 
 export default defineConfig({
