@@ -43,6 +43,8 @@ export type JobItemRow = {
   quantity: number;
   label: string;
   note: string;
+  /** Millimetres the piece may be cut short; 0: exact. */
+  toleranceMm: number;
   position: number;
 };
 
@@ -91,6 +93,9 @@ export type ItemBody = {
   quantity?: number;
   label?: string;
   note?: string;
+  /** Nominal without a figure: the section's tolerance, else the yard's. */
+  nominal?: boolean;
+  toleranceMm?: number | null;
 };
 
 export const addItemRequest = (jobId: number, body: ItemBody) =>

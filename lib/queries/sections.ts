@@ -5,6 +5,8 @@ export type SectionOption = {
   id: number;
   code: string;
   name: string;
+  /** Tolerance a line marked nominal gets: the section's own, else the yard's. */
+  nominalDefaultMm: number;
   stockLengths: { id: number; lengthMm: number; pricePence: number; onHand: number | null }[];
 };
 
@@ -26,6 +28,7 @@ export const sectionsQuery = () =>
             id: s.id,
             code: s.code,
             name: s.name,
+            nominalDefaultMm: s.nominalDefaultMm,
             stockLengths: s.lengths.filter((l) => l.active),
           })),
       ),

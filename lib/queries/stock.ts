@@ -25,6 +25,9 @@ export type SectionRow = {
   finishedWidthMm: number | null;
   moisture: MoistureState;
   minKeepMm: number | null;
+  /** How short a nominal piece may be; null: the yard's setting. */
+  nominalToleranceMm: number | null;
+  nominalDefaultMm: number;
   active: boolean;
   lengths: StockLengthRow[];
 };
@@ -38,7 +41,7 @@ export type MovementRow = {
   reason: string;
   userName: string | null;
 };
-export type SectionInput = Omit<SectionRow, 'id' | 'lengths'> & {
+export type SectionInput = Omit<SectionRow, 'id' | 'lengths' | 'nominalDefaultMm'> & {
   lengths: {
     id?: number;
     lengthMm: number;
