@@ -6,6 +6,8 @@ import { inputClass } from '@/components/ui/field';
 import { useDisplayUnit } from '@/components/units/display-unit';
 import type { ItemBody, JobItemRow } from '@/lib/queries/jobs';
 import type { SectionOption } from '@/lib/queries/sections';
+import { describeTolerance } from '@/lib/nominal/tolerance';
+import { FitFields } from './fit-fields';
 
 type Props = {
   item?: JobItemRow;
@@ -23,6 +25,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
   const [editing, setEditing] = useState(!item);
   const [busy, setBusy] = useState(false);
   const name = item ? `row ${item.position + 1}` : 'new row';
+  const [sectionId, setSectionId] = useState(item?.sectionId ?? defaultSectionId ?? sections[0]?.id);
 
   if (item && !editing) {
     return (
@@ -33,6 +36,9 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
           {suffix}
         </td>
         <td className="p-2 text-right tabular-nums">{item.quantity}</td>
+        <td className="p-2 text-sm" data-testid="item-fit">
+          {describeTolerance(item.toleranceMm)}
+        </td>
         <td className="p-2">{item.label}</td>
         <td className="p-2 text-sm text-bark-soft">{item.note}</td>
         <td className="no-print p-2 text-right whitespace-nowrap">
@@ -64,6 +70,8 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
     e.preventDefault();
     const form = e.currentTarget;
     const data = new FormData(form);
+    const nominal = data.get('fit') === 'nominal';
+    const toleranceText = String(data.get('toleranceMm') ?? '').trim();
     setBusy(true);
     try {
       await onSave({
@@ -72,6 +80,9 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
         quantity: Number(data.get('quantity')),
         label: String(data.get('label') ?? ''),
         note: String(data.get('note') ?? ''),
+        nominal,
+        // Exact sends 0; nominal with the box left empty takes the section's or the yard's figure.
+        toleranceMm: !nominal ? 0 : toleranceText === '' ? null : Number(toleranceText),
       });
       if (item) setEditing(false);
       else form.reset();
@@ -95,7 +106,8 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
           name="sectionId"
           aria-label={`Section, ${name}`}
           className={inputClass}
-          defaultValue={item?.sectionId ?? defaultSectionId ?? sections[0]?.id}
+          value={sectionId}
+          onChange={(e) => setSectionId(Number(e.target.value))}
         >
           {sections.map((s) => (
             <option key={s.id} value={s.id}>
@@ -126,6 +138,14 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
           max={10000}
           className={`${inputClass} w-24 text-right`}
           defaultValue={item?.quantity ?? 1}
+        />
+      </td>
+      <td className="p-2">
+        <FitFields
+          formId={formId}
+          name={name}
+          toleranceMm={item?.toleranceMm ?? 0}
+          nominalDefaultMm={sections.find((s) => s.id === sectionId)?.nominalDefaultMm ?? 0}
         />
       </td>
       <td className="p-2">
