@@ -116,11 +116,13 @@ function FullLengthStep({ board, unit }: { board: SawBoard; unit: Unit }) {
         className="rounded-lg border-2 border-spruce bg-spruce-light px-3 py-2"
         data-testid="full-length-step"
       >
-        <span className="block text-3xl font-bold text-bark">{FULL_LENGTH_WORDS[0].toUpperCase() + FULL_LENGTH_WORDS.slice(1)}</span>
+        <span className="block text-3xl font-bold text-bark">
+          {FULL_LENGTH_WORDS[0].toUpperCase() + FULL_LENGTH_WORDS.slice(1)}
+        </span>
         <span className="block text-xl font-semibold">
           {piece?.label || 'piece'} {sawLength(board.lengthMm, unit)}
-          {piece?.marks ? ` · ${piece.marks}` : ''}: check the board for splits and shakes, then hand it over as it
-          is.
+          {piece?.marks ? ` · ${piece.marks}` : ''}: check the board for splits and shakes, then hand it over
+          as it is.
         </span>
       </li>
     </ol>

@@ -92,7 +92,9 @@ export function CutSheetDocument({
                     <Text style={s.cell}>
                       {p.label || 'piece'}
                       {p.angle ? `\n${p.angle}` : ''}
-                      {p.cuts.some((c) => c !== p.lengthMm) ? `\nnominal, cut to ${cutRange(p.cuts, format)}` : ''}
+                      {p.cuts.some((c) => c !== p.lengthMm)
+                        ? `\nnominal, cut to ${cutRange(p.cuts, format)}`
+                        : ''}
                     </Text>
                     <Text style={s.num}>{format(p.lengthMm)}</Text>
                     <Text style={s.num}>× {p.count}</Text>

@@ -24,7 +24,14 @@ export function layOutBoard(board: BoardInput): BoardPart[] {
   const remainderStart = board.lengthMm - board.remainderMm;
   board.pieces.forEach((piece, index) => {
     const cut = piece.cutMm ?? piece.lengthMm;
-    parts.push({ kind: 'piece', startMm: at, lengthMm: cut, listedMm: piece.lengthMm, label: piece.label, index });
+    parts.push({
+      kind: 'piece',
+      startMm: at,
+      lengthMm: cut,
+      listedMm: piece.lengthMm,
+      label: piece.label,
+      index,
+    });
     at += cut;
     // The last piece needs no kerf when it ends at the board's end.
     const kerf = Math.min(board.kerfMm, Math.max(0, board.lengthMm - at));
