@@ -7,7 +7,7 @@ import { useDisplayUnit } from '@/components/units/display-unit';
 import type { ItemBody, JobItemRow } from '@/lib/queries/jobs';
 import type { SectionOption } from '@/lib/queries/sections';
 import { describeTolerance } from '@/lib/nominal/tolerance';
-import { FitFields } from './fit-fields';
+import { fitBody, FitFields, useFit } from './fit-fields';
 
 type Props = {
   item?: JobItemRow;
@@ -26,6 +26,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
   const [busy, setBusy] = useState(false);
   const name = item ? `row ${item.position + 1}` : 'new row';
   const [sectionId, setSectionId] = useState(item?.sectionId ?? defaultSectionId ?? sections[0]?.id);
+  const [fit, setFit] = useFit(item?.toleranceMm ?? 0);
 
   if (item && !editing) {
     return (
@@ -70,8 +71,6 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
     e.preventDefault();
     const form = e.currentTarget;
     const data = new FormData(form);
-    const nominal = data.get('fit') === 'nominal';
-    const toleranceText = String(data.get('toleranceMm') ?? '').trim();
     setBusy(true);
     try {
       await onSave({
@@ -80,9 +79,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
         quantity: Number(data.get('quantity')),
         label: String(data.get('label') ?? ''),
         note: String(data.get('note') ?? ''),
-        nominal,
-        // Exact sends 0; nominal with the box left empty takes the section's or the yard's figure.
-        toleranceMm: !nominal ? 0 : toleranceText === '' ? null : Number(toleranceText),
+        ...fitBody(fit),
       });
       if (item) setEditing(false);
       else form.reset();
@@ -142,9 +139,9 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
       </td>
       <td className="p-2">
         <FitFields
-          formId={formId}
           name={name}
-          toleranceMm={item?.toleranceMm ?? 0}
+          fit={fit}
+          onChange={setFit}
           nominalDefaultMm={sections.find((s) => s.id === sectionId)?.nominalDefaultMm ?? 0}
         />
       </td>

@@ -30,8 +30,14 @@ test.describe('nominal pieces and full lengths', () => {
 
     // The yard hand sets the studs nominal on the job page: the yard's 5 mm comes up, editable.
     await page.goto(`/jobs/${job.id}`);
-    await page.getByRole('button', { name: 'Edit row 2' }).click();
-    await page.getByLabel('Exact or nominal, row 2').selectOption('nominal');
+    // The add-a-row form appears once the table is live in the browser; edits before that are lost.
+    await expect(page.getByRole('button', { name: 'Add row' })).toBeVisible();
+    const fit = page.getByLabel('Exact or nominal, row 2');
+    await expect(async () => {
+      if (!(await fit.isVisible())) await page.getByRole('button', { name: 'Edit row 2' }).click();
+      await expect(fit).toBeVisible({ timeout: 2_000 });
+    }).toPass();
+    await fit.selectOption('nominal');
     await expect(page.getByLabel('Millimetres short allowed, row 2')).toHaveValue('5');
     await page.getByRole('button', { name: 'Save' }).click();
     const rows = page.getByTestId('item-row');

@@ -94,6 +94,16 @@ describe('line item tolerance: line > section > yard', () => {
     expect((await edit(id, { nominal: false })).json.item.toleranceMm).toBe(0);
   });
 
+  it('saves the whole row as the items table sends it', async () => {
+    const id = (await add({ sectionId: studs, length: 2400, label: 'stud' })).json.item.id as number;
+    const body = { sectionId: studs, length: '2400', quantity: 2, label: 'stud', note: '', nominal: true };
+    const res = await edit(id, { ...body, toleranceMm: 5 });
+    expect(res.status).toBe(200);
+    expect(res.json.item.toleranceMm).toBe(5);
+    expect((await edit(id, { ...body, nominal: false, toleranceMm: 0 })).json.item.toleranceMm).toBe(0);
+    expect((await edit(id, { ...body, toleranceMm: null })).json.item.toleranceMm).toBe(5);
+  });
+
   it('refuses a negative, fractional or too large tolerance with a 422 on the field, and saves nothing', async () => {
     for (const toleranceMm of [-1, 2.5, 51, '5']) {
       const res = await add({ sectionId: studs, length: 2400, nominal: true, toleranceMm });
