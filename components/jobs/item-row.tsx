@@ -30,7 +30,9 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
 
   if (item && !editing) {
     return (
-      <tr className="border-t border-shaving" data-testid="item-row">
+      // Keyed apart from the editing row: otherwise React reuses the Edit button as the Save button
+      // while the click is still being handled, and the browser submits the form at once.
+      <tr key="view" className="border-t border-shaving" data-testid="item-row">
         <td className="p-2">{item.sectionName}</td>
         <td className="p-2 text-right tabular-nums">
           {format(item.lengthMm)}
@@ -93,6 +95,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
   const formId = `item-form-${item?.id ?? 'new'}`;
   return (
     <tr
+      key="edit"
       className="border-t border-shaving bg-sawdust"
       data-testid={item ? 'item-row-editing' : 'new-item-row'}
     >
