@@ -1,7 +1,8 @@
 // `npm run worker`: a solver worker for server mode. Start as many as you like, on any machine that
 // reaches the database (DATABASE_URL). Each takes one planning run at a time from the queue.
+import { setPriority } from 'node:os';
 import { getDb } from '../db';
-import { databaseUrl } from '../lib/env';
+import { databaseUrl, getEnv } from '../lib/env';
 import { getPlanQueue } from '../lib/plans/queue/plan-queue';
 import { startPlanWorker } from '../lib/plans/queue/plan-worker';
 
@@ -10,6 +11,9 @@ if (!url) {
   console.error('Kerfwise worker: set DATABASE_URL. Embedded mode solves inside the app process.');
   process.exit(1);
 }
+
+// Before any solver thread starts: threads inherit the priority of the thread that creates them.
+setPriority(getEnv().KERFWISE_WORKER_NICE);
 
 const db = await getDb(); // migrates under the advisory lock, like the app instances
 const boss = await getPlanQueue(url, 'worker');
