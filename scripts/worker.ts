@@ -2,7 +2,10 @@
 // reaches the database (DATABASE_URL). Each takes one planning run at a time from the queue.
 import { setPriority } from 'node:os';
 import { getDb } from '../db';
-import { databaseUrl, getEnv } from '../lib/env';
+import { setDatabasePreparation } from '../db/server-db';
+import { databaseUrl } from '../db/env';
+import { getEnv } from '../lib/env';
+import { prepareYard } from '../lib/server/prepare-yard';
 import { getPlanQueue } from '../lib/plans/queue/plan-queue';
 import { startPlanWorker } from '../lib/plans/queue/plan-worker';
 
@@ -15,6 +18,7 @@ if (!url) {
 // Before any solver thread starts: threads inherit the priority of the thread that creates them.
 setPriority(getEnv().KERFWISE_WORKER_NICE);
 
+setDatabasePreparation(prepareYard); // a worker may be first on an empty database, like an instance
 const db = await getDb(); // migrates under the advisory lock, like the app instances
 const boss = await getPlanQueue(url, 'worker');
 
