@@ -35,7 +35,9 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
 
 export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit; nextCut: number }) {
   const len = (mm: number) => sawLength(mm, unit);
-  const from = board.source === 'offcut' ? 'the sawn end' : 'the squared end';
+  // New stock of only nominal pieces is not trimmed: its factory end is accepted.
+  const from =
+    board.source === 'offcut' ? 'the sawn end' : board.trimMm > 0 ? 'the squared end' : 'the factory end';
   if (board.fullLength) return <FullLengthStep board={board} unit={unit} />;
   return (
     <ol className="space-y-2" data-testid="cut-list">
