@@ -1,5 +1,5 @@
 // Runs the cutting engine off the request's event loop, in a small pool of long-lived worker threads
-// (loaded and warmed once per server process), with a hard deadline per solve. A thread that
+// (loaded once per server process and warmed while idle), with a hard deadline per solve. A thread that
 // crashes, or is stopped at its deadline, is dropped; the next solve starts a fresh one.
 import 'server-only';
 import path from 'node:path';

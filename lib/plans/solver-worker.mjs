@@ -1,14 +1,13 @@
-// A long-lived solver thread: it loads the cutting engine and HiGHS once, warms HiGHS up, then
-// solves one job at a time for as long as the server runs (lib/plans/run-solver.ts keeps the pool).
+// A long-lived solver thread: it loads the cutting engine and HiGHS once, then solves one job at a
+// time for as long as the server runs (lib/plans/run-solver.ts keeps the pool of these threads).
 // Plain JavaScript on purpose: Node loads it as is under `next dev`, `next start` and Vitest alike,
 // and tsx compiles the TypeScript solver on the fly (its cache makes later starts quick).
 import { parentPort } from 'node:worker_threads';
 import { tsImport } from 'tsx/esm/api';
 
 const { prepareSolver, solve } = await tsImport('../../solver/index.ts', import.meta.url);
-// The integer step (HiGHS, WebAssembly) loads once per thread, and a small built-in job warms it, so
-// no customer's plan pays for the slow first models; without HiGHS the heuristics still plan.
-await prepareSolver({ warmUp: true }).catch(() => undefined);
+// The integer step (HiGHS, WebAssembly) loads once per thread; without it the heuristics still plan.
+await prepareSolver().catch(() => undefined);
 
 parentPort?.on('message', (input) => {
   try {
@@ -19,3 +18,7 @@ parentPort?.on('message', (input) => {
 });
 // Jobs are sent once the thread says it is ready, so a solve's deadline never counts the start-up.
 parentPort?.postMessage({ ready: true });
+// HiGHS's first models in a thread are several times slower (WebAssembly optimises as it runs), so
+// a small built-in job warms it up in the first idle moment: a job already waiting goes first, and
+// no later plan pays for the cold start.
+setTimeout(() => void prepareSolver({ warmUp: true }).catch(() => undefined), 100);
