@@ -5,6 +5,7 @@ import 'server-only';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { SolveInput, SolvePlan } from '@/solver';
+import { getEnv } from '@/lib/env';
 import { AppError } from '@/lib/errors';
 
 /** Threads per server process: two solves at once on a small server; more wait their turn. */
@@ -99,7 +100,7 @@ function give(thread: SolverThread, job: Job): void {
 }
 
 function startThread(): void {
-  const worker = new Worker(solverWorkerPath);
+  const worker = new Worker(solverWorkerPath, { workerData: { nice: getEnv().KERFWISE_SOLVER_NICE } });
   pool.started++;
   const thread: SolverThread = { worker, ready: false, job: null, timer: null };
   pool.threads.push(thread);

@@ -2,8 +2,17 @@
 // time for as long as the server runs (lib/plans/run-solver.ts keeps the pool of these threads).
 // Plain JavaScript on purpose: Node loads it as is under `next dev`, `next start` and Vitest alike,
 // and tsx compiles the TypeScript solver on the fly (its cache makes later starts quick).
-import { parentPort } from 'node:worker_threads';
+import { setPriority } from 'node:os';
+import { parentPort, workerData } from 'node:worker_threads';
 import { tsImport } from 'tsx/esm/api';
+
+// This thread alone yields the CPU (Linux sets priority per thread): the server's own thread keeps
+// answering pages and the saw's polling while a plan is solved.
+try {
+  setPriority(workerData?.nice ?? 0);
+} catch {
+  // Not allowed to change it here: solve at the priority given.
+}
 
 const { prepareSolver, solve } = await tsImport('../../solver/index.ts', import.meta.url);
 // The integer step (HiGHS, WebAssembly) loads once per thread; without it the heuristics still plan.
