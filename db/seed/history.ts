@@ -16,6 +16,7 @@ import * as schema from '../schema';
 import { rackLocations, seededRandom } from './demo-yard';
 import { pastCustomers, pastJobKinds } from './history-jobs';
 import { summarisePlan } from '@/lib/plans/summarise-plan';
+import { formatOffcutTag } from '@/lib/offcuts/offcut-tag';
 import { boardPiecesOf, sourceOf } from './history-plan';
 
 type SeedTx = Tx;
@@ -203,7 +204,8 @@ export async function seedHistory(
           newOffcutId = ++next.offcut;
           const made: Offcut = {
             id: newOffcutId,
-            tag: `H-${String(rows.offcuts.length + 1).padStart(4, '0')}`,
+            // The same tag format as at the saw, numbered on from the opening rack.
+            tag: formatOffcutTag(newOffcutId),
             sectionId,
             lengthMm: board.remainder,
             location: board.remainder < 600 ? 'Short bin' : pick(rackLocations.slice(0, 7)),
