@@ -6,7 +6,7 @@ import * as schema from '../schema';
 type SeedTx = Pick<Db, 'insert'>;
 
 /** Panels by section code; ids let the opening, door and cladding find their wall. */
-function leanToPanels(section: (code: string) => number): FrameSchedulePanelInput[] {
+export function leanToPanels(section: (code: string) => number): FrameSchedulePanelInput[] {
   const stud = section('T47100');
   return [
     {
