@@ -1,4 +1,5 @@
 import type { PanelLayout } from '@/lib/frames';
+import { labelSizes, placeDrawingLabels } from '@/lib/frames/place-labels';
 
 const MARGIN = 400; // mm around the drawing for dimension lines
 
@@ -6,11 +7,14 @@ const MARGIN = 400; // mm around the drawing for dimension lines
 export function PanelElevation({ layout, className }: { layout: PanelLayout; className?: string }) {
   const { minX, minY, maxX, maxY } = layout.bounds;
   const flip = (y: number) => maxY - y;
-  const viewBox = `${minX - MARGIN} ${-MARGIN} ${maxX - minX + 2 * MARGIN} ${maxY - minY + 2 * MARGIN}`;
-  // Text grows with the drawing so marks stay readable when a large panel is drawn small.
-  const extent = Math.max(maxX - minX, maxY - minY);
-  const markSize = Math.max(60, extent / 32);
-  const dimensionSize = Math.max(70, extent / 24);
+  // Every mark and dimension placed clear of the others, so no two labels overlap.
+  const labels = placeDrawingLabels(layout, labelSizes(layout.bounds));
+  const boxes = [...labels.marks, ...labels.dimensions];
+  const left = Math.min(minX - MARGIN, ...boxes.map((b) => b.x - b.width / 2));
+  const right = Math.max(maxX + MARGIN, ...boxes.map((b) => b.x + b.width / 2));
+  const top = Math.min(-MARGIN, ...boxes.map((b) => flip(b.y) - b.height / 2));
+  const bottom = Math.max(maxY - minY + MARGIN, ...boxes.map((b) => flip(b.y) + b.height / 2));
+  const viewBox = `${left} ${top} ${right - left} ${bottom - top}`;
   return (
     <svg viewBox={viewBox} className={className} role="img" aria-label={`${layout.title} (${layout.view})`}>
       {layout.shapes.map((shape, k) => (
@@ -25,16 +29,6 @@ export function PanelElevation({ layout, className }: { layout: PanelLayout; cla
           <title>{shape.mark ? `${shape.mark} ${shape.label}` : shape.label}</title>
         </polygon>
       ))}
-      {layout.shapes.map((shape, k) => {
-        if (!shape.mark) return null;
-        const cx = shape.points.reduce((s, p) => s + p.x, 0) / shape.points.length;
-        const cy = shape.points.reduce((s, p) => s + flip(p.y), 0) / shape.points.length;
-        return (
-          <text key={`m${k}`} x={cx} y={cy} fontSize={markSize} textAnchor="middle" dominantBaseline="middle">
-            {shape.mark}
-          </text>
-        );
-      })}
       {layout.dimensions.map((d, k) => {
         const len = Math.hypot(d.to.x - d.from.x, d.to.y - d.from.y) || 1;
         // Shift square to the measured line, towards the left of from → to.
@@ -42,22 +36,35 @@ export function PanelElevation({ layout, className }: { layout: PanelLayout; cla
         const ny = (d.to.x - d.from.x) / len;
         const [x1, y1] = [d.from.x + nx * d.offset, flip(d.from.y + ny * d.offset)];
         const [x2, y2] = [d.to.x + nx * d.offset, flip(d.to.y + ny * d.offset)];
-        return (
-          <g key={`d${k}`} stroke="#1d4ed8" strokeWidth={4}>
-            <line x1={x1} y1={y1} x2={x2} y2={y2} />
-            <text
-              x={(x1 + x2) / 2}
-              y={(y1 + y2) / 2 - 20}
-              fontSize={dimensionSize}
-              textAnchor="middle"
-              fill="#1d4ed8"
-              stroke="none"
-            >
-              {d.text}
-            </text>
-          </g>
-        );
+        return <line key={`d${k}`} x1={x1} y1={y1} x2={x2} y2={y2} stroke="#1d4ed8" strokeWidth={4} />;
       })}
+      {labels.dimensions.map((label, k) => (
+        <text
+          key={`dt${k}`}
+          data-label="dimension"
+          x={label.x}
+          y={flip(label.y)}
+          fontSize={label.size}
+          textAnchor="middle"
+          dominantBaseline="central"
+          fill="#1d4ed8"
+        >
+          {label.text}
+        </text>
+      ))}
+      {labels.marks.map((label) => (
+        <text
+          key={`m${label.shapeIndex}`}
+          data-label="mark"
+          x={label.x}
+          y={flip(label.y)}
+          fontSize={label.size}
+          textAnchor="middle"
+          dominantBaseline="central"
+        >
+          {label.text}
+        </text>
+      ))}
     </svg>
   );
 }

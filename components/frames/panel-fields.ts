@@ -53,6 +53,22 @@ const studFraming: FieldSpec[] = [
     ],
   },
   { key: 'nogginRows', label: 'Noggin rows', type: 'number' },
+  {
+    key: 'startWallId',
+    label: 'Start fits against',
+    type: 'panel',
+    of: ['wall', 'sloped_wall'],
+    optional: true,
+    hint: 'The wall this one fits inside at its start corner: framing shortened by that wall’s depth',
+  },
+  {
+    key: 'endWallId',
+    label: 'End fits against',
+    type: 'panel',
+    of: ['wall', 'sloped_wall'],
+    optional: true,
+    hint: 'The same at the far corner; blank where this wall runs past it',
+  },
 ];
 
 export const PANEL_FIELDS: Record<PanelKind, FieldSpec[]> = {

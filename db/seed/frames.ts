@@ -6,7 +6,7 @@ import * as schema from '../schema';
 type SeedTx = Pick<Db, 'insert'>;
 
 /** Panels by section code; ids let the opening, door and cladding find their wall. */
-function leanToPanels(section: (code: string) => number): FrameSchedulePanelInput[] {
+export function leanToPanels(section: (code: string) => number): FrameSchedulePanelInput[] {
   const stud = section('T47100');
   return [
     {
@@ -34,20 +34,26 @@ function leanToPanels(section: (code: string) => number): FrameSchedulePanelInpu
       id: 'left',
       name: 'left side',
       sectionId: stud,
+      // Outside depth of the lean-to; the side is framed between the front and back walls.
       length: 1500,
       lowHeight: 1900,
       highHeight: 2200,
       centres: 400,
+      startWallId: 'front',
+      endWallId: 'back',
     },
     {
       kind: 'sloped_wall',
       id: 'right',
       name: 'right side',
       sectionId: stud,
+      // Outside depth of the lean-to; the side is framed between the front and back walls.
       length: 1500,
       lowHeight: 1900,
       highHeight: 2200,
       centres: 400,
+      startWallId: 'front',
+      endWallId: 'back',
     },
     {
       kind: 'opening',
@@ -84,6 +90,14 @@ function leanToPanels(section: (code: string) => number): FrameSchedulePanelInpu
       name: 'front cladding',
       sectionId: section('SHP19125'),
       wallId: 'front',
+      cover: 110,
+    },
+    {
+      kind: 'cladding',
+      id: 'clad-right',
+      name: 'right side cladding',
+      sectionId: section('SHP19125'),
+      wallId: 'right',
       cover: 110,
     },
   ];

@@ -58,6 +58,29 @@ export const pastJobKinds: { notes: string; lines: Line[] }[] = [
       { code: 'B25038', lengths: [2400, 1800], min: 6, max: 10, label: 'counter batten' },
     ],
   },
+  // Small counter jobs, the everyday trade of a yard: a few lengths cut while the customer waits.
+  {
+    notes: 'Fence repair: a couple of rails and a post.',
+    lines: [
+      { code: 'T47100', lengths: [1830, 2400], min: 2, max: 4, label: 'rail' },
+      { code: 'T75100', lengths: [1800, 2400], min: 1, max: 2, label: 'post' },
+    ],
+  },
+  {
+    notes: 'Shed floor bearers.',
+    lines: [{ code: 'T47075', lengths: [1800, 2400, 1200], min: 3, max: 6, label: 'bearer' }],
+  },
+  {
+    notes: 'Window boards and trims.',
+    lines: [{ code: 'P18094', lengths: [1200, 900, 1050], min: 2, max: 5, label: 'window board' }],
+  },
+  {
+    notes: 'Log store frame.',
+    lines: [
+      { code: 'T47075', lengths: [1200, 1500], min: 4, max: 6, label: 'upright' },
+      { code: 'B25038', lengths: [1000, 900], min: 6, max: 10, label: 'slat' },
+    ],
+  },
 ];
 
 export const pastCustomers = [
@@ -73,4 +96,10 @@ export const pastCustomers = [
   'Petra Colebrook',
   'Holloway Loft Conversions',
   'Dominic Fairbairn',
+  'Brackenfield Joinery',
+  'Sunita Okafor',
+  'Meadowcroft Lettings',
+  'Tomasz Wierzbicki',
+  'Ashgrove Garden Services',
+  'Frances Linnell',
 ];

@@ -16,6 +16,7 @@ import * as schema from '../schema';
 import { rackLocations, seededRandom } from './demo-yard';
 import { pastCustomers, pastJobKinds } from './history-jobs';
 import { summarisePlan } from '@/lib/plans/summarise-plan';
+import { formatOffcutTag } from '@/lib/offcuts/offcut-tag';
 import { boardPiecesOf, sourceOf } from './history-plan';
 
 type SeedTx = Tx;
@@ -24,7 +25,6 @@ type Offcut = typeof schema.offcuts.$inferInsert & { id: number; createdAt: Date
 const DAY_MS = 86_400_000;
 const HOUR_MS = 3_600_000;
 const HISTORY_DAYS = 112;
-const PAST_JOBS = 24;
 const SETTINGS: PlanSettings = {
   kerfMm: 3,
   trimMm: 15,
@@ -47,6 +47,34 @@ function groupBy<T, K>(list: T[], key: (item: T) => K): Map<K, T[]> {
 async function maxId(tx: SeedTx, table: string): Promise<number> {
   const [row] = await tx.select({ n: sql<number>`coalesce(max(id), 0)::int` }).from(sql.raw(table));
   return row.n;
+}
+
+/**
+ * When the past jobs were planned and cut: the yard's week, as a small yard works it. Monday to
+ * Friday most days bring a cut job and some two (more on a Friday, before weekend work); Saturday is
+ * a morning, with a job some weeks; Sunday the yard is shut. Invented, like all demo data.
+ */
+function yardWeek(start: Date, days: number, random: () => number) {
+  const jobs: { plannedAt: Date; doneAt: Date }[] = [];
+  for (let d = 0; d < days - 1; d++) {
+    const day = new Date(start.getTime() + d * DAY_MS);
+    day.setUTCHours(0, 0, 0, 0);
+    const weekday = day.getUTCDay();
+    if (weekday === 0) continue;
+    const count =
+      weekday === 6
+        ? Number(random() < 0.5)
+        : Number(random() < 0.8) + Number(random() < (weekday === 5 ? 0.5 : 0.2));
+    // Saturday 8–12; weekdays 8–17: taken in the morning or after lunch, cut within a few hours.
+    const [open, hours] = weekday === 6 ? [8, 2] : [8, 6];
+    for (let k = 0; k < count; k++) {
+      const at = open + (k * hours) / Math.max(count, 1) + random() * (hours / 2);
+      const plannedAt = new Date(day.getTime() + Math.round(at * 60) * 60_000);
+      const doneAt = new Date(plannedAt.getTime() + (weekday === 6 ? 1.5 : 2 + random() * 2) * HOUR_MS);
+      jobs.push({ plannedAt, doneAt });
+    }
+  }
+  return jobs;
 }
 
 export async function seedHistory(
@@ -109,13 +137,9 @@ export async function seedHistory(
   ).map((o) => ({ ...o }));
   const preexisting = new Set(rack.map((o) => o.id));
 
-  for (let j = 0; j < PAST_JOBS; j++) {
-    const plannedAt = new Date(
-      start.getTime() + Math.round(((j + 0.5) * (HISTORY_DAYS - 3) * DAY_MS) / PAST_JOBS) + 9 * HOUR_MS,
-    );
-    // The yard is shut on Sundays: a job that would fall on one is cut on the Monday.
-    if (plannedAt.getUTCDay() === 0) plannedAt.setTime(plannedAt.getTime() + DAY_MS);
-    const doneAt = new Date(plannedAt.getTime() + 5 * HOUR_MS);
+  const workingDays = yardWeek(start, HISTORY_DAYS, random);
+  for (let j = 0; j < workingDays.length; j++) {
+    const { plannedAt, doneAt } = workingDays[j];
     const kind = pick(pastJobKinds);
 
     // A delivery first thing that morning tops up whatever runs low.
@@ -124,7 +148,7 @@ export async function seedHistory(
       const l = lengthById.get(id)!;
       onHand.set(id, count + DELIVERY_SIZE);
       rows.movements.push({
-        at: new Date(plannedAt.getTime() - 2 * HOUR_MS),
+        at: new Date(new Date(plannedAt).setUTCHours(7, 30, 0, 0)),
         kind: 'receipt',
         userId: userIds.hand,
         sectionId: l.sectionId,
@@ -137,7 +161,8 @@ export async function seedHistory(
     }
 
     const jobId = ++next.job;
-    const reference = `J-0${901 + j}`;
+    // Numbered up to the open jobs (J-1001 onwards), oldest first.
+    const reference = `J-${String(1001 - workingDays.length + j).padStart(4, '0')}`;
     rows.jobs.push({
       id: jobId,
       reference,
@@ -203,7 +228,8 @@ export async function seedHistory(
           newOffcutId = ++next.offcut;
           const made: Offcut = {
             id: newOffcutId,
-            tag: `H-${String(rows.offcuts.length + 1).padStart(4, '0')}`,
+            // The same tag format as at the saw, numbered on from the opening rack.
+            tag: formatOffcutTag(newOffcutId),
             sectionId,
             lengthMm: board.remainder,
             location: board.remainder < 600 ? 'Short bin' : pick(rackLocations.slice(0, 7)),

@@ -2,6 +2,7 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from '../types';
 import { hashPassword } from '@/lib/auth/password';
+import { formatOffcutTag } from '@/lib/offcuts/offcut-tag';
 import { seedDemoCustomers } from './customers';
 import * as schema from '../schema';
 import { seedDemoPlans } from './demo-plans';
@@ -74,7 +75,7 @@ export async function seedDemoYard(db: SeedDb, now = new Date()): Promise<boolea
       const lengthMm = 300 + Math.round((random() * 2600) / 10) * 10;
       const createdAt = new Date(now.getTime() - ageDays * DAY_MS);
       return {
-        tag: `R-${String(i + 1).padStart(4, '0')}`,
+        tag: formatOffcutTag(i + 1),
         sectionId: sectionIds.get(s.code)!,
         lengthMm,
         location: lengthMm < 600 ? 'Short bin' : rackLocations[Math.floor(random() * 7)],

@@ -32,6 +32,16 @@ export function findGeometryIssues(panels: FrameSchedulePanel[]): GeometryIssue[
             'centres',
             `Stud centres (${panel.centres} mm) are larger than the wall length (${panel.length} mm)`,
           );
+        for (const field of ['startWallId', 'endWallId'] as const) {
+          const id = panel[field];
+          if (id === undefined) continue;
+          const other = byId.get(id);
+          if (id === panel.id) add(i, field, 'A wall cannot fit against itself');
+          else if (!other || !isStudWall(other))
+            add(i, field, `No wall or sloped wall panel has the id "${id}"`);
+        }
+        if (panel.startWallId !== undefined && panel.startWallId === panel.endWallId)
+          add(i, 'endWallId', 'The wall cannot meet the same wall at both ends');
         return;
       case 'opening': {
         const wall = byId.get(panel.wallId);

@@ -18,7 +18,8 @@ export { sumItemsBySection, type FrameLineItem } from './sum-items-by-section';
 export { getMemberCentres } from './stud-layout';
 export { getRoofGeometry, type RoofGeometry } from './roof-frame';
 export { getDoorLeafGeometry, type DoorBrace, type DoorLeafGeometry } from './door-leaf';
-export { getJointPositions } from './cladding';
+export { getCourseBands, getJointPositions } from './cladding';
+export { getFramedWall, type FramedWall } from './fit-between';
 export { getWallHeightAt } from './wall-height';
 export type {
   FrameContext,

@@ -1,6 +1,7 @@
 import { buildSchedulePieces } from './build-schedule-pieces';
 import { rectangle } from './geometry';
 import { groupPieces } from './group-pieces';
+import { getFramedWall } from './fit-between';
 import { FRAME_STRUCTURE_NOTICE } from './notice';
 import type { FrameSchedulePanel } from './panel-schemas';
 import { getRoofGeometry } from './roof-frame';
@@ -52,13 +53,14 @@ export function layoutPanel(
   let view: PanelLayout['view'] = 'elevation';
 
   if (isStudWall(panel)) {
-    const L = panel.length;
+    // Drawn as framed: from its framed start, between its end walls where it fits between them.
+    const { wall, openings } = getFramedWall(panel, panels, ctx);
+    const L = wall.length;
     dimensions.push(dimension({ x: 0, y: 0 }, { x: L, y: 0 }, -250));
-    dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: getWallHeightAt(panel, 0) }, 250));
-    if (panel.kind === 'sloped_wall')
-      dimensions.push(dimension({ x: L, y: 0 }, { x: L, y: getWallHeightAt(panel, L) }, -250));
-    for (const o of panels) {
-      if (o.kind !== 'opening' || panel.id === undefined || o.wallId !== panel.id) continue;
+    dimensions.push(dimension({ x: 0, y: 0 }, { x: 0, y: getWallHeightAt(wall, 0) }, 250));
+    if (wall.kind === 'sloped_wall')
+      dimensions.push(dimension({ x: L, y: 0 }, { x: L, y: getWallHeightAt(wall, L) }, -250));
+    for (const { panel: o } of openings) {
       const top = o.sillHeight + o.height;
       shapes.push({
         mark: null,

@@ -37,6 +37,9 @@ const studFraming = {
   // Left out: the region's habit, a single head plate in the UK and a double top plate in North America.
   topPlate: z.enum(['single', 'double'], { error: 'Top plate must be single or double' }).optional(),
   nogginRows: count('Noggin rows', 0, 5).default(0),
+  // At a corner the wall may fit between its neighbours: its framing is shortened by their depth.
+  startWallId: z.string().min(1).max(40).optional(),
+  endWallId: z.string().min(1).max(40).optional(),
 };
 
 export const wallPanelSchema = z.object({

@@ -1,4 +1,5 @@
 import { parallelCutBlank, rectangle, roundAngle, toDegrees } from './geometry';
+import { getFramedWall } from './fit-between';
 import type { FrameSchedulePanel, OpeningPanel, StudWallPanel } from './panel-schemas';
 import { piece, type PanelBuild } from './panel-build';
 import { getMemberCentres } from './stud-layout';
@@ -19,7 +20,8 @@ export function buildStudWallFrame(
   wallIndex: number,
   ctx: FrameContext,
 ): PanelBuild {
-  const wall = panels[wallIndex] as StudWallPanel;
+  // Framed between its end walls where it meets them at corners; openings measured from there.
+  const { wall, openings, fit } = getFramedWall(panels[wallIndex] as StudWallPanel, panels, ctx);
   const warnings: string[] = [];
   const section = ctx.sections.get(wall.sectionId);
   if (!section)
@@ -73,13 +75,6 @@ export function buildStudWallFrame(
     return true;
   };
 
-  const openings = panels
-    .map((panel, index) => ({ panel, index }))
-    .filter(
-      (o): o is { panel: OpeningPanel; index: number } =>
-        o.panel.kind === 'opening' && wall.id !== undefined && o.panel.wallId === wall.id,
-    );
-
   // Plates: the bottom plate is left out across a door's clear width.
   if (wall.bottomPlate) {
     const doors = openings
@@ -98,6 +93,7 @@ export function buildStudWallFrame(
             label: `${wall.name} ${pieceName(ctx, 'bottom plate')}`,
             sectionId: wall.sectionId,
             length: gap.start - from,
+            note: fit,
             outline: rectangle(from, 0, gap.start, t),
           }),
         );
@@ -120,7 +116,7 @@ export function buildStudWallFrame(
         sectionId: wall.sectionId,
         length,
         angle: topAngle,
-        note: topAngle ? 'plumb cut both ends' : undefined,
+        note: [topAngle ? 'plumb cut both ends' : undefined, fit].filter(Boolean).join('; ') || undefined,
         outline,
       }),
     );

@@ -1,10 +1,10 @@
 import 'server-only';
 import { sql } from 'drizzle-orm';
 import { getDb } from '@/db';
-import { lockCounter } from '@/db/counter-lock';
 import { offcuts, sections, stockLengths, stockMovements } from '@/db/schema';
 import { parseOffcutRack, type ImportError } from '@/lib/cut-lists';
 import { AppError } from '@/lib/errors';
+import { issueOffcutTags } from './issue-offcut-tags';
 
 /** The most offcuts one rack list may hold (a yard's whole rack is far smaller). */
 export const MAX_RACK_IMPORT_ROWS = 20_000;
@@ -54,24 +54,12 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
         errors,
       });
     }
-    // Another instance issuing tags at the same moment would read the same maximum: wait for it.
-    await lockCounter(tx, 'offcut-tag');
-    const [{ maxId }] = await tx
-      .select({ maxId: sql<number>`coalesce(max(${offcuts.id}), 0)::int` })
-      .from(offcuts);
-    // Issued tags skip every tag on the rack or in the file, so they can never clash.
-    const used = new Set([...onRack, ...given]);
-    let next = maxId;
-    const issueTag = () => {
-      let tag: string;
-      do tag = `K-${String(++next).padStart(5, '0')}`;
-      while (used.has(tag));
-      used.add(tag);
-      return tag;
-    };
+    // Offcuts without a code get tags in Kerfwise's one format; the file's own codes are kept as given.
+    const untagged = parsed.items.filter((i) => !i.tag).length;
+    const issued = (await issueOffcutTags(tx, untagged, given)).values();
     const now = new Date();
     const rows = parsed.items.map((i) => ({
-      tag: i.tag ?? issueTag(),
+      tag: i.tag ?? issued.next().value!,
       sectionId: Number(i.sectionId),
       lengthMm: i.length,
       location: i.location,

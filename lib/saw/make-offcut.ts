@@ -1,7 +1,7 @@
 // A kept remainder (or the sound part of a bad board) tagged and put on the rack.
 import type { Tx } from '@/db';
 import { offcuts, stockMovements } from '@/db/schema';
-import { nextOffcutTag } from './next-offcut-tag';
+import { issueOffcutTag } from '@/lib/offcuts/issue-offcut-tags';
 
 /** Where a new offcut waits until someone racks it; the label screen can change it. */
 export const DEFAULT_OFFCUT_LOCATION = 'Rack intake';
@@ -19,7 +19,7 @@ export async function makeOffcut(
     at: Date;
   },
 ) {
-  const tag = await nextOffcutTag(tx);
+  const tag = await issueOffcutTag(tx);
   const [offcut] = await tx
     .insert(offcuts)
     .values({

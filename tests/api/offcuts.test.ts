@@ -144,7 +144,7 @@ describe('changing the rack', () => {
     const bad = await call(importRack, {
       method: 'POST',
       body: {
-        csv: 'section,length,location,tag\nT47100,900,Rack C1,\nNo such timber,abc,Rack C1,\nT47100,1200,Rack C1,R-0001\n',
+        csv: 'section,length,location,tag\nT47100,900,Rack C1,\nNo such timber,abc,Rack C1,\nT47100,1200,Rack C1,K-0001\n',
       },
     });
     expect(bad.status).toBe(422);
@@ -152,11 +152,11 @@ describe('changing the rack', () => {
     // A tag already on the rack is refused by line too.
     const clash = await call(importRack, {
       method: 'POST',
-      body: { csv: 'section,length,location,tag\nT47100,1200,Rack C1,R-0001\n' },
+      body: { csv: 'section,length,location,tag\nT47100,1200,Rack C1,K-0001\n' },
     });
     expect(clash.status).toBe(422);
     expect(clash.json.details.errors).toEqual([
-      { line: 2, column: 'tag', message: 'Tag "R-0001" is already on the rack.' },
+      { line: 2, column: 'tag', message: 'Tag "K-0001" is already on the rack.' },
     ]);
     const good = await call(importRack, {
       method: 'POST',
@@ -165,6 +165,24 @@ describe('changing the rack', () => {
     expect(good.status).toBe(201);
     expect(good.json.imported).toBe(2);
     expect(good.json.tags[1]).toBe('OLD-7');
+  });
+
+  it('tags offcuts imported without a code in the one format, and keeps a yard’s own codes exactly', async () => {
+    actAs(AS.hand);
+    const highest = Math.max(
+      ...(await t.db.select({ tag: schema.offcuts.tag }).from(schema.offcuts)).map((o) =>
+        Number(/^K-(\d+)$/.exec(o.tag)?.[1] ?? 0),
+      ),
+    );
+    const res = await call(importRack, {
+      method: 'POST',
+      body: {
+        csv: 'section,length,location,tag\nT47100,900,Rack C1,\nT47100,950,Rack C1,bay3_old-7\nT47100,1000,Rack C1,\n',
+      },
+    });
+    expect(res.status, JSON.stringify(res.json)).toBe(201);
+    const next = (n: number) => `K-${String(n).padStart(4, '0')}`;
+    expect(res.json.tags).toEqual([next(highest + 1), 'bay3_old-7', next(highest + 2)]);
   });
 
   it('exports the rack as CSV that the import reads back', async () => {

@@ -50,6 +50,18 @@ describe('seeded yard history', () => {
     expect(sundays).toEqual([]);
   });
 
+  it('has a small yard’s week: a few cut jobs most weekdays, Saturday mornings only', async () => {
+    // The demo history is invented; this checks its rhythm, not a reference figure.
+    const plans = await db.select().from(schema.plans).where(eq(schema.plans.status, 'done'));
+    const days = plans.map((p) => p.createdAt.getTime());
+    const weeks = (Math.max(...days) - Math.min(...days)) / (7 * 86_400_000);
+    expect(plans.length / weeks).toBeGreaterThanOrEqual(4);
+    expect(plans.length / weeks).toBeLessThanOrEqual(10);
+    const saturdays = plans.filter((p) => p.createdAt.getUTCDay() === 6);
+    expect(saturdays.length).toBeGreaterThan(0);
+    expect(saturdays.every((p) => p.createdAt.getUTCHours() < 12)).toBe(true);
+  });
+
   it('every kept remainder of a cut board became a rack offcut with an offcut_made movement', async () => {
     const cut = and(eq(schema.planBoards.keepRemainder, true), eq(schema.planBoards.status, 'done'));
     const [{ kept }] = await db

@@ -59,6 +59,13 @@ describe('schema and demo seed on in-memory PGlite', () => {
     expect(n).toBe(3);
   });
 
+  it('tags every demo offcut, opening rack and history alike, in the one format Kerfwise issues', async () => {
+    const tags = (await db.select({ tag: schema.offcuts.tag }).from(schema.offcuts)).map((o) => o.tag);
+    expect(tags.length).toBeGreaterThan(42);
+    for (const tag of tags) expect(tag).toMatch(/^K-\d{4,}$/);
+    expect(new Set(tags).size).toBe(tags.length);
+  });
+
   it('enforces unique offcut tags', async () => {
     const [first] = await db.select().from(schema.offcuts).limit(1);
     await expect(

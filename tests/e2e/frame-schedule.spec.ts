@@ -152,3 +152,43 @@ test('a saw operator cannot open frame schedules or use their API', async ({ pag
     (await page.request.post('/api/frames/preview', { data: { unit: 'mm', panels: [] } })).status(),
   ).toBe(403);
 });
+
+test('no two labels overlap on the demo lean-to drawings, at desktop and tablet size', async ({ page }) => {
+  await signIn(page, DEMO.hand);
+  const { schedules } = (await (await page.request.get('/api/frames')).json()) as {
+    schedules: { id: number; name: string }[];
+  };
+  const demo = schedules.find((s) => s.name === 'Lean-to for Ines Marwood')!;
+  for (const size of [
+    { name: 'desktop', width: 1280, height: 900 },
+    { name: 'tablet', width: 768, height: 1024 },
+  ]) {
+    await page.setViewportSize(size);
+    await page.goto(`/frames/${demo.id}`);
+    await expect(page.getByTestId('structure-notice')).toContainText('does not size structure');
+    await expect(page.getByTestId('preview-state')).toHaveText('Up to date');
+    const drawings = page.locator('[data-testid^="panel-card-"] svg[role="img"]');
+    await expect(drawings).toHaveCount(8); // every panel of the lean-to but the opening, drawn on its wall
+    let labels = 0;
+    for (const drawing of await drawings.all()) {
+      // Each label's box as the browser drew it, in screen pixels.
+      const boxes = await drawing.locator('text[data-label]').evaluateAll((texts) =>
+        texts.map((t) => {
+          const r = t.getBoundingClientRect();
+          return { text: t.textContent, left: r.left, right: r.right, top: r.top, bottom: r.bottom };
+        }),
+      );
+      labels += boxes.length;
+      const clashes: string[] = [];
+      boxes.forEach((a, i) =>
+        boxes.slice(i + 1).forEach((b) => {
+          const apart = a.right <= b.left || b.right <= a.left || a.bottom <= b.top || b.bottom <= a.top;
+          if (!apart) clashes.push(`${a.text} × ${b.text}`);
+        }),
+      );
+      expect(clashes, (await drawing.getAttribute('aria-label')) ?? '').toEqual([]);
+    }
+    expect(labels).toBeGreaterThan(100);
+    await page.screenshot({ path: `test-results/screens/frame-labels-${size.name}.png`, fullPage: true });
+  }
+});

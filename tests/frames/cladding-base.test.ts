@@ -38,12 +38,13 @@ describe('cladding', () => {
     ]);
     const { items, warnings } = generateFrameItems(panels, { sections });
     const boards = items.filter((i) => i.label.startsWith('clad board'));
-    // Joint at the stud centre 4800 (within 4800 of the start); the top course is ripped, so listed apart.
+    // Joint at the stud centre 4800 (within 4800 of the start); the two edge courses are ripped, so listed apart.
     const perLength = (length: number) =>
       boards.filter((b) => b.length === length).reduce((n, b) => n + b.quantity, 0);
     expect(new Set(boards.map((b) => b.length))).toEqual(new Set([1200, 4800]));
     expect([perLength(1200), perLength(4800)]).toEqual([Math.ceil(1000 / 110), Math.ceil(1000 / 110)]);
-    expect(boards.some((b) => b.note?.includes('rip to 10 mm cover'))).toBe(true);
+    // 10 courses of 110 cover 1100: the 100 mm over is taken off both edge boards, 60 mm each.
+    expect(boards.some((b) => b.note?.includes('rip to 60 mm cover'))).toBe(true);
     expect(warnings.some((w) => w.includes('jointed at 4800'))).toBe(true);
     expect(getJointPositions(10_000, 4800)).toEqual([10_000 / 3, 20_000 / 3]);
   });

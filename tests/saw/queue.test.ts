@@ -53,9 +53,9 @@ describe('GET /api/saw/queue', () => {
 describe('offcuts at the saw', () => {
   it('finds an offcut by its tag in any case, and records where it is racked', async () => {
     actAs(AS.saw);
-    const found = await call(findOffcut, { url: 'http://test.local/api/saw/offcuts?tag=r-0001' });
+    const found = await call(findOffcut, { url: 'http://test.local/api/saw/offcuts?tag=k-0001' });
     expect(found.status).toBe(200);
-    expect(found.json.offcut.tag).toBe('R-0001');
+    expect(found.json.offcut.tag).toBe('K-0001');
     expect((await call(findOffcut, { url: 'http://test.local/api/saw/offcuts?tag=NOPE' })).status).toBe(404);
     expect((await call(findOffcut, { url: 'http://test.local/api/saw/offcuts' })).status).toBe(422);
 
