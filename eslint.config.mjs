@@ -15,7 +15,8 @@ export default defineConfig([
     '.data*/**',
   ]),
   // Layers (DESIGN.md, Architecture): solver/ is a library of its own; lib/ never reaches into React
-  // components or routes; and no module may import itself back through others.
+  // components or routes; db/ imports nothing from the app; and no module may import itself back
+  // through others.
   {
     files: ['**/*.{ts,tsx,mjs}'],
     // Packages are never parsed for cycles (slow, and some do not parse at all).
@@ -41,6 +42,22 @@ export default defineConfig([
             {
               group: ['@/components/*', '@/app/*', '**/components/*', '**/app/*'],
               message: 'lib/ does not import components or routes: move the shared code into lib/.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    files: ['db/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['@/lib/*', '@/components/*', '@/app/*', '**/lib/*', '**/components/*', '**/app/*'],
+              message: 'db/ is the bottom layer: lib/ calls it, never the other way round.',
             },
           ],
         },

@@ -4,7 +4,7 @@ import { readdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '../db/client';
 import { acquireDataDirLock, realDataDir } from '../db/data-dir-lock';
-import { seedDemoYard } from '../db/seed';
+import { seedDemoYard } from '../lib/demo-yard';
 import { dataDirPath } from '../db/env';
 
 const dir = dataDirPath();

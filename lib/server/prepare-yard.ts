@@ -1,8 +1,8 @@
 // What a server start puts into a freshly opened database, as asked by the environment:
 // the demo yard with KERFWISE_DEMO=1 (empty database only), the first owner from KERFWISE_OWNER_*.
 import type { Db } from '@/db/types';
-import { seedDemoYard } from '@/db/seed';
-import { DEMO_PASSWORD } from '@/db/seed/demo-yard';
+import { seedDemoYard } from '@/lib/demo-yard';
+import { DEMO_PASSWORD } from '@/lib/demo-yard/demo-yard';
 import { createFirstOwner } from '@/lib/users/first-owner';
 import { getEnv } from '@/lib/env';
 

@@ -3,7 +3,7 @@ import { inArray, sql } from 'drizzle-orm';
 import type { PgTable } from 'drizzle-orm/pg-core';
 import type { Db } from '@/db';
 import * as schema from '@/db/schema';
-import { seedDemoYard } from '@/db/seed';
+import { seedDemoYard } from '@/lib/demo-yard';
 import { verifyPassword } from '@/lib/auth/password';
 import { closeTemplate, createTestDb } from '../support/test-db';
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { leanToPanels } from '@/db/seed/frames';
-import { demoSections } from '@/db/seed/demo-yard';
+import { leanToPanels } from '@/lib/demo-yard/frames';
+import { demoSections } from '@/lib/demo-yard/demo-yard';
 import { frameSchedulePanelSchema, layoutPanel, type SectionDimensions } from '@/lib/frames';
 import { boxesOverlap, labelSizes, placeDrawingLabels, type PlacedLabel } from '@/lib/frames/place-labels';
 import { parsePanels, sections as testSections } from './helpers';

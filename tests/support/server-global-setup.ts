@@ -2,7 +2,7 @@
 // and drops every per-file database at the end.
 import pg from 'pg';
 import { openServerDatabase } from '@/db/server-client';
-import { seedDemoYard } from '@/db/seed';
+import { seedDemoYard } from '@/lib/demo-yard';
 import { DEMO_NOW } from './demo-now';
 import { onServer, TEMPLATE_DBS, TEST_DB_PREFIX, urlForDatabase } from './server-template';
 

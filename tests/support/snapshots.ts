@@ -6,7 +6,7 @@ import { PGlite } from '@electric-sql/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
 import { inject } from 'vitest';
 import { migrationsFolder, wrapClient } from '@/db/client';
-import { seedDemoYard } from '@/db/seed';
+import { seedDemoYard } from '@/lib/demo-yard';
 
 import { DEMO_NOW } from './demo-now';
 

@@ -1,7 +1,7 @@
 // A demo frame schedule: an invented customer's lean-to, the kind of sketch yard hands are given.
-import type { Db } from '../types';
+import type { Db } from '@/db/types';
 import { frameSchedulePanelSchema, type FrameSchedulePanelInput } from '@/lib/frames';
-import * as schema from '../schema';
+import * as schema from '@/db/schema';
 
 type SeedTx = Pick<Db, 'insert'>;
 

@@ -1,14 +1,14 @@
 // Plans two of the demo jobs with the real cutting engine, and releases one to the saw, so the
 // saw queue and plan pages have something to show on a fresh yard.
 import { eq } from 'drizzle-orm';
-import type { Db } from '../types';
+import type { Db } from '@/db/types';
 import { solve } from '@/solver';
 import { composePlan } from '@/lib/plans/compose-plan';
 import { insertPlan } from '@/lib/plans/insert-plan';
 import { loadPlanningData } from '@/lib/plans/load-planning-data';
 import type { PlanSettings } from '@/lib/plans/plan-shapes';
 import { releasePlanInTx } from '@/lib/plans/release-plan-in-tx';
-import * as schema from '../schema';
+import * as schema from '@/db/schema';
 
 type SeedDb = Db;
 

@@ -3,7 +3,7 @@
 // Stock on hand ends equal to the sum of each stock length's movements.
 // Rows are built in memory with ids taken after the current maximum and inserted in bulk (seeding stays fast).
 import { eq, sql } from 'drizzle-orm';
-import type { Tx } from '../types';
+import type { Tx } from '@/db/types';
 import {
   offcutSourceId,
   pieceIdFor,
@@ -12,7 +12,7 @@ import {
   type PlanSettings,
 } from '@/lib/plans/plan-shapes';
 import { solve, type SolveInput } from '@/solver';
-import * as schema from '../schema';
+import * as schema from '@/db/schema';
 import { rackLocations, seededRandom } from './demo-yard';
 import { pastCustomers, pastJobKinds } from './history-jobs';
 import { summarisePlan } from '@/lib/plans/summarise-plan';

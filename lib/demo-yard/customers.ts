@@ -1,8 +1,8 @@
 // Demo customers (invented): the demo jobs' customers with contact details and accounts. Any other
 // customer name on a seeded job becomes a plain retail record, as the migration does for real yards.
 import { sql } from 'drizzle-orm';
-import type { Tx } from '../types';
-import * as schema from '../schema';
+import type { Tx } from '@/db/types';
+import * as schema from '@/db/schema';
 
 type SeedTx = Tx;
 

@@ -1,10 +1,10 @@
 // Seeds the demo yard into an empty database. Does nothing when users already exist.
 import { sql } from 'drizzle-orm';
-import type { Db } from '../types';
+import type { Db } from '@/db/types';
 import { hashPassword } from '@/lib/auth/password';
 import { formatOffcutTag } from '@/lib/offcuts/offcut-tag';
 import { seedDemoCustomers } from './customers';
-import * as schema from '../schema';
+import * as schema from '@/db/schema';
 import { seedDemoPlans } from './demo-plans';
 import {
   DEMO_PASSWORD,

@@ -1,6 +1,6 @@
 // The demo yard: an invented timber merchant, its products, rack and customers.
 // None of these figures is a reference value; they only make the demo look like a working yard.
-import type { Role } from '../schema';
+import type { Role } from '@/db/schema';
 
 export const DEMO_PASSWORD = 'kerfwise';
 
