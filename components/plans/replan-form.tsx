@@ -9,13 +9,13 @@ import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { createPlanRequest, type PlanViewData } from '@/lib/queries/plans';
-import { sectionsQuery } from '@/lib/queries/sections';
+import { sectionOptionsQuery } from '@/lib/queries/sections';
 
 /** Plan the job again with other settings; the new plan opens beside a link to compare with this one. */
 export function ReplanForm({ plan }: { plan: PlanViewData }) {
   const router = useRouter();
   const fmt = useFormatLength();
-  const sections = useQuery(sectionsQuery());
+  const sections = useQuery(sectionOptionsQuery());
   const [busy, setBusy] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const planSections = (sections.data ?? []).filter((s) => plan.sections.some((p) => p.sectionId === s.id));

@@ -3,13 +3,13 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useMutation } from '@tanstack/react-query';
-import { moveOffcutRequest } from '@/lib/queries/saw';
+import { moveOffcutsRequest } from '@/lib/queries/offcuts';
 
 export function RackLocationForm({ offcutId, location }: { offcutId: number; location: string }) {
   const router = useRouter();
   const [value, setValue] = useState(location);
   const move = useMutation({
-    mutationFn: () => moveOffcutRequest(offcutId, value.trim()),
+    mutationFn: () => moveOffcutsRequest([offcutId], value.trim()),
     onSuccess: () => router.refresh(),
   });
   return (

@@ -1,10 +1,11 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
 import { ROLES, type Role } from '@/db/enums';
+import { userKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { updateUserRequest, type UserRow as User } from '@/lib/queries/users';
 import { ROLE_NAMES } from './role-names';
 
@@ -13,18 +14,17 @@ type Changes = Parameters<typeof updateUserRequest>[1];
 type Pending = { changes: Changes; question: string; yes: string; saved: string };
 
 export function UserRow({ user, onError }: { user: User; onError: (message: string | null) => void }) {
-  const queryClient = useQueryClient();
   const [password, setPassword] = useState('');
   const [pending, setPending] = useState<Pending | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
-  const update = useMutation({
+  const update = useApiMutation({
     mutationFn: ({ changes }: { changes: Changes; saved: string }) => updateUserRequest(user.id, changes),
+    invalidates: [userKeys.all],
     onSuccess: (_, { saved }) => {
       onError(null);
       setPassword('');
       setPending(null);
       setSaved(saved);
-      return queryClient.invalidateQueries({ queryKey: ['users'] });
     },
     onError: (error) => onError(error.message),
   });
