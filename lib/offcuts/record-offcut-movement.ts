@@ -3,9 +3,9 @@ import type { Tx } from '@/db';
 import { stockMovements, type NewStockMovement } from '@/db/schema';
 import type { MovementKind } from '@/db/enums';
 
-type OffcutKind = Extract<MovementKind, `offcut_${string}`>;
+/** A movement of one offcut: made, imported, reserved, used, moved, scrapped, or a board taken back. */
 export type OffcutMovement = Omit<NewStockMovement, 'id' | 'kind' | 'offcutId' | 'quantityDelta'> & {
-  kind: OffcutKind;
+  kind: MovementKind;
   offcutId: number;
 };
 
