@@ -2,13 +2,13 @@
 // Change where a new offcut is racked before printing its label (screen only, never printed).
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { useMutation } from '@tanstack/react-query';
 import { moveOffcutsRequest } from '@/lib/queries/offcuts';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 export function RackLocationForm({ offcutId, location }: { offcutId: number; location: string }) {
   const router = useRouter();
   const [value, setValue] = useState(location);
-  const move = useMutation({
+  const move = useApiMutation({
     mutationFn: () => moveOffcutsRequest([offcutId], value.trim()),
     onSuccess: () => router.refresh(),
   });
