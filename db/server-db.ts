@@ -3,28 +3,38 @@
 // This is the one module that chooses the driver: a PostgreSQL server when DATABASE_URL is set,
 // embedded PGlite otherwise. Nothing else knows which one is in use.
 import type { PGlite } from '@electric-sql/pglite';
-import { dataDirPath, getEnv } from '@/lib/env';
 import { openDatabase } from './client';
-import { prepareYard } from './prepare-yard';
+import { dataDirPath, databaseEnv } from './env';
 import { openServerDatabase } from './server-client';
 import type { Db } from './types';
 
 /** `client` is the embedded database (for backups), or null on a PostgreSQL server. */
 export type ServerDb = { db: Db; client: PGlite | null };
-type Cache = { kerfwiseDb?: Promise<ServerDb> };
+/** What a freshly opened database gets before first use (the demo yard, the first owner). */
+export type PrepareDatabase = (db: Db) => Promise<void>;
+type Cache = { kerfwiseDb?: Promise<ServerDb>; kerfwisePrepareDb?: PrepareDatabase };
 const cache = globalThis as unknown as Cache;
 
+/**
+ * Start-up code names the preparation before the first open (lib/server/start-up.ts, the worker), so
+ * the database layer needs nothing from the app. Without one the database is only migrated.
+ */
+export function setDatabasePreparation(prepare: PrepareDatabase): void {
+  cache.kerfwisePrepareDb = prepare;
+}
+
 async function open(): Promise<ServerDb> {
-  const env = getEnv();
+  const env = databaseEnv();
+  const prepare: PrepareDatabase = (db) => cache.kerfwisePrepareDb?.(db) ?? Promise.resolve();
   if (env.DATABASE_URL) {
     const { db } = await openServerDatabase(env.DATABASE_URL, {
-      prepare: (db) => prepareYard(db, env),
+      prepare,
       poolSize: env.KERFWISE_DB_POOL_SIZE,
     });
     return { db, client: null };
   }
   const { db, client } = await openDatabase(dataDirPath());
-  await prepareYard(db, env);
+  await prepare(db);
   return { db, client };
 }
 

@@ -1,16 +1,16 @@
-// The one place that reads process.env. Everything else asks this module.
-import path from 'node:path';
+// The app's settings from process.env; with db/env.ts (which this extends) the only place reading it.
+// The database's own settings (data folder, server URL, pool) are defined in db/env.ts.
 import { z } from 'zod';
+import { databaseEnvSchema } from '@/db/env';
 
-const envSchema = z.object({
-  KERFWISE_DATA_DIR: z.string().min(1).default('.data'),
-  // Set: a PostgreSQL server (several app instances and workers may share it). Unset: embedded PGlite.
-  DATABASE_URL: z.string().min(1).optional(),
+const envSchema = databaseEnvSchema.extend({
   // Server mode: how long a solver run may stay active before it counts as crashed and is retried,
   // and how often the queue looks for such runs.
   KERFWISE_PLAN_RUN_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(120),
   KERFWISE_QUEUE_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
-  KERFWISE_DB_POOL_SIZE: z.coerce.number().int().min(1).max(100).default(10),
+  // A worker sharing cores with app instances yields to them: page requests stay quick while plans
+  // queue (0 = normal priority, 19 = lowest).
+  KERFWISE_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(10),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   NEXTAUTH_URL: z.string().url().optional(),
   KERFWISE_SMTP_HOST: z.string().default('127.0.0.1'),
@@ -41,14 +41,4 @@ export type Env = z.infer<typeof envSchema>;
 
 export function getEnv(): Env {
   return envSchema.parse(process.env);
-}
-
-/** Absolute path of the embedded database folder. */
-export function dataDirPath(): string {
-  return path.resolve(/*turbopackIgnore: true*/ process.cwd(), getEnv().KERFWISE_DATA_DIR);
-}
-
-/** The PostgreSQL server's URL, or null for the embedded database. */
-export function databaseUrl(): string | null {
-  return getEnv().DATABASE_URL ?? null;
 }

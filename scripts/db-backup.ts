@@ -5,7 +5,7 @@ import { openDatabase } from '../db/client';
 import { takeSnapshot, writeBackup } from '../db/backup';
 import { requestSnapshot } from '../db/backup-socket';
 import { dataDirHolder } from '../db/data-dir-lock';
-import { databaseUrl, dataDirPath } from '../lib/env';
+import { databaseUrl, dataDirPath } from '../db/env';
 
 if (databaseUrl()) {
   console.error('Kerfwise: DATABASE_URL is set: use pg_dump on the PostgreSQL server (see docs/deploy.md).');

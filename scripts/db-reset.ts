@@ -5,7 +5,7 @@ import path from 'node:path';
 import { openDatabase } from '../db/client';
 import { acquireDataDirLock, realDataDir } from '../db/data-dir-lock';
 import { seedDemoYard } from '../db/seed';
-import { dataDirPath } from '../lib/env';
+import { dataDirPath } from '../db/env';
 
 const dir = dataDirPath();
 try {

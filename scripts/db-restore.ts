@@ -3,7 +3,7 @@
 import { readVerifiedBackup, restoreSnapshot } from '../db/backup';
 import { openDatabase } from '../db/client';
 import { acquireDataDirLock } from '../db/data-dir-lock';
-import { databaseUrl, dataDirPath } from '../lib/env';
+import { databaseUrl, dataDirPath } from '../db/env';
 
 if (databaseUrl()) {
   console.error(

@@ -5,10 +5,11 @@
 // KERFWISE_OWNER_PASSWORD for the server, which creates the owner itself at start.
 import { createInterface } from 'node:readline/promises';
 import { openDatabase } from '../db/client';
-import { createFirstOwner } from '../db/first-owner';
+import { createFirstOwner } from '../lib/users/first-owner';
 import { openServerDatabase } from '../db/server-client';
 import type { Db } from '../db/types';
-import { dataDirPath, getEnv } from '../lib/env';
+import { dataDirPath } from '../db/env';
+import { getEnv } from '../lib/env';
 
 /** The yard's database, whichever kind, and how to let go of it. */
 async function open(): Promise<{ db: Db; close: () => Promise<void> }> {

@@ -2,8 +2,10 @@
 // checks the settings, takes the data folder's lock, opens, migrates and prepares the database, and
 // answers `npm run db:backup` on the folder's private backup socket.
 import { serveBackups } from '@/db/backup-socket';
-import { getServerDb } from '@/db/server-db';
-import { dataDirPath, getEnv } from '@/lib/env';
+import { getServerDb, setDatabasePreparation } from '@/db/server-db';
+import { dataDirPath } from '@/db/env';
+import { getEnv } from '@/lib/env';
+import { prepareYard } from './prepare-yard';
 
 export async function startUp(): Promise<void> {
   const env = getEnv();
@@ -13,6 +15,7 @@ export async function startUp(): Promise<void> {
         'e.g. NEXTAUTH_SECRET=$(openssl rand -base64 32) in the environment or .env.local.',
     );
   }
+  setDatabasePreparation(prepareYard);
   const { client } = await getServerDb();
   if (client) await serveBackups(dataDirPath(), client);
 }

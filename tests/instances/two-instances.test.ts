@@ -3,6 +3,7 @@
 // built here when missing) and KERFWISE_TEST_DATABASE_URL; run with `npm run test:instances`.
 import { execFileSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
+import { chromium } from '@playwright/test';
 import { and, eq } from 'drizzle-orm';
 import type { Pool } from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -165,5 +166,40 @@ describe('two app instances on one PostgreSQL database', () => {
     );
     const listed = await api(instances[1].base, hand[1], `/api/jobs/${draft.id}/plans`);
     expect(listed.json.plans.map((p: { id: number }) => p.id)).toEqual([run.planId]);
+  }, 180_000);
+
+  // Last: it stops the worker, so the run waits in the queue until the yard hand calls it off.
+  it('lets the yard hand stop a queued plan from the job page in a real browser; no plan is stored', async () => {
+    if (worker) await killWorker(worker, 'SIGTERM');
+    worker = undefined;
+    const [section] = await db.select().from(schema.sections).where(eq(schema.sections.code, 'T47100'));
+    const [draft] = await db
+      .insert(schema.jobs)
+      .values({ reference: 'J-TWO-STOP', customerName: 'Two-instance test' })
+      .returning();
+    await db
+      .insert(schema.jobItems)
+      .values({ jobId: draft.id, sectionId: section.id, lengthMm: 2400, quantity: 3 });
+    const browser = await chromium.launch({ executablePath: '/usr/bin/chromium' });
+    try {
+      const [name, value] = cookies[HAND][1].split(/=(.*)/s);
+      const context = await browser.newContext();
+      await context.addCookies([{ name, value, url: instances[1].base }]);
+      const page = await context.newPage();
+      await page.goto(`${instances[1].base}/jobs/${draft.id}`);
+      await page.getByRole('button', { name: 'Plan this job' }).click();
+      await page.getByText('Waiting for a free solver…').waitFor({ timeout: 30_000 });
+      await page.getByRole('button', { name: 'Stop planning' }).click();
+      await page.getByText('This planning run was cancelled.').waitFor({ timeout: 30_000 });
+      expect(await page.getByRole('button', { name: 'Plan this job' }).isEnabled()).toBe(true);
+    } finally {
+      await browser.close();
+    }
+    const runs = await pool.query<{ status: string }>('select status from plan_runs where job_id = $1', [
+      draft.id,
+    ]);
+    expect(runs.rows.map((r) => r.status)).toEqual(['cancelled']);
+    const listed = await api(instances[0].base, cookies[HAND][0], `/api/jobs/${draft.id}/plans`);
+    expect(listed.json.plans).toEqual([]);
   }, 180_000);
 });

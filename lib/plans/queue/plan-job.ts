@@ -2,7 +2,7 @@
 // the caller gets a run id to follow; embedded, the solve runs here (in a worker thread) as before.
 import 'server-only';
 import { getDb } from '@/db';
-import { databaseUrl } from '@/lib/env';
+import { databaseUrl } from '@/db/env';
 import type { CreatePlanBody } from '@/lib/validations/plans';
 import { createPlan } from '../create-plan';
 import { enqueuePlanRun } from './enqueue-plan-run';

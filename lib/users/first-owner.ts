@@ -2,8 +2,8 @@
 import { sql } from 'drizzle-orm';
 import { hashPassword } from '@/lib/auth/password';
 import { createUserBodySchema } from '@/lib/validations/users';
-import * as schema from './schema';
-import type { Db } from './types';
+import * as schema from '@/db/schema';
+import type { Db } from '@/db/types';
 
 /** The yard name until the owner sets theirs on the settings page. */
 const NEW_YARD_NAME = 'My timber yard';

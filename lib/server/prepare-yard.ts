@@ -1,12 +1,13 @@
 // What a server start puts into a freshly opened database, as asked by the environment:
 // the demo yard with KERFWISE_DEMO=1 (empty database only), the first owner from KERFWISE_OWNER_*.
-import type { Env } from '@/lib/env';
-import type { Db } from './client';
-import { createFirstOwner } from './first-owner';
-import { seedDemoYard } from './seed';
-import { DEMO_PASSWORD } from './seed/demo-yard';
+import type { Db } from '@/db/types';
+import { seedDemoYard } from '@/db/seed';
+import { DEMO_PASSWORD } from '@/db/seed/demo-yard';
+import { createFirstOwner } from '@/lib/users/first-owner';
+import { getEnv } from '@/lib/env';
 
-export async function prepareYard(db: Db, env: Env): Promise<void> {
+export async function prepareYard(db: Db): Promise<void> {
+  const env = getEnv();
   if (env.KERFWISE_DEMO && (await seedDemoYard(db))) {
     console.log(`Kerfwise: seeded the demo yard (demo sign-ins, password "${DEMO_PASSWORD}").`);
   }
