@@ -4,13 +4,12 @@ import { migrate } from 'drizzle-orm/pglite/migrator';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { migrationsFolder, wrapClient } from '@/db/client';
 import * as schema from '@/db/schema';
-import type { Db } from '@/db/types';
 import { verifyPassword } from '@/lib/auth/password';
 import { prepareYard } from '@/lib/server/prepare-yard';
 import { createFirstOwner } from '@/lib/users/first-owner';
 
 let client: PGlite;
-let db: Db;
+let db: ReturnType<typeof wrapClient>;
 // Set up in a hook: starting PGlite can outlast a test's time limit on a busy machine.
 beforeAll(async () => {
   client = new PGlite();
