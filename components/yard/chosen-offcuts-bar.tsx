@@ -52,7 +52,7 @@ export function ChosenOffcutsBar({
   });
   return (
     <div
-      className="flex flex-wrap items-end gap-3 rounded-lg bg-amber-light p-3"
+      className="flex flex-wrap items-center gap-3 rounded-lg bg-amber-light p-3"
       data-testid="chosen-offcuts-bar"
     >
       <span className="self-center font-semibold">{ids.length} chosen</span>
@@ -66,21 +66,24 @@ export function ChosenOffcutsBar({
       </a>
       {canEdit && (
         <form
-          className="flex flex-wrap gap-2"
+          className="flex items-center gap-2"
           data-testid="move-chosen"
           onSubmit={(e) => {
             e.preventDefault();
             move.mutate();
           }}
         >
-          <input
-            aria-label="Move the chosen offcuts to"
-            className={`${inputClass} w-44`}
-            list="rack-locations"
-            value={location}
-            onChange={(e) => setLocation(e.target.value)}
-            placeholder="Rack location"
-          />
+          {/* The control is full width by default: its box sets the width. */}
+          <div className="w-48">
+            <input
+              aria-label="Move the chosen offcuts to"
+              className={inputClass}
+              list="rack-locations"
+              value={location}
+              onChange={(e) => setLocation(e.target.value)}
+              placeholder="Rack location"
+            />
+          </div>
           <datalist id="rack-locations">
             {locations.map((l) => (
               <option key={l} value={l} />
@@ -93,19 +96,21 @@ export function ChosenOffcutsBar({
       )}
       {canEdit && (
         <form
-          className="flex flex-wrap gap-2"
+          className="flex items-center gap-2"
           onSubmit={(e) => {
             e.preventDefault();
             scrap.mutate();
           }}
         >
-          <input
-            aria-label="Reason for scrapping"
-            className={`${inputClass} w-64`}
-            value={reason}
-            onChange={(e) => setReason(e.target.value)}
-            placeholder="Reason, e.g. split, too old"
-          />
+          <div className="w-64">
+            <input
+              aria-label="Reason for scrapping"
+              className={inputClass}
+              value={reason}
+              onChange={(e) => setReason(e.target.value)}
+              placeholder="Reason, e.g. split, too old"
+            />
+          </div>
           <Button type="submit" variant="danger" disabled={scrap.isPending || !reason.trim()}>
             Scrap chosen
           </Button>
