@@ -1,5 +1,5 @@
 // Server mode only: planning runs go through the pg-boss queue to `npm run worker` processes.
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import * as schema from '@/db/schema';
 import { enqueuePlanRun } from '@/lib/plans/queue/enqueue-plan-run';
@@ -23,12 +23,22 @@ beforeEach(async () => {
 afterEach(async () => {
   await Promise.all(workers.map((w) => killWorker(w, 'SIGTERM')));
   workers = [];
+  // Rows are reset between tests and run ids start again at 1, but the queue's own tables are not:
+  // a retry left by a killed worker would reach the next test as a run of the same id.
+  await t.db.execute(
+    sql`do $$ begin if to_regclass('pgboss.job') is not null then delete from pgboss.job; end if; end $$`,
+  );
   await t.close();
 });
 
 // Short expiry so a killed worker's run is retried within the test. A run's expiry is fixed when it
 // is sent, so this process (which sends) needs it as well as the workers.
-const QUICK_RETRY = { KERFWISE_PLAN_RUN_EXPIRE_SECONDS: '8', KERFWISE_QUEUE_MAINTENANCE_SECONDS: '1' };
+// Normal priority: a worker yielding to a loaded machine could outlast that short expiry.
+const QUICK_RETRY = {
+  KERFWISE_PLAN_RUN_EXPIRE_SECONDS: '8',
+  KERFWISE_QUEUE_MAINTENANCE_SECONDS: '1',
+  KERFWISE_WORKER_NICE: '0',
+};
 Object.assign(process.env, QUICK_RETRY);
 
 async function jobByReference(reference: string) {
