@@ -66,7 +66,9 @@ export const yardSettings = pgTable('yard_settings', {
   displayUnit: text('display_unit', { enum: DISPLAY_UNITS }).notNull().default('mm'),
   perCutChargePence: integer('per_cut_charge_pence').notNull().default(25),
   clearOffcutsAfterDays: integer('clear_offcuts_after_days').notNull().default(90),
-  lengthToleranceMm: integer('length_tolerance_mm').notNull().default(2),
+  // How far short a nominal piece may be cut (factory ends, sold by nominal length), for sections
+  // without their own figure. Lines are exact unless the yard hand or the cut list says nominal.
+  lengthToleranceMm: integer('length_tolerance_mm').notNull().default(5),
   // Picks piece names and framing defaults: 'uk' (head/sole plate, lintel) or 'na' (top/bottom plate, header).
   region: text('region', { enum: REGIONS }).notNull().default('uk'),
   // Shorter pieces are refused on forms and imports: the saw cannot hold them safely.
@@ -107,6 +109,8 @@ export const sections = pgTable('sections', {
   moisture: text('moisture', { enum: MOISTURE_STATES }).notNull().default('kiln_dried'),
   // Shortest remainder worth keeping for this section; null: the yard's minimum kept offcut.
   minKeepMm: integer('min_keep_mm'),
+  // How far short a nominal piece of this section may be cut; null: the yard's length tolerance.
+  nominalToleranceMm: integer('nominal_tolerance_mm'),
   active: boolean('active').notNull().default(true),
   createdAt: createdAt(),
 });
@@ -226,6 +230,8 @@ export const jobItems = pgTable('job_items', {
   angleTenths: integer('angle_tenths'),
   // Frame piece marks ("1.1, 1.2, 2.3"): the numbers the schedule's drawings show.
   marks: text('marks').notNull().default(''),
+  // Millimetres the piece may be cut short (a nominal piece); 0: exact.
+  toleranceMm: integer('tolerance_mm').notNull().default(0),
   // The frame schedule that sent this line, so sending it again can replace its lines.
   frameScheduleId: integer('frame_schedule_id').references(() => frameSchedules.id, {
     onDelete: 'set null',
@@ -305,6 +311,8 @@ export const planBoards = pgTable(
     pieces: jsonb('pieces').notNull(),
     remainderMm: integer('remainder_mm').notNull(),
     keepRemainder: boolean('keep_remainder').notNull(),
+    // One piece sold at the whole stock length: no trim and no cut; the saw hands the board over.
+    fullLength: boolean('full_length').notNull().default(false),
     status: text('status', { enum: BOARD_STATUSES }).notNull().default('pending'),
     doneAt: timestamp('done_at', { withTimezone: true }),
     doneBy: integer('done_by').references(() => users.id),

@@ -8,9 +8,9 @@ const envSchema = databaseEnvSchema.extend({
   // and how often the queue looks for such runs.
   KERFWISE_PLAN_RUN_EXPIRE_SECONDS: z.coerce.number().int().min(5).default(120),
   KERFWISE_QUEUE_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
-  // A worker sharing cores with app instances yields to them: page requests stay quick while plans
-  // queue (0 = normal priority, 19 = lowest).
-  KERFWISE_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(10),
+  // CPU priority of the solver threads (0 = normal, 19 = lowest), in the app and in workers alike:
+  // solving yields to page requests and the saw's polling when they share cores.
+  KERFWISE_SOLVER_NICE: z.coerce.number().int().min(0).max(19).default(10),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   NEXTAUTH_URL: z.string().url().optional(),
   KERFWISE_SMTP_HOST: z.string().default('127.0.0.1'),

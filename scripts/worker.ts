@@ -1,10 +1,8 @@
 // `npm run worker`: a solver worker for server mode. Start as many as you like, on any machine that
 // reaches the database (DATABASE_URL). Each takes one planning run at a time from the queue.
-import { setPriority } from 'node:os';
 import { getDb } from '../db';
 import { setDatabasePreparation } from '../db/server-db';
 import { databaseUrl } from '../db/env';
-import { getEnv } from '../lib/env';
 import { prepareYard } from '../lib/server/prepare-yard';
 import { getPlanQueue } from '../lib/plans/queue/plan-queue';
 import { startPlanWorker } from '../lib/plans/queue/plan-worker';
@@ -14,9 +12,6 @@ if (!url) {
   console.error('Kerfwise worker: set DATABASE_URL. Embedded mode solves inside the app process.');
   process.exit(1);
 }
-
-// Before any solver thread starts: threads inherit the priority of the thread that creates them.
-setPriority(getEnv().KERFWISE_WORKER_NICE);
 
 setDatabasePreparation(prepareYard); // a worker may be first on an empty database, like an instance
 const db = await getDb(); // migrates under the advisory lock, like the app instances

@@ -102,15 +102,23 @@ export function longestFirst(model: Model, demand: number[], binsLeft: number[])
 
 function firstFitInOrder(model: Model, demand: number[], binsLeft: number[], order: number[]): Packing {
   const left = [...binsLeft];
-  const open: { bin: number; items: number[]; load: number }[] = [];
+  const open: { bin: number; items: number[]; load: number; nominal: boolean }[] = [];
   const packing: Packing = { boards: [], unplaced: new Array<number>(demand.length).fill(0) };
   demand.forEach((count, i) => {
-    const w = model.items[i].weight;
+    const item = model.items[i];
+    const nominal = item.tolerance > 0;
     for (let k = 0; k < count; k++) {
-      const board = open.find((b) => boardFits(model, b.bin, [...b.items, i]));
+      // A second piece ends any full-length board, so a board of two or more pieces is untrimmed
+      // only when every piece is nominal (the rule of boardFits, without building item lists).
+      const board = open.find((b) => {
+        const bin = model.bins[b.bin];
+        const cap = b.nominal && nominal ? bin.openCapacity : bin.capacity;
+        return b.load + item.weight <= cap;
+      });
       if (board) {
         board.items.push(i);
-        board.load += w;
+        board.load += item.weight;
+        board.nominal &&= nominal;
         continue;
       }
       const j = order.find((jj) => left[jj] > 0 && boardFits(model, jj, [i]));
@@ -119,7 +127,7 @@ function firstFitInOrder(model: Model, demand: number[], binsLeft: number[], ord
         continue;
       }
       left[j]--;
-      open.push({ bin: j, items: [i], load: w });
+      open.push({ bin: j, items: [i], load: item.weight, nominal });
     }
   });
   packing.boards = open.map((b) => makeBoard(model, b.bin, b.items));

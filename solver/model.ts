@@ -116,8 +116,16 @@ export function buildModel(input: SolveInput): Model {
   const items = [...byLength.values()].sort(
     (a, b) => b.weight - a.weight || b.length - a.length || a.tolerance - b.tolerance,
   );
+  // Only a piece that could be sold at a stock length (length − tolerance ≤ stock ≤ length) skips the
+  // trim; a piece longer than a stock length never fits that stock, so it relaxes nothing.
   const relaxed =
     trim > 0 &&
-    items.some((it) => it.tolerance > 0 || bins.some((b) => b.source === 'stock' && b.length <= it.length));
+    items.some(
+      (it) =>
+        it.tolerance > 0 ||
+        bins.some(
+          (b) => b.source === 'stock' && b.length <= it.length && it.length - it.tolerance <= b.length,
+        ),
+    );
   return { kerf, trim, minOffcut: input.minOffcut, items, bins, tooLong, relaxed };
 }

@@ -2,6 +2,7 @@
 
 import type { Pattern } from './column-generation';
 import { arcFlowStep } from './arc-flow';
+import { residualStep } from './residual-step';
 import { exactStep } from './exact-step';
 import { firstFitDecreasing, longestFirst, sequentialFill } from './greedy-fill';
 import { lengthBound, lpBound, maxBound } from './lower-bounds';
@@ -18,6 +19,8 @@ export const SEARCH_CAPS = { lpPivots: 20_000 };
 
 /** Share of the time left that the arc-flow model may use; the rest tidies the plan up. */
 const ARC_FLOW_SHARE = 0.8;
+/** Share of the time left for the exact solve of what LP rounding leaves over. */
+const RESIDUAL_SHARE = 0.3;
 
 export function solve(input: SolveInput): SolvePlan {
   const started = performance.now();
@@ -68,12 +71,21 @@ export function solve(input: SolveInput): SolvePlan {
     });
     bound = maxBound(bound, lp?.bound ?? null);
     lpPool = lp?.pool ?? [];
-    if (severalKinds) runArcFlow();
-    if (!meetsBound(model, best, bound) && !budget.expired()) {
-      // Untrimmed boards widen the LP's patterns beyond what trimmed boards hold: bound only.
-      const guide = model.relaxed ? null : lp;
+    // Untrimmed boards widen the LP's patterns beyond what trimmed boards hold: bound only.
+    const guide = model.relaxed ? null : lp;
+    const improve = () => {
+      if (meetsBound(model, best, bound) || budget.expired()) return;
       consider(improvePacking(model, best, bound, guide, budget, lengthTarget));
-    }
+    };
+    if (severalKinds) {
+      // A yard's job: the LP is tight, so rounding it, then cutting its whole part and solving the
+      // small rest exactly, gives a near-cheapest plan quickly (on a large job); the full integer
+      // model then starts from the best of them, to close the gap or prove it.
+      improve();
+      if (guide && !meetsBound(model, best, bound) && !budget.expired())
+        consider(residualStep(model, demand, limits, guide, budget.remainingMs() * RESIDUAL_SHARE));
+      runArcFlow();
+    } else improve();
   }
   // The pattern step: cheaper when the bound is not met, and tidier (offcuts, scrap) when it is.
   const unusedOffcuts = model.bins.some(

@@ -107,8 +107,8 @@ export function CutListImport({ jobId }: { jobId: number }) {
           {busy ? 'Checking every row…' : 'Drop a cut list (CSV or .xlsx) here, or click to choose one'}
         </p>
         <p className="mt-1 text-sm text-bark-soft">
-          Columns section, length, quantity, label, note. Lengths in mm (2400), metres (2.4m) or feet-inches
-          (7&apos; 8 5/8&quot;). Up to 5 MB.
+          Columns section, length, quantity, label, note, and optionally tolerance (exact, nominal or mm
+          short). Lengths in mm (2400), metres (2.4m) or feet-inches (7&apos; 8 5/8&quot;). Up to 5 MB.
         </p>
       </div>
       <div className="flex flex-wrap items-center gap-4">

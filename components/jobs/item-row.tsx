@@ -6,6 +6,8 @@ import { inputClass } from '@/components/ui/field';
 import { useDisplayUnit } from '@/components/units/display-unit';
 import type { ItemBody, JobItemRow } from '@/lib/queries/jobs';
 import type { SectionOption } from '@/lib/queries/sections';
+import { describeTolerance } from '@/lib/nominal/tolerance';
+import { fitBody, FitFields, useFit } from './fit-fields';
 
 type Props = {
   item?: JobItemRow;
@@ -23,16 +25,23 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
   const [editing, setEditing] = useState(!item);
   const [busy, setBusy] = useState(false);
   const name = item ? `row ${item.position + 1}` : 'new row';
+  const [sectionId, setSectionId] = useState(item?.sectionId ?? defaultSectionId ?? sections[0]?.id);
+  const [fit, setFit] = useFit(item?.toleranceMm ?? 0);
 
   if (item && !editing) {
     return (
-      <tr className="border-t border-shaving" data-testid="item-row">
+      // Keyed apart from the editing row: otherwise React reuses the Edit button as the Save button
+      // while the click is still being handled, and the browser submits the form at once.
+      <tr key="view" className="border-t border-shaving" data-testid="item-row">
         <td className="p-2">{item.sectionName}</td>
         <td className="p-2 text-right tabular-nums">
           {format(item.lengthMm)}
           {suffix}
         </td>
         <td className="p-2 text-right tabular-nums">{item.quantity}</td>
+        <td className="p-2 text-sm" data-testid="item-fit">
+          {describeTolerance(item.toleranceMm)}
+        </td>
         <td className="p-2">{item.label}</td>
         <td className="p-2 text-sm text-bark-soft">{item.note}</td>
         <td className="no-print p-2 text-right whitespace-nowrap">
@@ -72,6 +81,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
         quantity: Number(data.get('quantity')),
         label: String(data.get('label') ?? ''),
         note: String(data.get('note') ?? ''),
+        ...fitBody(fit),
       });
       if (item) setEditing(false);
       else form.reset();
@@ -85,6 +95,7 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
   const formId = `item-form-${item?.id ?? 'new'}`;
   return (
     <tr
+      key="edit"
       className="border-t border-shaving bg-sawdust"
       data-testid={item ? 'item-row-editing' : 'new-item-row'}
     >
@@ -95,7 +106,8 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
           name="sectionId"
           aria-label={`Section, ${name}`}
           className={inputClass}
-          defaultValue={item?.sectionId ?? defaultSectionId ?? sections[0]?.id}
+          value={sectionId}
+          onChange={(e) => setSectionId(Number(e.target.value))}
         >
           {sections.map((s) => (
             <option key={s.id} value={s.id}>
@@ -126,6 +138,14 @@ export function ItemRow({ item, sections, editable, onSave, onDelete, defaultSec
           max={10000}
           className={`${inputClass} w-24 text-right`}
           defaultValue={item?.quantity ?? 1}
+        />
+      </td>
+      <td className="p-2">
+        <FitFields
+          name={name}
+          fit={fit}
+          onChange={setFit}
+          nominalDefaultMm={sections.find((s) => s.id === sectionId)?.nominalDefaultMm ?? 0}
         />
       </td>
       <td className="p-2">

@@ -55,6 +55,7 @@ export function ItemsTable({
               <th className="p-2">Section</th>
               <th className="p-2 text-right">Length</th>
               <th className="p-2 text-right">Qty</th>
+              <th className="p-2">Exact or nominal</th>
               <th className="p-2">Label</th>
               <th className="p-2">Note</th>
               <th className="p-2">

@@ -64,7 +64,11 @@ export function BoardDiagram({
                 stroke="#1d5545"
                 strokeWidth={1}
               >
-                <title>{`${part.label || 'piece'} ${format(part.lengthMm)}`}</title>
+                <title>
+                  {part.listedMm !== part.lengthMm
+                    ? `${part.label || 'piece'} ${format(part.lengthMm)}, listed ${format(part.listedMm)}`
+                    : `${part.label || 'piece'} ${format(part.lengthMm)}`}
+                </title>
               </rect>
               {width > 30 && (
                 <text

@@ -2,6 +2,7 @@
 
 import { formatCustomerDate } from '@/lib/format/customer-date';
 import { angleLine } from '@/lib/plans/angle-line';
+import { actualCutMm, cutRange } from '@/lib/plans/cut-words';
 import { useFormatLength } from '@/components/units/display-unit';
 import type { PlanViewData } from '@/lib/queries/plans';
 import { DiagramLegend } from './diagram-legend';
@@ -39,7 +40,14 @@ export function CutSheet({
         const boards = plan.boards.filter((b) => b.sectionId === section.sectionId);
         const pieces = new Map<
           string,
-          { label: string; lengthMm: number; count: number; angle: string | null; marks?: string }
+          {
+            label: string;
+            lengthMm: number;
+            count: number;
+            angle: string | null;
+            marks?: string;
+            cuts: number[];
+          }
         >();
         for (const b of boards)
           for (const p of b.pieces) {
@@ -50,8 +58,10 @@ export function CutSheet({
               count: 0,
               angle: angleLine(p, fmt),
               marks: p.marks,
+              cuts: [],
             };
             e.count += 1;
+            e.cuts.push(actualCutMm(p));
             pieces.set(key, e);
           }
         return (
@@ -69,6 +79,11 @@ export function CutSheet({
                         {p.angle && (
                           <span className="block text-sm font-semibold" data-testid="sheet-angle">
                             {p.angle}
+                          </span>
+                        )}
+                        {p.cuts.some((c) => c !== p.lengthMm) && (
+                          <span className="block text-sm" data-testid="sheet-nominal">
+                            nominal, cut to {cutRange(p.cuts, fmt)}
                           </span>
                         )}
                       </td>

@@ -1,9 +1,11 @@
 'use client';
 
 import { useDisplayUnit, useFormatLength } from '@/components/units/display-unit';
+import { cutLengthText, FULL_LENGTH_WORDS } from '@/lib/plans/cut-words';
 import type { PlanBoardView } from '@/lib/queries/plans';
 import { BoardDiagram } from './board-diagram';
 import { groupIdenticalBoards } from '@/lib/plans/group-boards';
+import { BoardCutNotes } from './board-cut-notes';
 
 /** One section's boards in saw order, identical boards drawn once with their count. */
 export function PlanSectionBoards({
@@ -42,6 +44,14 @@ export function PlanSectionBoards({
                 <span className="font-semibold" data-testid="board-group-heading">
                   {heading}
                 </span>
+                {first.fullLength && (
+                  <span
+                    className="rounded bg-spruce-light px-2 font-semibold text-spruce"
+                    data-testid="full-length"
+                  >
+                    {FULL_LENGTH_WORDS}
+                  </span>
+                )}
                 <span className="text-bark-soft">
                   board{same.length > 1 ? 's' : ''} {boardNos}
                 </span>
@@ -56,8 +66,9 @@ export function PlanSectionBoards({
                   keepRemainder: first.keepRemainder,
                 }}
                 format={format}
-                title={`${heading}: ${first.pieces.map((p) => `${p.label || 'piece'} ${fmt(p.lengthMm)}`).join(', ')}; ${first.keepRemainder ? 'kept' : 'scrap'} ${fmt(first.remainderMm)}`}
+                title={`${heading}${first.fullLength ? `, ${FULL_LENGTH_WORDS}` : ''}: ${first.pieces.map((p) => `${p.label || 'piece'} ${cutLengthText(p, fmt)}`).join(', ')}; ${first.keepRemainder ? 'kept' : 'scrap'} ${fmt(first.remainderMm)}`}
               />
+              <BoardCutNotes pieces={first.pieces} format={fmt} />
             </li>
           );
         })}

@@ -1,6 +1,7 @@
 // A to-scale side view of one board: trim, pieces, kerfs and what is left, with the next cut marked.
 // Same code as the plan and the cut sheet: pieces in green, a kept remainder dotted, scrap hatched.
 import { BoardPatterns, INK, PIECE_FILLS } from '@/components/plans/board-patterns';
+import { actualCutMm } from '@/lib/plans/cut-words';
 import type { SawBoard } from '@/lib/queries/saw';
 
 const W = 1000;
@@ -37,9 +38,9 @@ export function BoardDrawing({
       {board.pieces.map((p, i) => (
         <g key={i}>
           <rect
-            x={x(start + p.markMm - p.lengthMm)}
+            x={x(start + p.markMm - actualCutMm(p))}
             y={0}
-            width={x(p.lengthMm)}
+            width={x(actualCutMm(p))}
             height={H}
             fill={PIECE_FILLS[i % 2]}
             opacity={i < done ? 0.45 : 1}

@@ -1,6 +1,7 @@
 // What to fetch, the trim, each piece by its length (marks as the tape's aid), and what is left.
 import { sawLength } from './format-saw-length';
 import { angleLine } from '@/lib/plans/angle-line';
+import { actualCutMm, cutDiffers, FULL_LENGTH_WORDS } from '@/lib/plans/cut-words';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
 import { TagCode } from './tag-code';
@@ -22,7 +23,10 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
       ) : (
         <>
           Fetch new stock: {len(board.lengthMm)}
-          <span className="block text-lg font-semibold text-bark-soft">{board.section.name}</span>
+          <span className="block text-lg font-semibold text-bark-soft">
+            {board.section.name}
+            {board.fullLength ? ` · ${FULL_LENGTH_WORDS}` : ''}
+          </span>
         </>
       )}
     </p>
@@ -31,7 +35,10 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
 
 export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit; nextCut: number }) {
   const len = (mm: number) => sawLength(mm, unit);
-  const from = board.source === 'offcut' ? 'the sawn end' : 'the squared end';
+  // New stock of only nominal pieces is not trimmed: its factory end is accepted.
+  const from =
+    board.source === 'offcut' ? 'the sawn end' : board.trimMm > 0 ? 'the squared end' : 'the factory end';
+  if (board.fullLength) return <FullLengthStep board={board} unit={unit} />;
   return (
     <ol className="space-y-2" data-testid="cut-list">
       <li className="flex min-h-12 flex-wrap items-center gap-x-3 rounded-lg border-2 border-grain bg-white px-3 text-lg">
@@ -73,8 +80,13 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
             <span className="text-lg font-bold">{i + 1}</span>
             <span>
               <span className="block font-mono text-4xl font-bold text-bark" data-testid="piece-length">
-                {len(p.lengthMm)}
+                {len(actualCutMm(p))}
               </span>
+              {cutDiffers(p) && (
+                <span className="block text-lg font-semibold text-spruce" data-testid="piece-listed">
+                  nominal {len(p.lengthMm)}: cut to {len(actualCutMm(p))}
+                </span>
+              )}
               <span className="block text-xl font-semibold">
                 {p.label || 'piece'}
                 {p.marks ? ` · ${p.marks}` : ''}
@@ -93,6 +105,28 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
           </li>
         );
       })}
+    </ol>
+  );
+}
+
+/** A board sold whole: no trim and no cut; the operator checks it and hands it over. */
+function FullLengthStep({ board, unit }: { board: SawBoard; unit: Unit }) {
+  const piece = board.pieces[0];
+  return (
+    <ol className="space-y-2" data-testid="cut-list">
+      <li
+        className="rounded-lg border-2 border-spruce bg-spruce-light px-3 py-2"
+        data-testid="full-length-step"
+      >
+        <span className="block text-3xl font-bold text-bark">
+          {FULL_LENGTH_WORDS[0].toUpperCase() + FULL_LENGTH_WORDS.slice(1)}
+        </span>
+        <span className="block text-xl font-semibold">
+          {piece?.label || 'piece'} {sawLength(board.lengthMm, unit)}
+          {piece?.marks ? ` · ${piece.marks}` : ''}: check the board for splits and shakes, then hand it over
+          as it is.
+        </span>
+      </li>
     </ol>
   );
 }

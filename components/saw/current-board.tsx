@@ -34,7 +34,8 @@ export function CurrentBoard({
   sectionChangedFrom,
   question,
 }: Props) {
-  const allMarked = nextCut >= board.pieces.length;
+  // A board sold full length is handed over whole: there is no cut to confirm.
+  const allMarked = board.fullLength || nextCut >= board.pieces.length;
   return (
     <section
       className="space-y-4 rounded-xl border-2 border-bark bg-white p-4"
@@ -63,7 +64,7 @@ export function CurrentBoard({
             onClick={onNextCut}
             disabled={allMarked}
           >
-            {allMarked ? 'All cuts made' : `Cut ${nextCut + 1} made`}
+            {board.fullLength ? 'No cut needed' : allMarked ? 'All cuts made' : `Cut ${nextCut + 1} made`}
           </Button>
           <Button
             size="lg"

@@ -45,6 +45,7 @@ function toDraft(s: SectionRow | null) {
       finishedWidthMm: String(s?.finishedWidthMm ?? ''),
       moisture: s?.moisture ?? 'kiln_dried',
       minKeepMm: String(s?.minKeepMm ?? ''),
+      nominalToleranceMm: String(s?.nominalToleranceMm ?? ''),
     } satisfies TradeDraft as TradeDraft,
     active: s?.active ?? true,
     lengths: (s?.lengths ?? []).map((l): LengthDraft => ({
@@ -73,6 +74,7 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
         finishedThicknessMm: toMm(draft.trade.finishedThicknessMm),
         finishedWidthMm: toMm(draft.trade.finishedWidthMm),
         minKeepMm: toMm(draft.trade.minKeepMm),
+        nominalToleranceMm: toMm(draft.trade.nominalToleranceMm),
         active: draft.active,
         lengths: draft.lengths.map((l) => ({
           id: l.id,

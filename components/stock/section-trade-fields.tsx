@@ -7,6 +7,7 @@ export type TradeDraft = {
   finishedWidthMm: string;
   moisture: MoistureState;
   minKeepMm: string;
+  nominalToleranceMm: string;
 };
 
 export const MOISTURE_LABEL: Record<MoistureState, string> = {
@@ -25,13 +26,18 @@ export function SectionTradeFields({
   onChange: (change: Partial<TradeDraft>) => void;
   issue: (path: string) => string | undefined;
 }) {
-  const mm = (key: 'finishedThicknessMm' | 'finishedWidthMm' | 'minKeepMm', label: string, hint: string) => (
+  const mm = (
+    key: 'finishedThicknessMm' | 'finishedWidthMm' | 'minKeepMm' | 'nominalToleranceMm',
+    label: string,
+    hint: string,
+    min = 1,
+  ) => (
     <Field label={label} hint={hint} error={issue(key)}>
       {(p) => (
         <input
           {...p}
           type="number"
-          min={1}
+          min={min}
           value={draft[key]}
           onChange={(e) => onChange({ [key]: e.target.value })}
         />
@@ -75,6 +81,12 @@ export function SectionTradeFields({
       {mm('finishedThicknessMm', 'Finished thickness (mm)', 'What it measures; empty: as nominal.')}
       {mm('finishedWidthMm', 'Finished width (mm)', 'Planed 22 × 100 measures about 18 × 94.')}
       {mm('minKeepMm', 'Shortest kept offcut (mm)', "Empty: the yard's setting.")}
+      {mm(
+        'nominalToleranceMm',
+        'Nominal pieces: up to (mm) short',
+        "For lines marked nominal, e.g. cladding sold with factory ends. Empty: the yard's setting.",
+        0,
+      )}
     </fieldset>
   );
 }

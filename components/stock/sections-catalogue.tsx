@@ -82,6 +82,9 @@ export function SectionsCatalogue({
                     MOISTURE_LABEL[s.moisture],
                     s.treatment,
                     s.minKeepMm ? `keeps offcuts from ${lengthText(s.minKeepMm, unit)}` : '',
+                    s.nominalToleranceMm !== null
+                      ? `nominal pieces up to ${s.nominalToleranceMm} mm short`
+                      : '',
                   ]
                     .filter(Boolean)
                     .join(' · ')}

@@ -16,6 +16,7 @@ export type SettingsValues = {
   displayUnit: DisplayUnit;
   region: Region;
   minSafePieceMm: number;
+  lengthToleranceMm: number;
   perCutChargePence: number;
   clearOffcutsAfterDays: number;
   vatRateBasisPoints: number;
@@ -44,6 +45,11 @@ const NUMBERS: [keyof SettingsValues, string, string][] = [
     'minSafePieceMm',
     'Minimum safe piece length (mm)',
     'Cut lists and forms refuse shorter pieces: the saw cannot hold them safely. Check it against your own risk assessment.',
+  ],
+  [
+    'lengthToleranceMm',
+    'Nominal pieces: up to (mm) short',
+    'Lines marked nominal (cladding, studs sold by nominal length) may be cut this much short, so two fit a board that is exactly twice as long, and a piece as long as a stock length is sold whole, uncut. Lines are exact unless marked nominal; a section may set its own figure. 0: nominal lines are cut exact too.',
   ],
   ['perCutChargePence', 'Charge per cut (pence)', 'Added to quotes for each saw cut.'],
   [

@@ -44,6 +44,33 @@ export function readQuantityCell(text: string, column = 'quantity'): Read<number
   return { ok: true, value };
 }
 
+const NOMINAL_WORDS = new Set(['nominal', 'nom', 'n', 'yes', 'y', 'short ok']);
+const EXACT_WORDS = new Set(['exact', 'e', 'no', 'x']);
+
+/**
+ * Exact or nominal: blank or "exact" is exact; "nominal" takes the section's tolerance (else the
+ * yard's); a number of millimetres ("5", "5 mm") is that tolerance, 0 meaning exact.
+ */
+export function readToleranceCell(
+  text: string,
+  maxMm: number,
+  column = 'tolerance',
+): Read<{ nominal: boolean; toleranceMm: number | null }> {
+  const word = text.trim().toLowerCase().replace(/\s+/g, ' ');
+  if (word === '' || EXACT_WORDS.has(word)) return { ok: true, value: { nominal: false, toleranceMm: 0 } };
+  if (NOMINAL_WORDS.has(word)) return { ok: true, value: { nominal: true, toleranceMm: null } };
+  const mm = /^(\d+)\s*(mm)?$/.exec(word);
+  if (!mm)
+    return fail(
+      column,
+      `"${text.trim()}" is not exact, nominal or a number of millimetres the piece may be short.`,
+    );
+  const value = Number(mm[1]);
+  if (value > maxMm)
+    return fail(column, `A nominal piece may be at most ${maxMm} mm short, not ${value} mm.`);
+  return { ok: true, value: { nominal: value > 0, toleranceMm: value } };
+}
+
 /** Free text, trimmed; blank becomes null. */
 export function readTextCell(
   text: string,

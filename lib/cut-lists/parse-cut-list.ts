@@ -1,4 +1,11 @@
-import { createFieldCollector, readLengthCell, readQuantityCell, readTextCell } from './field-readers';
+import { MAX_TOLERANCE_MM } from '@/lib/nominal/tolerance';
+import {
+  createFieldCollector,
+  readLengthCell,
+  readQuantityCell,
+  readTextCell,
+  readToleranceCell,
+} from './field-readers';
 import { importRows } from './import-rows';
 import type { ImportOptions, ImportResult } from './import-types';
 import type { ColumnSpec } from './match-columns';
@@ -12,6 +19,10 @@ export type CutListItem = {
   quantity: number;
   label: string | null;
   note: string | null;
+  /** Nominal with no figure: the section's tolerance (else the yard's), chosen when the job is saved. */
+  nominal?: boolean;
+  /** Millimetres the piece may be short, when the file gives a figure; absent or 0: exact. */
+  toleranceMm?: number | null;
   /** File line the row came from (header is line 1). */
   line: number;
 };
@@ -26,6 +37,12 @@ export const CUT_LIST_COLUMNS: ColumnSpec[] = [
   { key: 'quantity', synonyms: ['qty', 'count', 'pieces', 'pcs', 'number', 'no'], required: true },
   { key: 'label', synonyms: ['name', 'mark', 'part', 'piece'], required: false },
   { key: 'note', synonyms: ['notes', 'comment', 'comments', 'remark', 'remarks'], required: false },
+  // Optional: "exact", "nominal" or the millimetres a piece may be cut short.
+  {
+    key: 'tolerance',
+    synonyms: ['nominal', 'exact or nominal', 'fit', 'length fit', 'short by', 'tolerance mm'],
+    required: false,
+  },
 ];
 
 /**
@@ -50,6 +67,9 @@ export function parseCutList(csvText: string, options: ImportOptions): ImportRes
       const quantity = fields.take(readQuantityCell(cell('quantity')));
       const label = fields.take(readTextCell(cell('label'), 'label', 100));
       const note = fields.take(readTextCell(cell('note'), 'note', 500));
+      const fit = fields.take(readToleranceCell(cell('tolerance'), MAX_TOLERANCE_MM));
+      if (fit && length !== undefined && (fit.toleranceMm ?? 0) >= length)
+        fields.errors.push({ column: 'tolerance', message: 'The tolerance must be shorter than the piece.' });
       if (!section.ok || fields.errors.length > 0) return { ok: false, errors: fields.errors };
       return {
         ok: true,
@@ -59,6 +79,7 @@ export function parseCutList(csvText: string, options: ImportOptions): ImportRes
           quantity: quantity!,
           label: label ?? null,
           note: note ?? null,
+          ...(fit?.nominal ? fit : {}),
         },
       };
     },

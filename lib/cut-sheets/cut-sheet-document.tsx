@@ -6,6 +6,7 @@ import { groupIdenticalBoards } from '@/lib/plans/group-boards';
 import type { PlanViewData } from '@/lib/queries/plans';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import { PdfBoard } from './pdf-board';
+import { actualCutMm, cutLengthText, cutRange, FULL_LENGTH_WORDS } from '@/lib/plans/cut-words';
 import { PdfQuote } from './pdf-quote';
 
 const s = StyleSheet.create({
@@ -65,7 +66,7 @@ export function CutSheetDocument({
           const boards = plan.boards.filter((b) => b.sectionId === section.sectionId);
           const pieces = new Map<
             string,
-            { label: string; lengthMm: number; count: number; angle: string | null }
+            { label: string; lengthMm: number; count: number; angle: string | null; cuts: number[] }
           >();
           for (const b of boards)
             for (const p of b.pieces) {
@@ -75,8 +76,10 @@ export function CutSheetDocument({
                 lengthMm: p.lengthMm,
                 count: 0,
                 angle: angleLine(p, format),
+                cuts: [],
               };
               e.count += 1;
+              e.cuts.push(actualCutMm(p));
               pieces.set(key, e);
             }
           return (
@@ -89,6 +92,9 @@ export function CutSheetDocument({
                     <Text style={s.cell}>
                       {p.label || 'piece'}
                       {p.angle ? `\n${p.angle}` : ''}
+                      {p.cuts.some((c) => c !== p.lengthMm)
+                        ? `\nnominal, cut to ${cutRange(p.cuts, format)}`
+                        : ''}
                     </Text>
                     <Text style={s.num}>{format(p.lengthMm)}</Text>
                     <Text style={s.num}>× {p.count}</Text>
@@ -99,8 +105,10 @@ export function CutSheetDocument({
                 <View key={key} style={s.board} wrap={false}>
                   <Text>
                     {same.length} × {first.source === 'offcut' ? sourceNote(first.offcutId) : 'new'}{' '}
-                    {format(first.lengthMm)}: {first.pieces.map((p) => format(p.lengthMm)).join(' + ')} ·{' '}
-                    {remainderNote(first.keepRemainder, first.remainderMm)}
+                    {format(first.lengthMm)}:{' '}
+                    {first.fullLength
+                      ? `${first.pieces.map((p) => format(p.lengthMm)).join('')}, ${FULL_LENGTH_WORDS}`
+                      : `${first.pieces.map((p) => cutLengthText(p, format)).join(' + ')} · ${remainderNote(first.keepRemainder, first.remainderMm)}`}
                   </Text>
                   <PdfBoard
                     format={format}

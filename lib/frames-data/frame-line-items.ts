@@ -9,6 +9,8 @@ export type FrameJobLine = {
   angleTenths: number | null;
   /** The schedule's piece marks this line covers, e.g. "1.1, 2.3". */
   marks: string;
+  /** Sold by nominal length (cladding, common studs): the job takes the section's tolerance. */
+  nominal: boolean;
 };
 
 const angleTenths = (angle?: number) => (angle ? Math.round(angle * 10) : null);
@@ -34,10 +36,11 @@ function joinMarks(marks: string[]): string {
  * marks of every item summed into a line kept with it.
  */
 export function toFrameJobLines(items: readonly FrameItem[]): FrameJobLine[] {
-  // Fold the angle into the label key so a square and an angled piece of one length never merge.
+  // Fold the angle (and nominal) into the label key so a square and an angled piece, or a nominal and
+  // an exact one, of one length never merge.
   const keyed = items.map((item) => ({
     ...item,
-    label: `${item.label}\u0000${angleTenths(item.angle) ?? ''}`,
+    label: `${item.label}\u0000${angleTenths(item.angle) ?? ''}\u0000${item.nominal ? 'n' : ''}`,
   }));
   const marks = new Map<string, string[]>();
   for (const item of keyed) {
@@ -45,7 +48,7 @@ export function toFrameJobLines(items: readonly FrameItem[]): FrameJobLine[] {
     marks.set(key, [...(marks.get(key) ?? []), item.mark]);
   }
   return sumItemsBySection(keyed).lineItems.map((line) => {
-    const [label, tenths] = line.label.split('\u0000');
+    const [label, tenths, nominal] = line.label.split('\u0000');
     return {
       sectionId: line.sectionId,
       length: line.length,
@@ -54,6 +57,7 @@ export function toFrameJobLines(items: readonly FrameItem[]): FrameJobLine[] {
       note: line.note ?? '',
       angleTenths: tenths ? Number(tenths) : null,
       marks: joinMarks(marks.get(lineKey(line.sectionId, line.length, line.label)) ?? []),
+      nominal: nominal === 'n',
     };
   });
 }

@@ -5,6 +5,8 @@ import { jobItems, jobs, plans } from '@/db/schema';
 import { resolveJobCustomer } from '@/lib/customers/resolve-job-customer';
 import { AppError, notFound } from '@/lib/errors';
 import { nextJobReference } from '@/lib/jobs/next-job-reference';
+import { getSectionLimits } from '@/lib/jobs/section-limits';
+import { resolveTolerance, usableTolerance } from '@/lib/nominal/tolerance';
 import { generateFrameItems } from '@/lib/frames';
 import type { SendScheduleToJobBody } from '@/lib/validations/frames';
 import { assertKnownSections } from './assert-known-sections';
@@ -102,6 +104,7 @@ export async function sendScheduleToJob({
         .returning({ id: jobs.id });
       jobId = job.id;
     }
+    const limits = await getSectionLimits(tx);
     const [{ last }] = await tx
       .select({ last: sql<number>`coalesce(max(${jobItems.position}), -1)::int` })
       .from(jobItems)
@@ -116,6 +119,13 @@ export async function sendScheduleToJob({
         note: line.note,
         angleTenths: line.angleTenths,
         marks: line.marks,
+        toleranceMm: usableTolerance(
+          resolveTolerance({
+            nominal: line.nominal,
+            nominalDefaultMm: limits.nominalToleranceMm(line.sectionId),
+          }),
+          line.length,
+        ),
         frameScheduleId: scheduleId,
         position: last + 1 + k,
       })),

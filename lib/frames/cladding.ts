@@ -81,6 +81,8 @@ export function buildCladding(
           length: r1 - r0,
           note,
           outline,
+          // Cladding boards are sold by nominal length: factory ends, a few mm short is fine.
+          nominal: true,
         }),
       );
     }
@@ -101,6 +103,7 @@ export function buildCladding(
           length: longest,
           note: `waste allowance ${panel.wastePercent} %`,
           outline: [],
+          nominal: true,
         }),
       );
   }

@@ -23,6 +23,7 @@ const pieceKey = (p: FramePiece) =>
     Math.round(p.length),
     p.angle ? p.angle.toFixed(1) : '',
     p.note ?? '',
+    p.nominal ? 'nominal' : '',
   ].join('\u0000');
 
 /**
@@ -60,6 +61,7 @@ export function groupPieces(pieces: FramePiece[]): { items: FrameItem[]; markOf:
     };
     if (first.angle) item.angle = first.angle;
     if (first.note) item.note = first.note;
+    if (first.nominal) item.nominal = true;
     items.push(item);
     for (const p of group) markOf.set(p, mark);
   }

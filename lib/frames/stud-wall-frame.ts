@@ -139,7 +139,10 @@ export function buildStudWallFrame(
     });
   }
   centres.forEach((c, k) => {
-    if (!removed.has(k)) addToPlate(own, `${wall.name} stud`, wall.sectionId, c - t / 2, c + t / 2, base);
+    const added =
+      !removed.has(k) && addToPlate(own, `${wall.name} stud`, wall.sectionId, c - t / 2, c + t / 2, base);
+    // Square-topped common studs go out at nominal length (factory ends); angled tops are cut exact.
+    if (added && !topAngle) pieces[pieces.length - 1].nominal = true;
   });
 
   for (const { panel: o, index } of openings) {

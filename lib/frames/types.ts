@@ -26,6 +26,8 @@ export type FramePiece = {
   /** Cut angle off square in degrees (0 or absent = square ends). */
   angle?: number;
   note?: string;
+  /** Sold by nominal length (cladding boards, common studs): may be cut a few mm short. */
+  nominal?: boolean;
   /** Outline in the panel's drawing, millimetres, y up. */
   outline: Point[];
 };
@@ -40,6 +42,8 @@ export type FrameItem = {
   quantity: number;
   angle?: number;
   note?: string;
+  /** Sold by nominal length: the job line takes the section's (or yard's) tolerance. */
+  nominal?: boolean;
 };
 
 export type FrameItemsResult = { items: FrameItem[]; warnings: string[]; notice: string };

@@ -22,6 +22,7 @@ export async function getJobById({ jobId }: { jobId: number }) {
         label: jobItems.label,
         note: jobItems.note,
         marks: jobItems.marks,
+        toleranceMm: jobItems.toleranceMm,
         position: jobItems.position,
       })
       .from(jobItems)

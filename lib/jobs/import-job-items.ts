@@ -4,6 +4,7 @@ import { getDb } from '@/db';
 import { jobItems } from '@/db/schema';
 import { AppError } from '@/lib/errors';
 import { parseCutList, type ImportError } from '@/lib/cut-lists';
+import { resolveTolerance } from '@/lib/nominal/tolerance';
 import { openJobForItemEdits } from './open-job-for-item-edits';
 import { getSectionLimits } from './section-limits';
 
@@ -50,6 +51,11 @@ export async function importJobItems({
         quantity: item.quantity,
         label: item.label ?? '',
         note: item.note ?? '',
+        toleranceMm: resolveTolerance({
+          toleranceMm: item.toleranceMm,
+          nominal: item.nominal,
+          nominalDefaultMm: limits.nominalToleranceMm(Number(item.sectionId)),
+        }),
         position: next + i,
       }));
       for (let i = 0; i < rows.length; i += INSERT_BATCH)

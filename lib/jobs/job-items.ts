@@ -3,6 +3,7 @@ import { and, eq, sql } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { jobItems, type NewJobItem } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
+import { resolveTolerance } from '@/lib/nominal/tolerance';
 import { formatMillimetres, shortPieceMessage } from '@/lib/units';
 import type { JobItemFields } from '@/lib/validations/jobs';
 import { openJobForItemEdits } from './open-job-for-item-edits';
@@ -10,14 +11,16 @@ import { getSectionLimits } from './section-limits';
 
 type ItemFields = Partial<JobItemFields>;
 
-async function checkItemFits(
-  tx: Parameters<typeof getSectionLimits>[0],
+type SectionLimits = Awaited<ReturnType<typeof getSectionLimits>>;
+
+function checkItemFits(
+  limits: SectionLimits,
   sectionId: number,
   lengthMm: number,
   /** The length as typed; false when the length is unchanged (an old short piece may keep its length). */
   lengthText: string | undefined | false,
+  toleranceMm: number,
 ) {
-  const limits = await getSectionLimits(tx);
   const short =
     lengthText === false
       ? null
@@ -29,6 +32,10 @@ async function checkItemFits(
       issues: [{ path: 'sectionId', message: 'Choose a section the yard sells.' }],
     });
   const longest = limits.longestMm(sectionId);
+  if (toleranceMm >= lengthMm)
+    throw new AppError('invalid', 'The tolerance must be shorter than the piece.', {
+      issues: [{ path: 'toleranceMm', message: 'The tolerance must be shorter than the piece.' }],
+    });
   if (lengthMm > longest) {
     throw new AppError(
       'invalid',
@@ -56,7 +63,13 @@ export async function addJobItem({
   const db = await getDb();
   return db.transaction(async (tx) => {
     await openJobForItemEdits(tx, jobId);
-    await checkItemFits(tx, item.sectionId, item.length, item.lengthText);
+    const limits = await getSectionLimits(tx);
+    const toleranceMm = resolveTolerance({
+      toleranceMm: item.toleranceMm,
+      nominal: item.nominal,
+      nominalDefaultMm: limits.nominalToleranceMm(item.sectionId),
+    });
+    checkItemFits(limits, item.sectionId, item.length, item.lengthText, toleranceMm);
     const [{ next }] = await tx
       .select({ next: sql<number>`coalesce(max(${jobItems.position}), -1)::int + 1` })
       .from(jobItems)
@@ -70,6 +83,7 @@ export async function addJobItem({
         quantity: item.quantity,
         label: item.label,
         note: item.note,
+        toleranceMm,
         position: next,
       })
       .returning();
@@ -101,11 +115,21 @@ export async function updateJobItem({
     if (changes.quantity !== undefined) set.quantity = changes.quantity;
     if (changes.label !== undefined) set.label = changes.label;
     if (changes.note !== undefined) set.note = changes.note;
-    await checkItemFits(
-      tx,
-      set.sectionId ?? item.sectionId,
+    const sectionId = set.sectionId ?? item.sectionId;
+    const limits = await getSectionLimits(tx);
+    if (changes.toleranceMm !== undefined || changes.nominal !== undefined) {
+      set.toleranceMm = resolveTolerance({
+        toleranceMm: changes.toleranceMm,
+        nominal: changes.nominal ?? item.toleranceMm > 0,
+        nominalDefaultMm: limits.nominalToleranceMm(sectionId),
+      });
+    }
+    checkItemFits(
+      limits,
+      sectionId,
       set.lengthMm ?? item.lengthMm,
       changes.length !== undefined ? changes.lengthText : false,
+      set.toleranceMm ?? item.toleranceMm,
     );
     const [row] = await tx.update(jobItems).set(set).where(eq(jobItems.id, itemId)).returning();
     return row;

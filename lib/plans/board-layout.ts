@@ -3,14 +3,15 @@ export type BoardInput = {
   lengthMm: number;
   trimMm: number;
   kerfMm: number;
-  pieces: { lengthMm: number; label: string }[];
+  /** cutMm: the length actually cut (a nominal piece may be short of its listed lengthMm). */
+  pieces: { lengthMm: number; cutMm?: number; label: string }[];
   remainderMm: number;
   keepRemainder: boolean;
 };
 
 export type BoardPart =
   | { kind: 'trim' | 'kerf' | 'kept' | 'scrap'; startMm: number; lengthMm: number }
-  | { kind: 'piece'; startMm: number; lengthMm: number; label: string; index: number };
+  | { kind: 'piece'; startMm: number; lengthMm: number; listedMm: number; label: string; index: number };
 
 export function layOutBoard(board: BoardInput): BoardPart[] {
   const parts: BoardPart[] = [];
@@ -22,8 +23,16 @@ export function layOutBoard(board: BoardInput): BoardPart[] {
   }
   const remainderStart = board.lengthMm - board.remainderMm;
   board.pieces.forEach((piece, index) => {
-    parts.push({ kind: 'piece', startMm: at, lengthMm: piece.lengthMm, label: piece.label, index });
-    at += piece.lengthMm;
+    const cut = piece.cutMm ?? piece.lengthMm;
+    parts.push({
+      kind: 'piece',
+      startMm: at,
+      lengthMm: cut,
+      listedMm: piece.lengthMm,
+      label: piece.label,
+      index,
+    });
+    at += cut;
     // The last piece needs no kerf when it ends at the board's end.
     const kerf = Math.min(board.kerfMm, Math.max(0, board.lengthMm - at));
     if (kerf > 0) parts.push({ kind: 'kerf', startMm: at, lengthMm: kerf });

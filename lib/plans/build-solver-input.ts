@@ -1,8 +1,10 @@
 // Turns one section's line items, stock lengths and rack offcuts into the solver's input.
 import type { SolveInput } from '@/solver';
+import { usableTolerance } from '@/lib/nominal/tolerance';
 import { offcutSourceId, pieceIdFor, stockSourceId, type PlanSettings } from './plan-shapes';
 
-export type PlanningItem = { id: number; lengthMm: number; quantity: number };
+/** toleranceMm: how far short a nominal piece may be cut (0 or absent: exact). */
+export type PlanningItem = { id: number; lengthMm: number; quantity: number; toleranceMm?: number };
 export type PlanningStock = {
   id: number;
   lengthMm: number;
@@ -43,6 +45,11 @@ export function buildSolverInput({
       : [],
     pieces: items
       .filter((i) => i.quantity > 0)
-      .map((i) => ({ id: pieceIdFor(i.id), length: i.lengthMm, quantity: i.quantity })),
+      .map((i) => ({
+        id: pieceIdFor(i.id),
+        length: i.lengthMm,
+        quantity: i.quantity,
+        tolerance: usableTolerance(i.toleranceMm ?? 0, i.lengthMm),
+      })),
   };
 }

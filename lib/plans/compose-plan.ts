@@ -9,7 +9,7 @@ import {
   type PlanningStock,
 } from './build-solver-input';
 import type { PieceDetails, PlanSection, PlanSettings } from './plan-shapes';
-import { planBoardRows, summarisePlan } from './summarise-plan';
+import { planBoardRows, sawCuts, summarisePlan } from './summarise-plan';
 
 export type PlanningData = {
   items: (PlanningItem & {
@@ -59,7 +59,7 @@ export async function composePlan({
         source: b.source,
         length: b.length,
         cost: b.cost,
-        cuts: b.pieces.length,
+        cuts: sawCuts(b),
       })),
     })),
   });

@@ -11,7 +11,8 @@ export function groupIdenticalBoards(boards: PlanBoardView[]): BoardGroup[] {
       board.source,
       board.source === 'offcut' ? board.offcutId : board.lengthMm,
       board.trimMm,
-      board.pieces.map((p) => [p.lengthMm, p.label]),
+      board.pieces.map((p) => [p.lengthMm, p.cutMm, p.label]),
+      board.fullLength,
       board.remainderMm,
       board.keepRemainder,
     ]);

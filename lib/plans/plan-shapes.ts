@@ -53,6 +53,8 @@ export type BoardPiece = {
   lengthMm: number;
   /** Length actually cut: a nominal piece may be up to its tolerance short (plans before this: lengthMm). */
   cutMm?: number;
+  /** How far short the line may be cut (nominal pieces); absent: exact. Kept so a re-plan keeps it. */
+  toleranceMm?: number;
   markMm: number;
   /** An angled cut, from a frame schedule: degrees off square in tenths; the length is the long point. */
   angleTenths?: number;

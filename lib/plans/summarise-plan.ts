@@ -25,6 +25,10 @@ export type BoardRow = {
   fullLength: boolean;
 };
 
+/** Cuts the saw makes on a board: one per piece, none for a board sold full length. */
+export const sawCuts = (board: Pick<PlanBoard, 'pieces' | 'fullLength'>) =>
+  board.fullLength ? 0 : board.pieces.length;
+
 export function summarisePlan(sections: PlanSection[]): PlanTotals {
   const t: PlanTotals = {
     boards: 0,
@@ -59,7 +63,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     t.stockCostPence += Math.round(
       output.boards.filter((b) => b.source === 'stock').reduce((sum, b) => sum + b.cost, 0) * 100,
     );
-    t.cuts += output.boards.reduce((sum, b) => sum + b.pieces.length, 0);
+    t.cuts += output.boards.reduce((sum, b) => sum + sawCuts(b), 0);
     t.lowerBoundBoards += output.lowerBound.boards;
     t.lowerBoundPence! += boundPence(output.lowerBound);
     t.gapBoards += output.gap.boards;
@@ -103,7 +107,7 @@ export function planBoardRows(
         offcutId: source.kind === 'offcut' ? source.id : null,
         lengthMm: board.length,
         trimMm: board.trim,
-        pieces: boardPieces(board, input.kerf, labels),
+        pieces: boardPieces(board, input, labels),
         remainderMm: board.remainder,
         keepRemainder: board.remainderKept,
         fullLength: board.fullLength ?? false,
@@ -116,9 +120,11 @@ export function planBoardRows(
 /** The last piece may end exactly at the board's end, where no cut (and so no mark) is needed. */
 function boardPieces(
   board: Pick<PlanBoard, 'pieces' | 'pieceLengths' | 'cutLengths' | 'marks'>,
-  kerf: number,
+  input: Pick<PlanSection['input'], 'kerf' | 'pieces'>,
   labels: Map<number, string | PieceDetails>,
 ): BoardPiece[] {
+  const kerf = input.kerf;
+  const tolerance = new Map(input.pieces.map((p) => [p.id, p.tolerance ?? 0]));
   // Plans stored before nominal pieces carry no cut lengths: the ordered lengths were cut.
   const cuts = board.cutLengths ?? board.pieceLengths;
   let start = 0;
@@ -134,6 +140,7 @@ function boardPieces(
       label: details.label,
       lengthMm: board.pieceLengths[i],
       cutMm: cuts[i],
+      ...(tolerance.get(pieceId) ? { toleranceMm: tolerance.get(pieceId) } : {}),
       markMm,
       ...(details.angleTenths ? { angleTenths: details.angleTenths, cutNote: details.note ?? '' } : {}),
       ...(details.marks ? { marks: details.marks } : {}),

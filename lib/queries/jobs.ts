@@ -44,6 +44,8 @@ export type JobItemRow = {
   quantity: number;
   label: string;
   note: string;
+  /** Millimetres the piece may be cut short; 0: exact. */
+  toleranceMm: number;
   position: number;
 };
 
@@ -95,6 +97,9 @@ export type ItemBody = {
   quantity?: number;
   label?: string;
   note?: string;
+  /** Nominal without a figure: the section's tolerance, else the yard's. */
+  nominal?: boolean;
+  toleranceMm?: number | null;
 };
 
 export const addItemRequest = (jobId: number, body: ItemBody) =>

@@ -20,6 +20,8 @@ export type PlanBoardView = {
   pieces: BoardPiece[];
   remainderMm: number;
   keepRemainder: boolean;
+  /** One piece sold at the whole stock length: no trim, no cut (absent on older plans). */
+  fullLength?: boolean;
   status: BoardStatus;
 };
 

@@ -7,6 +7,8 @@ export type SectionOption = {
   id: number;
   code: string;
   name: string;
+  /** Tolerance a line marked nominal gets: the section's own, else the yard's. */
+  nominalDefaultMm: number;
   stockLengths: { id: number; lengthMm: number; pricePence: number; onHand: number | null }[];
 };
 
@@ -24,6 +26,7 @@ const toSectionOptions = (sections: SectionRow[]): SectionOption[] =>
       id: s.id,
       code: s.code,
       name: s.name,
+      nominalDefaultMm: s.nominalDefaultMm,
       stockLengths: s.lengths.filter((l) => l.active),
     }));
 

@@ -26,6 +26,9 @@ export type SectionRow = {
   finishedWidthMm: number | null;
   moisture: MoistureState;
   minKeepMm: number | null;
+  /** How short a nominal piece may be; null: the yard's setting. */
+  nominalToleranceMm: number | null;
+  nominalDefaultMm: number;
   active: boolean;
   lengths: StockLengthRow[];
 };
@@ -39,7 +42,7 @@ export type MovementRow = {
   reason: string;
   userName: string | null;
 };
-export type SectionInput = Omit<SectionRow, 'id' | 'lengths'> & {
+export type SectionInput = Omit<SectionRow, 'id' | 'lengths' | 'nominalDefaultMm'> & {
   lengths: {
     id?: number;
     lengthMm: number;

@@ -27,7 +27,8 @@ export async function loadQuoteInput(db: DbOrTx, planId: number) {
     source: board.source,
     lengthMm: board.lengthMm,
     pricePence: board.source === 'stock' ? (pricePence ?? 0) : 0,
-    cuts: (board.pieces as unknown[]).length,
+    // A board sold full length goes out whole: no cut to charge.
+    cuts: board.fullLength ? 0 : (board.pieces as unknown[]).length,
   }));
   const sectionIds = [...new Set(boards.map((b) => b.sectionId))];
   const lengths = sectionIds.length

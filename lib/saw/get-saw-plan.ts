@@ -68,6 +68,7 @@ export async function getSawPlan({ planId }: { planId: number }) {
         pieces: b.pieces as BoardPiece[],
         remainderMm: b.remainderMm,
         keepRemainder: b.keepRemainder,
+        fullLength: b.fullLength,
         status: b.status,
         doneAt: b.doneAt,
         defectReason: b.defectReason,

@@ -27,6 +27,7 @@ export async function prepareReplan(
       id: p.jobItemId,
       lengthMm: p.lengthMm,
       quantity: 0,
+      toleranceMm: p.toleranceMm ?? 0,
       label: p.label,
     };
     item.quantity += 1;

@@ -2,15 +2,18 @@ import 'server-only';
 import { asc } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { sections, stockLengths } from '@/db/schema';
+import { nominalToleranceFor } from '@/lib/nominal/tolerance';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export type SectionWithLengths = Awaited<ReturnType<typeof listSections>>[number];
 
 /** The sections catalogue with each section's stock lengths, shortest first. Cost prices only when asked (owner). */
 export async function listSections({ withCost = false }: { withCost?: boolean } = {}) {
   const db = await getDb();
-  const [sectionRows, lengthRows] = await Promise.all([
+  const [sectionRows, lengthRows, yard] = await Promise.all([
     db.select().from(sections).orderBy(asc(sections.name)),
     db.select().from(stockLengths).orderBy(asc(stockLengths.lengthMm)),
+    getYardSettings(db),
   ]);
   return sectionRows.map((s) => ({
     id: s.id,
@@ -26,6 +29,12 @@ export async function listSections({ withCost = false }: { withCost?: boolean } 
     finishedWidthMm: s.finishedWidthMm,
     moisture: s.moisture,
     minKeepMm: s.minKeepMm,
+    nominalToleranceMm: s.nominalToleranceMm,
+    /** What a line marked nominal gets: the section's own figure, else the yard's. */
+    nominalDefaultMm: nominalToleranceFor({
+      sectionToleranceMm: s.nominalToleranceMm,
+      yardToleranceMm: yard.lengthToleranceMm,
+    }),
     active: s.active,
     lengths: lengthRows
       .filter((l) => l.sectionId === s.id)

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { JOB_LIST_SHOWS, JOB_STATUSES } from '@/db/enums';
+import { MAX_TOLERANCE_MM } from '@/lib/nominal/tolerance';
 import { lengthInputSchema } from '@/lib/units/length-input-schema';
 import { createCustomerBodySchema } from './customers';
 import { dbIdSchema } from './db-id';
@@ -82,6 +83,13 @@ const quantity = z
   .min(1, 'Quantity must be at least 1.')
   .max(10_000, 'Quantity must be at most 10 000.');
 
+/** Millimetres a nominal piece may be cut short; 0 = exact. */
+export const toleranceMmSchema = z
+  .number({ message: 'Enter how far short it may be, in whole millimetres.' })
+  .int('Enter how far short it may be, in whole millimetres.')
+  .min(0, 'A tolerance cannot be negative; 0 means exact.')
+  .max(MAX_TOLERANCE_MM, `A nominal piece may be at most ${MAX_TOLERANCE_MM} mm short.`);
+
 const itemFields = {
   sectionId: dbIdSchema('Choose a section.'),
   length: lengthInputSchema,
@@ -90,12 +98,24 @@ const itemFields = {
   quantity,
   label: z.string().trim().max(100),
   note: z.string().trim().max(500),
+  // Nominal without a figure takes the section's tolerance, then the yard's; a figure wins (0 = exact).
+  nominal: z.boolean(),
+  toleranceMm: toleranceMmSchema.nullable(),
 };
-const jobItemFields = z.object({
-  ...itemFields,
-  label: itemFields.label.default(''),
-  note: itemFields.note.default(''),
-});
+
+/** A tolerance must leave some of the piece: 2400 may be 5 mm short, 40 may not be 40 mm short. */
+const toleranceShorterThanPiece = (v: { length?: number; toleranceMm?: number | null }) =>
+  v.length === undefined || v.toleranceMm === undefined || v.toleranceMm === null || v.toleranceMm < v.length;
+const toleranceIssue = { message: 'The tolerance must be shorter than the piece.', path: ['toleranceMm'] };
+const jobItemFields = z
+  .object({
+    ...itemFields,
+    label: itemFields.label.default(''),
+    note: itemFields.note.default(''),
+    nominal: itemFields.nominal.default(false),
+    toleranceMm: itemFields.toleranceMm.optional(),
+  })
+  .refine(toleranceShorterThanPiece, toleranceIssue);
 
 /** Copies a typed length into `lengthText` before it is read as millimetres. */
 const keepTypedLength = (body: unknown) =>
@@ -115,7 +135,8 @@ export const updateJobItemBodySchema = z.preprocess(
     .object(itemFields)
     .partial()
     .strict()
-    .refine((v) => Object.keys(v).length > 0, 'Nothing to change.'),
+    .refine((v) => Object.keys(v).length > 0, 'Nothing to change.')
+    .refine(toleranceShorterThanPiece, toleranceIssue),
 );
 
 /** Largest cut list the import accepts, in bytes. */

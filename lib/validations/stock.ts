@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { toleranceMmSchema } from './jobs';
 import { MOISTURE_STATES } from '@/db/enums';
 import { dbIdSchema } from './db-id';
 
@@ -46,6 +47,8 @@ export const sectionBodySchema = z
     moisture: z.enum(MOISTURE_STATES, { message: 'Moisture is kiln dried, air dried or green.' }).optional(),
     /** Shortest remainder worth keeping of this section; null: the yard's minimum kept offcut. */
     minKeepMm: wholeMm('minimum keep length', 6000).nullable().optional(),
+    /** How short a nominal piece of this section may be cut; null: the yard's length tolerance. */
+    nominalToleranceMm: toleranceMmSchema.nullable().optional(),
     active: z.boolean().default(true),
     lengths: z
       .array(stockLengthInputSchema)

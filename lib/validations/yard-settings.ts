@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DISPLAY_UNITS, REGIONS } from '@/db/enums';
+import { MAX_TOLERANCE_MM } from '@/lib/nominal/tolerance';
 
 const mm = (what: string, max: number, min = 0) =>
   z
@@ -14,6 +15,8 @@ export const yardSettingsBodySchema = z.object({
   trimMm: mm('end trim', 100),
   minOffcutMm: mm('shortest kept offcut', 3000, 50),
   minSafePieceMm: mm('minimum safe piece length', 1000, 50).optional(),
+  // How short a line marked nominal may be cut, unless its section says otherwise.
+  lengthToleranceMm: mm('nominal length tolerance', MAX_TOLERANCE_MM).optional(),
   displayUnit: z.enum(DISPLAY_UNITS, { message: 'Choose millimetres or feet and inches.' }),
   region: z.enum(REGIONS, { message: 'Choose the United Kingdom or North America.' }).optional(),
   perCutChargePence: z.number().int('Whole pence.').min(0, 'A charge cannot be negative.').max(10_000),

@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest';
-import { runSolver } from '@/lib/plans/run-solver';
+import { afterAll, describe, expect, it } from 'vitest';
+import { runSolver, solverPoolStats, stopSolverThreads } from '@/lib/plans/run-solver';
 import type { SolveInput } from '@/solver';
 
 /** Many distinct lengths keep the search busy until its time limit. */
@@ -21,7 +21,10 @@ function longJob(timeLimitMs: number): SolveInput {
 }
 
 describe('runSolver', () => {
+  afterAll(() => stopSolverThreads());
+
   it('solves in a worker thread, so this thread keeps answering during a long solve', async () => {
+    await runSolver(longJob(200)); // a warm thread, so only the solve itself is measured
     let longestGapMs = 0;
     let last = performance.now();
     const ticker = setInterval(() => {
@@ -42,5 +45,35 @@ describe('runSolver', () => {
 
   it('passes a failure inside the worker back as a rejection, not a hang', async () => {
     await expect(runSolver({ ...longJob(200), pieces: null as never })).rejects.toThrow();
+  });
+
+  it('keeps its warm thread for the next plan instead of starting a new one', async () => {
+    await runSolver(longJob(200)); // the pool has a ready thread from here on
+    const before = solverPoolStats().started;
+    const first = await runSolver(longJob(200));
+    const second = await runSolver(longJob(200));
+    expect(first.unplaced).toEqual([]);
+    expect(second.unplaced).toEqual([]);
+    expect(solverPoolStats().started).toBe(before);
+    expect(solverPoolStats().alive).toBeGreaterThanOrEqual(1);
+  });
+
+  it('says clearly when the thread dies mid-solve, and the next solve starts a fresh one', async () => {
+    await runSolver(longJob(200));
+    const before = solverPoolStats().started;
+    const dying = runSolver(longJob(5_000));
+    const outcome = dying.then(
+      () => null,
+      (error: Error) => error,
+    );
+    await new Promise((r) => setTimeout(r, 300)); // the job is on the thread by now
+    await stopSolverThreads();
+    const error = await outcome;
+    expect(error?.message).toMatch(/cutting engine stopped unexpectedly/);
+    expect(solverPoolStats().alive).toBe(0);
+
+    const next = await runSolver(longJob(200));
+    expect(next.boards.flatMap((b) => b.pieces)).toHaveLength(540);
+    expect(solverPoolStats().started).toBe(before + 1);
   });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { solve, solveInputSchema } from '@/solver';
+import { buildModel } from '@/solver/model';
 import { checkPlan } from './plan-checker';
 
 // Check values from DESIGN.md, "Solver contract", full lengths and nominal pieces (kerf 3, trim 5;
@@ -73,5 +74,13 @@ describe('full lengths and nominal pieces (DESIGN.md check values)', () => {
     const plan = solve(input);
     expect(checkPlan(input, plan)).toEqual([]);
     expect(plan.boards[0].cutLengths).toEqual([2400]);
+  });
+
+  // DESIGN.md: only a piece with length − tolerance ≤ board ≤ length is sold at a stock length. A piece
+  // longer than a stock length never fits it, so it must not loosen the bounds to untrimmed boards.
+  it('only a piece that can take a whole stock length lets the bounds drop the trim', () => {
+    expect(buildModel(job([{ id: 'rail', length: 4000, quantity: 2 }])).relaxed).toBe(false);
+    expect(buildModel(job([{ id: 'post', length: 3600, quantity: 2 }])).relaxed).toBe(true);
+    expect(buildModel(job([{ id: 'clad', length: 2400, quantity: 4, tolerance: 5 }])).relaxed).toBe(true);
   });
 });

@@ -8,3 +8,7 @@ state.kerfwiseTestSession ??= { userId: null };
 vi.mock('@/lib/auth/read-session', () => ({
   readSessionUserId: async () => state.kerfwiseTestSession?.userId ?? null,
 }));
+
+// Solver threads run at normal priority in tests: the suites share two cores, and a plan whose search
+// yields to the other suites could stop at its time limit with a different plan.
+process.env.KERFWISE_SOLVER_NICE ??= '0';

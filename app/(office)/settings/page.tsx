@@ -26,6 +26,7 @@ export default async function SettingsPage() {
             displayUnit: s.displayUnit,
             region: s.region,
             minSafePieceMm: s.minSafePieceMm,
+            lengthToleranceMm: s.lengthToleranceMm,
             perCutChargePence: s.perCutChargePence,
             clearOffcutsAfterDays: s.clearOffcutsAfterDays,
             vatRateBasisPoints: s.vatRateBasisPoints,
