@@ -1,36 +1,33 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { Notice } from '@/components/ui/notice';
 import { ApiError, fetchJson } from '@/lib/queries/fetch-json';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 type RowError = { row: number; message: string };
 
 /** Uploads a customer CSV; all rows are added or none, and bad rows are listed. */
 export function CustomerImport() {
   const router = useRouter();
-  const [result, setResult] = useState<{ tone: 'info' | 'error'; text: string; rows?: RowError[] } | null>(
-    null,
-  );
-
-  async function upload(file: File) {
-    try {
-      const { imported } = await fetchJson<{ imported: number }>('/api/customers/import', {
+  const upload = useApiMutation({
+    mutationFn: async (file: File) =>
+      fetchJson<{ imported: number }>('/api/customers/import', {
         method: 'POST',
         headers: { 'content-type': 'text/csv' },
         body: await file.text(),
-      });
-      setResult({ tone: 'info', text: `${imported} customers added.` });
-      router.refresh();
-    } catch (err) {
-      const rows =
-        err instanceof ApiError
-          ? (err.body as { details?: { rows?: RowError[] } })?.details?.rows
-          : undefined;
-      setResult({ tone: 'error', text: (err as Error).message, rows });
-    }
-  }
+      }),
+    onSuccess: () => router.refresh(),
+  });
+  const rows =
+    upload.error instanceof ApiError
+      ? (upload.error.body as { details?: { rows?: RowError[] } })?.details?.rows
+      : undefined;
+  const result = upload.isSuccess
+    ? { tone: 'info' as const, text: `${upload.data.imported} customers added.`, rows: undefined }
+    : upload.isError
+      ? { tone: 'error' as const, text: upload.error.message, rows }
+      : null;
 
   return (
     <div className="space-y-3">
@@ -42,7 +39,7 @@ export function CustomerImport() {
         type="file"
         accept=".csv,text/csv"
         aria-label="Customer CSV"
-        onChange={(e) => e.target.files?.[0] && upload(e.target.files[0])}
+        onChange={(e) => e.target.files?.[0] && upload.mutate(e.target.files[0])}
       />
       {result && (
         <Notice tone={result.tone}>

@@ -1,6 +1,5 @@
 'use client';
 
-import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
@@ -23,6 +22,7 @@ import { SendToJobForm, type OpenJob } from './send-to-job-form';
 import { StructureNotice } from './structure-notice';
 import { panelIssues, useFramePreview } from './use-frame-preview';
 import { useUnsavedWarning } from './use-unsaved-warning';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 type Props = { schedule: FrameScheduleDto; sections: FrameSectionOption[]; openJobs: OpenJob[] };
 
@@ -48,7 +48,7 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
   );
   const previewIssues = panelIssues(preview.error);
 
-  const save = useMutation({
+  const save = useApiMutation({
     mutationFn: () => saveFrameScheduleRequest(schedule.id, body),
     onSuccess: () => {
       setSavedKey(bodyKey);
@@ -56,11 +56,11 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
     },
   });
   const saveIssues = panelIssues(save.error);
-  const copy = useMutation({
+  const copy = useApiMutation({
     mutationFn: () => copyFrameScheduleRequest(schedule.id),
     onSuccess: (s) => router.push(`/frames/${s.id}`),
   });
-  const remove = useMutation({
+  const remove = useApiMutation({
     mutationFn: () => deleteFrameScheduleRequest(schedule.id),
     onSuccess: () => router.push('/frames'),
   });

@@ -1,24 +1,21 @@
 'use client';
 
-import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import { ApiError } from '@/lib/queries/fetch-json';
 import { createFrameScheduleRequest, type FrameUnit } from '@/lib/queries/frames';
+import { fieldIssues } from '@/lib/queries/field-errors';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 /** Starts an empty schedule and opens it in the editor. */
 export function NewScheduleForm() {
   const router = useRouter();
-  const create = useMutation({
+  const create = useApiMutation({
     mutationFn: createFrameScheduleRequest,
     onSuccess: (s) => router.push(`/frames/${s.id}`),
   });
-  const issues =
-    create.error instanceof ApiError
-      ? ((create.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-      : [];
+  const issues = fieldIssues(create.error);
   const error = (path: string) => issues.find((i) => i.path === path)?.message;
 
   function onSubmit(event: React.FormEvent<HTMLFormElement>) {

@@ -1,6 +1,5 @@
 'use client';
 
-import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { CustomerPicker } from '@/components/customers/customer-picker';
@@ -11,6 +10,8 @@ import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
 import type { CustomerChoice } from '@/lib/queries/customers';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { sendScheduleToJobRequest, type SendToJobRequest } from '@/lib/queries/frames';
+import { fieldIssues } from '@/lib/queries/field-errors';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 export type OpenJob = { id: number; reference: string; customerName: string; status: string };
 
@@ -34,17 +35,14 @@ export function SendToJobForm({
 }: Props) {
   const router = useRouter();
   const [target, setTarget] = useState<'new' | 'existing'>('new');
-  const send = useMutation({
+  const send = useApiMutation({
     mutationFn: async (body: SendToJobRequest) => {
       await beforeSend();
       return sendScheduleToJobRequest(scheduleId, body);
     },
     onSuccess: ({ jobId }) => router.push(`/jobs/${jobId}`),
   });
-  const issues =
-    send.error instanceof ApiError
-      ? ((send.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-      : [];
+  const issues = fieldIssues(send.error);
   const error = (path: string) => issues.find((i) => i.path === path)?.message;
   // The job already holds this schedule's pieces: the server asks before adding a second set.
   const alreadySent =

@@ -1,19 +1,16 @@
 'use client';
 
-import { useMutation } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import type { FrameSchedulePanelInput } from '@/lib/frames';
-import { ApiError } from '@/lib/queries/fetch-json';
 import { previewFramesRequest, type FramePreviewDto, type FrameUnit } from '@/lib/queries/frames';
+import { fieldIssues } from '@/lib/queries/field-errors';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 type Body = { unit: FrameUnit; panels: FrameSchedulePanelInput[] };
 
 /** Field messages by panel index and field name, from a 422's `panels.2.centres` paths. */
 export function panelIssues(error: unknown) {
-  const issues =
-    error instanceof ApiError
-      ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-      : [];
+  const issues = fieldIssues(error);
   const byPanel: Record<number, Record<string, string>> = {};
   const top: Record<string, string> = {};
   for (const issue of issues) {
@@ -30,7 +27,7 @@ export function useFramePreview(body: Body | null) {
   const [sentKey, setSentKey] = useState<string | null>(null);
   // The last good answer stays on screen while the next one is on its way, so drawings do not flicker.
   const [lastGood, setLastGood] = useState<FramePreviewDto | undefined>(undefined);
-  const { mutate, ...preview } = useMutation({ mutationFn: previewFramesRequest, onSuccess: setLastGood });
+  const { mutate, ...preview } = useApiMutation({ mutationFn: previewFramesRequest, onSuccess: setLastGood });
   useEffect(() => {
     if (!key || key === sentKey) return;
     const timer = setTimeout(() => {

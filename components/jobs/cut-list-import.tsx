@@ -11,9 +11,10 @@ import { buildYardCutListTemplate } from '@/lib/cut-lists/yard-template';
 import { cn } from '@/lib/cn';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { importItemsRequest } from '@/lib/queries/jobs';
-import { sectionsQuery } from '@/lib/queries/sections';
+import { sectionOptionsQuery } from '@/lib/queries/sections';
 import { MAX_IMPORT_BYTES } from '@/lib/validations/jobs';
 import { ImportErrors, type RowError } from './import-errors';
+import { jobKeys } from '@/lib/queries/query-keys';
 
 type Outcome =
   { kind: 'done'; text: string } | { kind: 'errors'; summary: string; errors: RowError[] } | null;
@@ -26,7 +27,7 @@ const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'
  */
 export function CutListImport({ jobId }: { jobId: number }) {
   const queryClient = useQueryClient();
-  const sections = useQuery(sectionsQuery());
+  const sections = useQuery(sectionOptionsQuery());
   const [outcome, setOutcome] = useState<Outcome>(null);
   const [busy, setBusy] = useState(false);
   const [replace, setReplace] = useState(false);
@@ -42,7 +43,7 @@ export function CutListImport({ jobId }: { jobId: number }) {
         text: `Imported ${imported} row${imported === 1 ? '' : 's'} from ${source}.`,
       });
       setPasted('');
-      await queryClient.invalidateQueries({ queryKey: ['job', jobId] });
+      await queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
     } catch (error) {
       const errors =
         error instanceof ApiError

@@ -12,10 +12,11 @@ import {
   type ItemBody,
   type JobItemRow,
 } from '@/lib/queries/jobs';
-import { sectionsQuery } from '@/lib/queries/sections';
+import { sectionOptionsQuery } from '@/lib/queries/sections';
 import { ItemRow } from './item-row';
 import { sumItemsPerSection } from './section-totals';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { jobKeys } from '@/lib/queries/query-keys';
 
 const PAGE = 200;
 
@@ -30,11 +31,11 @@ export function ItemsTable({
   editable: boolean;
 }) {
   const queryClient = useQueryClient();
-  const sections = useQuery(sectionsQuery());
+  const sections = useQuery(sectionOptionsQuery());
   const { format, suffix } = useDisplayUnit();
   const [shown, setShown] = useState(PAGE);
   const [error, setError] = useState<string | null>(null);
-  const refresh = () => queryClient.invalidateQueries({ queryKey: ['job', jobId] });
+  const refresh = () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
   const mutate = useMutation({
     mutationFn: (run: () => Promise<unknown>) => run(),
     onMutate: () => setError(null),

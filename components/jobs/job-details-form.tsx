@@ -6,8 +6,8 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
-import { ApiError } from '@/lib/queries/fetch-json';
 import type { JobDetailsBody } from '@/lib/queries/jobs';
+import { fieldIssues } from '@/lib/queries/field-errors';
 
 type Values = { reference: string; dueDate: string; customerEmail: string; notes: string };
 const fieldNames: (keyof Values)[] = ['reference', 'dueDate', 'customerEmail', 'notes'];
@@ -42,10 +42,7 @@ export function JobDetailsForm({
         notes: v.notes,
       });
     } catch (error) {
-      const issues =
-        error instanceof ApiError
-          ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-          : [];
+      const issues = fieldIssues(error);
       setErrors({
         form: (error as Error).message,
         ...Object.fromEntries(issues.map((i) => [i.path, i.message])),

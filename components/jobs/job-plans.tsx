@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { formatPence } from '@/components/plans/money';
+import { formatPence } from '@/lib/format/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
 import {
   cancelPlanRunRequest,

@@ -13,6 +13,7 @@ import { ItemsTable } from './items-table';
 import { JobDetailsForm } from './job-details-form';
 import { JobPlans } from './job-plans';
 import { JobStatusBadge } from './job-status-badge';
+import { jobKeys } from '@/lib/queries/query-keys';
 
 /** Everything the yard hand does to one job: details, cut list, import, planning. */
 export function JobWorkspace({ jobId }: { jobId: number }) {
@@ -24,7 +25,7 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
   if (job.error) return <Notice tone="error">{job.error.message}</Notice>;
   const { job: j, items, plans } = job.data;
   const listEditable = j.status === 'draft' || j.status === 'planned';
-  const refresh = () => queryClient.invalidateQueries({ queryKey: ['job', jobId] });
+  const refresh = () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
   const setStatus = async (status: 'cancelled' | 'draft') => {
     setError(null);
     await updateJobRequest(jobId, { status }).then(refresh, (e: Error) => setError(e.message));

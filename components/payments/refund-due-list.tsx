@@ -1,12 +1,12 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { formatPence } from '@/lib/format/money';
 import { fetchJson } from '@/lib/queries/fetch-json';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import type { PaymentsOverview } from '@/lib/quotes/get-payments-overview';
 
 type Row = PaymentsOverview['refundsDue'][number];
@@ -25,26 +25,18 @@ export function RefundDueList({ rows }: { rows: Row[] }) {
 
 function RefundDueRow({ row }: { row: Row }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
+  const refund = useApiMutation({
+    mutationFn: (reason: string) =>
+      fetchJson<{ requestedPence: number }>(`/api/jobs/${row.jobId}/refund`, {
+        method: 'POST',
+        body: JSON.stringify({ reason }),
+      }),
+    onSuccess: () => router.refresh(),
+  });
 
-  async function submit(e: React.FormEvent<HTMLFormElement>) {
+  function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const reason = String(new FormData(e.currentTarget).get('reason') ?? '');
-    setBusy(true);
-    setMessage(null);
-    try {
-      const { requestedPence } = await fetchJson<{ requestedPence: number }>(
-        `/api/jobs/${row.jobId}/refund`,
-        { method: 'POST', body: JSON.stringify({ reason }) },
-      );
-      setMessage({ tone: 'info', text: `Refund of ${formatPence(requestedPence)} sent to the card.` });
-      router.refresh();
-    } catch (error) {
-      setMessage({ tone: 'error', text: (error as Error).message });
-    } finally {
-      setBusy(false);
-    }
+    refund.mutate(String(new FormData(e.currentTarget).get('reason') ?? ''));
   }
 
   return (
@@ -55,15 +47,18 @@ function RefundDueRow({ row }: { row: Row }) {
       </p>
       <form onSubmit={submit} className="flex flex-wrap items-end gap-3" noValidate>
         <div className="min-w-64 flex-1">
-          <Field label={`Reason for refunding ${row.reference}`}>
+          <Field label={`Reason for refunding ${row.reference}`} error={refund.fieldErrors.reason}>
             {(p) => <input {...p} name="reason" required maxLength={200} />}
           </Field>
         </div>
-        <Button type="submit" variant="danger" disabled={busy}>
-          {busy ? 'Refunding…' : `Refund ${formatPence(row.paidPence)}`}
+        <Button type="submit" variant="danger" disabled={refund.isPending}>
+          {refund.isPending ? 'Refunding…' : `Refund ${formatPence(row.paidPence)}`}
         </Button>
       </form>
-      {message && <Notice tone={message.tone}>{message.text}</Notice>}
+      {refund.isSuccess && (
+        <Notice>Refund of {formatPence(refund.data.requestedPence)} sent to the card.</Notice>
+      )}
+      {refund.isError && <Notice tone="error">{refund.error.message}</Notice>}
     </li>
   );
 }

@@ -1,5 +1,5 @@
 import type { PlanTotals } from '@/lib/plans/plan-shapes';
-import { formatPence } from './money';
+import { formatPence } from '@/lib/format/money';
 
 type Figures = Pick<PlanTotals, 'stockBoards' | 'stockCostPence' | 'offcutsUsed' | 'baseline'>;
 

@@ -6,7 +6,7 @@ import { actualCutMm, cutRange } from '@/lib/plans/cut-words';
 import { useFormatLength } from '@/components/units/display-unit';
 import type { PlanViewData } from '@/lib/queries/plans';
 import { DiagramLegend } from './diagram-legend';
-import { formatPounds } from './money';
+import { formatPounds } from '@/lib/format/money';
 import { PlanSectionBoards } from './plan-section-boards';
 
 type Job = { reference: string; customerName: string; dueDate: string | null };

@@ -1,5 +1,5 @@
 import type { PlanTotals } from '@/lib/plans/plan-shapes';
-import { formatPence } from './money';
+import { formatPence } from '@/lib/format/money';
 
 type GapFigures = Pick<PlanTotals, 'lowerBoundBoards' | 'gapBoards' | 'stockCostPence' | 'lowerBoundPence'>;
 

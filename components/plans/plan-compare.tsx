@@ -8,7 +8,7 @@ import { useFormatLength } from '@/components/units/display-unit';
 import { planQuery, type PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
 import { countBoardsByLength } from '@/lib/plans/group-boards';
-import { formatPence } from './money';
+import { formatPence } from '@/lib/format/money';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 
 type Row = {

@@ -5,7 +5,7 @@ import type { PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
 import { countBoardsByLength } from '@/lib/plans/group-boards';
 import { BaselineComparison } from './baseline-comparison';
-import { formatPence, formatPounds } from './money';
+import { formatPence, formatPounds } from '@/lib/format/money';
 
 /** Totals over the plan (boards per length, offcuts, waste, yield, kept) and the price. */
 export function PlanFigures({ plan }: { plan: PlanViewData }) {

@@ -13,6 +13,7 @@ import {
   unreleasePlanRequest,
   type PlanViewData,
 } from '@/lib/queries/plans';
+import { jobKeys, planKeys } from '@/lib/queries/query-keys';
 
 type Taken = { id: number; tag: string; status: string };
 
@@ -37,8 +38,8 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
     try {
       await request();
       await Promise.all([
-        queryClient.invalidateQueries({ queryKey: ['plan', plan.id] }),
-        queryClient.invalidateQueries({ queryKey: ['job', plan.jobId] }),
+        queryClient.invalidateQueries({ queryKey: planKeys.detail(plan.id) }),
+        queryClient.invalidateQueries({ queryKey: jobKeys.detail(plan.jobId) }),
       ]);
       router.refresh();
     } catch (e) {

@@ -7,15 +7,15 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
-import { ApiError } from '@/lib/queries/fetch-json';
 import { createPlanRequest, type PlanViewData } from '@/lib/queries/plans';
-import { sectionsQuery } from '@/lib/queries/sections';
+import { sectionOptionsQuery } from '@/lib/queries/sections';
+import { fieldIssues } from '@/lib/queries/field-errors';
 
 /** Plan the job again with other settings; the new plan opens beside a link to compare with this one. */
 export function ReplanForm({ plan }: { plan: PlanViewData }) {
   const router = useRouter();
   const fmt = useFormatLength();
-  const sections = useQuery(sectionsQuery());
+  const sections = useQuery(sectionOptionsQuery());
   const [busy, setBusy] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const planSections = (sections.data ?? []).filter((s) => plan.sections.some((p) => p.sectionId === s.id));
@@ -39,10 +39,7 @@ export function ReplanForm({ plan }: { plan: PlanViewData }) {
       });
       router.push(`/plans/${next.id}?previous=${plan.id}`);
     } catch (error) {
-      const issues =
-        error instanceof ApiError
-          ? ((error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-          : [];
+      const issues = fieldIssues(error);
       setErrors({
         form: (error as Error).message,
         ...Object.fromEntries(issues.map((i) => [i.path, i.message])),

@@ -4,6 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
 import { fetchJson } from '@/lib/queries/fetch-json';
+import { planKeys } from '@/lib/queries/query-keys';
 
 type Shortfall = {
   stockLengthId: number;
@@ -17,7 +18,7 @@ type Shortfall = {
 export function StockShortfalls({ planId }: { planId: number }) {
   const fmt = useFormatLength();
   const check = useQuery({
-    queryKey: ['plan', planId, 'stock-check'],
+    queryKey: planKeys.stockCheck(planId),
     queryFn: () => fetchJson<{ short: Shortfall[] }>(`/api/plans/${planId}/stock-check`),
   });
   if (!check.data || check.data.short.length === 0) return null;

@@ -9,6 +9,7 @@ import { createQuoteLinkRequest, revokeQuoteLinksRequest, type PlanViewData } fr
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { QuoteTable } from './quote-table';
 import { formatCustomerDate } from '@/lib/format/customer-date';
+import { planKeys } from '@/lib/queries/query-keys';
 
 /** The plan's quote for the office: figures, acceptance and payment, and the customer's link. */
 export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: boolean }) {
@@ -21,7 +22,7 @@ export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: b
     setMessage(null);
     try {
       await action();
-      await queryClient.invalidateQueries({ queryKey: ['plan', plan.id] });
+      await queryClient.invalidateQueries({ queryKey: planKeys.detail(plan.id) });
     } catch (e) {
       setMessage({ tone: 'error', text: (e as Error).message });
     }

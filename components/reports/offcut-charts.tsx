@@ -7,6 +7,7 @@ import type { OffcutReport } from '@/lib/reports/offcut-report';
 import { ChartPanel } from './chart-panel';
 import { legendText } from './legend-text';
 import { CHART, metres, shortWeek } from './chart-theme';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
 
 export function OffcutCharts({ report, clearAfterDays }: { report: OffcutReport; clearAfterDays: number }) {
   const weekly = report.weekly.map((w) => ({ ...w, label: shortWeek(w.week) }));
@@ -111,33 +112,27 @@ function OldestOffcuts({ report, clearAfterDays }: { report: OffcutReport; clear
       {report.oldest.length === 0 ? (
         <p className="mt-3 rounded-lg bg-shaving p-6 text-center text-bark-soft">The rack is empty.</p>
       ) : (
-        <table className="mt-3 w-full text-left text-sm">
-          <thead className="bg-shaving">
-            <tr>
-              <th className="p-1.5">Tag</th>
-              <th className="p-1.5">Section</th>
-              <th className="p-1.5">Length</th>
-              <th className="p-1.5">Where</th>
-              <th className="p-1.5">Age</th>
-            </tr>
-          </thead>
+        <Table className="mt-3 text-sm">
+          <TableHead density="compact" columns={['Tag', 'Section', 'Length', 'Where', 'Age']} />
           <tbody>
             {report.oldest.map((o) => (
-              <tr key={o.id} className="border-t border-shaving">
-                <td className="p-1.5 font-mono">{o.tag}</td>
-                <td className="p-1.5">{o.sectionName}</td>
-                <td className="p-1.5">{o.lengthMm} mm</td>
-                <td className="p-1.5">{o.location}</td>
-                <td className="p-1.5">
+              <TableRow key={o.id}>
+                <Cell density="compact" className="font-mono">
+                  {o.tag}
+                </Cell>
+                <Cell density="compact">{o.sectionName}</Cell>
+                <Cell density="compact">{o.lengthMm} mm</Cell>
+                <Cell density="compact">{o.location}</Cell>
+                <Cell density="compact">
                   {o.ageDays} days
                   {o.clearSuggested && (
                     <span className="ml-1 rounded bg-amber-light px-1 text-xs font-semibold">clear?</span>
                   )}
-                </td>
-              </tr>
+                </Cell>
+              </TableRow>
             ))}
           </tbody>
-        </table>
+        </Table>
       )}
     </div>
   );

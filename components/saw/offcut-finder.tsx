@@ -2,17 +2,17 @@
 // Find an offcut by scanning its label or typing its tag.
 import Link from 'next/link';
 import { useCallback, useState } from 'react';
-import { useMutation } from '@tanstack/react-query';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { findOffcutRequest, type OffcutBrief } from '@/lib/queries/saw';
 import { sawLength } from './format-saw-length';
 import { LabelScanner } from './label-scanner';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 export function OffcutFinder({ unit }: { unit: 'mm' | 'imperial' }) {
   const [tag, setTag] = useState('');
   const [scanning, setScanning] = useState(false);
-  const find = useMutation({ mutationFn: findOffcutRequest });
+  const find = useApiMutation({ mutationFn: findOffcutRequest });
   const { mutate } = find;
   const onScan = useCallback(
     (scanned: string) => {

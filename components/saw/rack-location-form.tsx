@@ -2,14 +2,14 @@
 // Change where a new offcut is racked before printing its label (screen only, never printed).
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { useMutation } from '@tanstack/react-query';
-import { moveOffcutRequest } from '@/lib/queries/saw';
+import { moveOffcutsRequest } from '@/lib/queries/offcuts';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 export function RackLocationForm({ offcutId, location }: { offcutId: number; location: string }) {
   const router = useRouter();
   const [value, setValue] = useState(location);
-  const move = useMutation({
-    mutationFn: () => moveOffcutRequest(offcutId, value.trim()),
+  const move = useApiMutation({
+    mutationFn: () => moveOffcutsRequest([offcutId], value.trim()),
     onSuccess: () => router.refresh(),
   });
   return (

@@ -15,6 +15,7 @@ import { DefectForm } from './defect-form';
 import { PastBoard } from './past-board';
 import { SafetyLine } from './safety-line';
 import { StationMessage, type Message } from './station-message';
+import { sawKeys } from '@/lib/queries/query-keys';
 
 export function SawStation({ planId }: { planId: number }) {
   const client = useQueryClient();
@@ -25,7 +26,7 @@ export function SawStation({ planId }: { planId: number }) {
   const [message, setMessage] = useState<Message | null>(null);
   // The stock count says this board's length is gone: ask before recording the cut.
   const [countQuestion, setCountQuestion] = useState<{ boardNo: number; text: string } | null>(null);
-  const refresh = () => client.invalidateQueries({ queryKey: ['saw'] });
+  const refresh = () => client.invalidateQueries({ queryKey: sawKeys.all });
   const moveOn = () => {
     setPicked(null);
     setNextCut(0);

@@ -1,12 +1,13 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { Region } from '@/db/enums';
+import { sectionKeys, stockKeys } from '@/lib/queries/query-keys';
 import { receiveStockRequest, type SectionRow } from '@/lib/queries/stock';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { stockLengthChoices } from './stock-length-label';
 
 type Line = { stockLengthId: string; quantity: string };
@@ -14,12 +15,12 @@ const emptyLine: Line = { stockLengthId: '', quantity: '' };
 
 /** A delivery: a reference and one line per stock length received. */
 export function ReceiveForm({ sections, region }: { sections: SectionRow[]; region: Region }) {
-  const queryClient = useQueryClient();
   const [reference, setReference] = useState('');
   const [lines, setLines] = useState<Line[]>([emptyLine]);
   const [done, setDone] = useState<string | null>(null);
   const choices = stockLengthChoices(sections, region);
-  const receive = useMutation({
+  const receive = useApiMutation({
+    invalidates: [sectionKeys.all, stockKeys.movements],
     mutationFn: () =>
       receiveStockRequest({
         reference,
@@ -30,10 +31,6 @@ export function ReceiveForm({ sections, region }: { sections: SectionRow[]; regi
       setDone(`Received ${boards} boards on ${reference}.`);
       setReference('');
       setLines([emptyLine]);
-      return Promise.all([
-        queryClient.invalidateQueries({ queryKey: ['sections'] }),
-        queryClient.invalidateQueries({ queryKey: ['stock-movements'] }),
-      ]);
     },
   });
   const setLine = (i: number, change: Partial<Line>) =>

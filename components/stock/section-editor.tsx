@@ -1,11 +1,11 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { sectionKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { SectionTradeFields, type TradeDraft } from './section-trade-fields';
 import { saveSectionRequest, type SectionInput, type SectionRow } from '@/lib/queries/stock';
 
@@ -61,9 +61,9 @@ function toDraft(s: SectionRow | null) {
 
 /** Adds or edits a section and its stock lengths. Counts on hand change only through deliveries and stocktakes. */
 export function SectionEditor({ section, onClose }: { section: SectionRow | null; onClose: () => void }) {
-  const queryClient = useQueryClient();
   const [draft, setDraft] = useState(() => toDraft(section));
-  const save = useMutation({
+  const save = useApiMutation({
+    invalidates: [sectionKeys.all],
     mutationFn: () => {
       const body: SectionInput = {
         ...draft.fields,
@@ -87,16 +87,9 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
       };
       return saveSectionRequest(section?.id ?? null, body);
     },
-    onSuccess: async () => {
-      await queryClient.invalidateQueries({ queryKey: ['sections'] });
-      onClose();
-    },
+    onSuccess: onClose,
   });
-  const issues =
-    save.error instanceof ApiError
-      ? ((save.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-      : [];
-  const issue = (path: string) => issues.find((i) => i.path === path)?.message;
+  const issue = (path: string) => save.fieldErrors[path];
   const setField = (key: keyof typeof draft.fields, value: string) =>
     setDraft({ ...draft, fields: { ...draft.fields, [key]: value } });
   const setLength = (i: number, change: Partial<LengthDraft>) =>

@@ -4,7 +4,7 @@ import { useQuery } from '@tanstack/react-query';
 import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit, Region } from '@/db/enums';
-import { sectionsQuery } from '@/lib/queries/stock';
+import { sectionsQuery } from '@/lib/queries/sections';
 import { ReceiveForm } from './receive-form';
 import { RecentMovements } from './recent-movements';
 import { SectionsCatalogue } from './sections-catalogue';

@@ -1,17 +1,17 @@
 'use client';
 
 import { stockLengthName } from '@/lib/units/stock-length-name';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { Region } from '@/db/enums';
+import { sectionKeys, stockKeys } from '@/lib/queries/query-keys';
 import { stocktakeRequest, type SectionRow } from '@/lib/queries/stock';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 /** Counted boards per stock length of one section; only lengths whose count changed are sent. */
 export function StocktakeForm({ sections, region }: { sections: SectionRow[]; region: Region }) {
-  const queryClient = useQueryClient();
   const [sectionId, setSectionId] = useState('');
   const [counts, setCounts] = useState<Record<number, string>>({});
   const [reason, setReason] = useState('');
@@ -20,7 +20,8 @@ export function StocktakeForm({ sections, region }: { sections: SectionRow[]; re
   const changed = (section?.lengths ?? []).filter(
     (l) => counts[l.id] !== undefined && counts[l.id] !== '' && Number(counts[l.id]) !== l.onHand,
   );
-  const save = useMutation({
+  const save = useApiMutation({
+    invalidates: [sectionKeys.all, stockKeys.movements],
     mutationFn: () =>
       stocktakeRequest({
         reason,
@@ -32,10 +33,6 @@ export function StocktakeForm({ sections, region }: { sections: SectionRow[]; re
       );
       setCounts({});
       setReason('');
-      return Promise.all([
-        queryClient.invalidateQueries({ queryKey: ['sections'] }),
-        queryClient.invalidateQueries({ queryKey: ['stock-movements'] }),
-      ]);
     },
   });
 

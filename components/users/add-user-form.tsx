@@ -1,29 +1,17 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ROLES, type Role } from '@/db/enums';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { userKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { createUserRequest } from '@/lib/queries/users';
 import { ROLE_NAMES } from './role-names';
 
-function fieldErrors(error: unknown): Record<string, string> {
-  const issues =
-    error instanceof ApiError
-      ? (error.body as { issues?: { path: string; message: string }[] })?.issues
-      : undefined;
-  return Object.fromEntries((issues ?? []).map((i) => [i.path, i.message]));
-}
-
 export function AddUserForm() {
-  const queryClient = useQueryClient();
-  const create = useMutation({
-    mutationFn: createUserRequest,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['users'] }),
-  });
-  const errors = fieldErrors(create.error);
+  const create = useApiMutation({ mutationFn: createUserRequest, invalidates: [userKeys.all] });
+  const errors = create.fieldErrors;
 
   function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();

@@ -1,29 +1,20 @@
 'use client';
 
-import { useMutation } from '@tanstack/react-query';
 import { signOut } from 'next-auth/react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { PASSWORD_MIN_LENGTH } from '@/lib/auth/password-rules';
-import { ApiError } from '@/lib/queries/fetch-json';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { changeOwnPasswordRequest } from '@/lib/queries/users';
-
-function fieldErrors(error: unknown): Record<string, string> {
-  const issues =
-    error instanceof ApiError
-      ? (error.body as { issues?: { path: string; message: string }[] })?.issues
-      : undefined;
-  return Object.fromEntries((issues ?? []).map((i) => [i.path, i.message]));
-}
 
 /** Changing the password ends every session, this one too, so the form signs out afterwards. */
 export function ChangePasswordForm() {
-  const change = useMutation({
+  const change = useApiMutation({
     mutationFn: changeOwnPasswordRequest,
     onSuccess: () => signOut({ callbackUrl: '/sign-in' }),
   });
-  const errors = fieldErrors(change.error);
+  const errors = change.fieldErrors;
 
   function onSubmit(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();

@@ -1,30 +1,31 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
 import { ROLES, type Role } from '@/db/enums';
+import { userKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { updateUserRequest, type UserRow as User } from '@/lib/queries/users';
 import { ROLE_NAMES } from './role-names';
+import { Cell, TableRow } from '@/components/ui/table';
 
 type Changes = Parameters<typeof updateUserRequest>[1];
 /** A role change or a disabling waits here until the owner confirms it. */
 type Pending = { changes: Changes; question: string; yes: string; saved: string };
 
 export function UserRow({ user, onError }: { user: User; onError: (message: string | null) => void }) {
-  const queryClient = useQueryClient();
   const [password, setPassword] = useState('');
   const [pending, setPending] = useState<Pending | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
-  const update = useMutation({
+  const update = useApiMutation({
     mutationFn: ({ changes }: { changes: Changes; saved: string }) => updateUserRequest(user.id, changes),
+    invalidates: [userKeys.all],
     onSuccess: (_, { saved }) => {
       onError(null);
       setPassword('');
       setPending(null);
       setSaved(saved);
-      return queryClient.invalidateQueries({ queryKey: ['users'] });
     },
     onError: (error) => onError(error.message),
   });
@@ -38,12 +39,12 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
   };
 
   return (
-    <tr className="border-t border-shaving align-middle" data-testid={`user-row-${user.email}`}>
-      <td className="p-3">
+    <TableRow className="align-middle" data-testid={`user-row-${user.email}`}>
+      <Cell>
         <div className="font-semibold">{user.name}</div>
         <div className="text-sm text-bark-soft">{user.email}</div>
-      </td>
-      <td className="p-3">
+      </Cell>
+      <Cell>
         <select
           aria-label={`Role of ${user.name}`}
           className={inputClass}
@@ -65,8 +66,8 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
             </option>
           ))}
         </select>
-      </td>
-      <td className="p-3">
+      </Cell>
+      <Cell>
         <form
           className="flex gap-2"
           onSubmit={(e) => {
@@ -87,8 +88,8 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
             Reset
           </Button>
         </form>
-      </td>
-      <td className="p-3">
+      </Cell>
+      <Cell>
         {user.role === 'yard_hand' && (
           <label className="mb-2 flex items-center gap-2 text-sm">
             <input
@@ -143,7 +144,7 @@ export function UserRow({ user, onError }: { user: User; onError: (message: stri
         <p role="status" className="mt-2 text-sm font-semibold text-spruce-dark" data-testid="user-saved">
           {saved}
         </p>
-      </td>
-    </tr>
+      </Cell>
+    </TableRow>
   );
 }

@@ -9,6 +9,7 @@ import { AddUserForm } from './add-user-form';
 import { UserRow } from './user-row';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { cn } from '@/lib/cn';
+import { Table, TableHead } from '@/components/ui/table';
 
 export function UsersManager() {
   const users = useQuery(usersQuery());
@@ -29,21 +30,14 @@ export function UsersManager() {
           </Notice>
         )}
         {users.data && (
-          <table className="w-full text-left" data-testid="users-table">
-            <thead className="bg-shaving text-sm">
-              <tr>
-                <th className="p-3">Person</th>
-                <th className="p-3">Role</th>
-                <th className="p-3">Password</th>
-                <th className="p-3">Access</th>
-              </tr>
-            </thead>
+          <Table data-testid="users-table">
+            <TableHead columns={['Person', 'Role', 'Password', 'Access']} />
             <tbody>
               {users.data.map((user) => (
                 <UserRow key={user.id} user={user} onError={setRowError} />
               ))}
             </tbody>
-          </table>
+          </Table>
         )}
       </ScrollRegion>
       <Card>

@@ -1,10 +1,11 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
-import { moveOffcutRequest, type OffcutRow } from '@/lib/queries/offcuts';
+import { moveOffcutsRequest, type OffcutRow } from '@/lib/queries/offcuts';
+import { offcutKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 /** Shows an offcut's rack location; the yard hand and owner can move it. */
 export function OffcutLocationCell({
@@ -16,15 +17,14 @@ export function OffcutLocationCell({
   canEdit: boolean;
   onError: (m: string | null) => void;
 }) {
-  const queryClient = useQueryClient();
   const [editing, setEditing] = useState(false);
   const [location, setLocation] = useState(offcut.location);
-  const move = useMutation({
-    mutationFn: () => moveOffcutRequest(offcut.id, location),
+  const move = useApiMutation({
+    mutationFn: () => moveOffcutsRequest([offcut.id], location.trim()),
+    invalidates: [offcutKeys.all],
     onSuccess: () => {
       onError(null);
       setEditing(false);
-      return queryClient.invalidateQueries({ queryKey: ['offcuts'] });
     },
     onError: (e) => onError(e.message),
   });

@@ -1,21 +1,18 @@
 'use client';
 
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useDropzone } from 'react-dropzone';
 import { Notice } from '@/components/ui/notice';
 import { OFFCUT_RACK_TEMPLATE_CSV, type ImportError } from '@/lib/cut-lists';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { importOffcutsRequest } from '@/lib/queries/offcuts';
+import { offcutKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 /** Enters an existing rack from a CSV file: all rows or none, with every bad row listed. */
 export function RackImport() {
-  const queryClient = useQueryClient();
   const [fileName, setFileName] = useState<string | null>(null);
-  const upload = useMutation({
-    mutationFn: importOffcutsRequest,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['offcuts'] }),
-  });
+  const upload = useApiMutation({ mutationFn: importOffcutsRequest, invalidates: [offcutKeys.all] });
   const { getRootProps, getInputProps, isDragActive } = useDropzone({
     accept: { 'text/csv': ['.csv'], 'text/plain': ['.txt'] },
     multiple: false,

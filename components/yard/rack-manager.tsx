@@ -10,7 +10,7 @@ import { offcutsQuery, rackQueryString, type RackFilters } from '@/lib/queries/o
 import { RackFiltersBar } from './rack-filters';
 import { RackImport } from './rack-import';
 import { RackTable } from './rack-table';
-import { ScrapBar } from './scrap-bar';
+import { ChosenOffcutsBar } from './chosen-offcuts-bar';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { cn } from '@/lib/cn';
 
@@ -66,9 +66,10 @@ export function RackManager({ unit, clearAfterDays, canEdit, sections, initial }
         />
       </Card>
       {chosen.size > 0 && (
-        <ScrapBar
+        <ChosenOffcutsBar
           ids={[...chosen]}
           canEdit={canEdit}
+          locations={data?.locations ?? []}
           onError={setError}
           onDone={(m) => {
             setMessage(m);

@@ -1,12 +1,12 @@
 'use client';
 
-import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit, Region } from '@/db/enums';
-import { ApiError, fetchJson } from '@/lib/queries/fetch-json';
+import { fetchJson } from '@/lib/queries/fetch-json';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 export type SettingsValues = {
   yardName: string;
@@ -81,7 +81,7 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
         string
       >,
   );
-  const save = useMutation({
+  const save = useApiMutation({
     mutationFn: () =>
       fetchJson('/api/settings', {
         method: 'PATCH',
@@ -96,11 +96,7 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
         }),
       }),
   });
-  const issues =
-    save.error instanceof ApiError
-      ? ((save.error.body as { issues?: { path: string; message: string }[] })?.issues ?? [])
-      : [];
-  const issue = (k: string) => issues.find((i) => i.path === k)?.message;
+  const issue = (k: string) => save.fieldErrors[k];
   const set = (k: keyof SettingsValues, v: string) => setValues({ ...values, [k]: v });
 
   return (

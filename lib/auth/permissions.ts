@@ -28,6 +28,8 @@ export const ACTIONS = {
   'offcuts:read': ['owner', 'yard_hand', 'saw_operator'],
   'offcuts:edit': ['owner', 'yard_hand'],
   'offcuts:label': ['owner', 'yard_hand', 'saw_operator'],
+  /** Saying where offcuts lie: the office moves them on the rack, the saw racks the ones it makes. */
+  'offcuts:move': ['owner', 'yard_hand', 'saw_operator'],
   'frames:edit': ['owner', 'yard_hand'],
   'reports:read': ['owner'],
   'customers:read': ['owner', 'yard_hand'],

@@ -1,10 +1,11 @@
 import 'server-only';
 import { sql } from 'drizzle-orm';
 import { getDb } from '@/db';
-import { offcuts, sections, stockLengths, stockMovements } from '@/db/schema';
+import { offcuts, sections, stockLengths } from '@/db/schema';
 import { parseOffcutRack, type ImportError } from '@/lib/cut-lists';
 import { AppError } from '@/lib/errors';
 import { issueOffcutTags } from './issue-offcut-tags';
+import { recordOffcutMovement } from './record-offcut-movement';
 
 /** The most offcuts one rack list may hold (a yard's whole rack is far smaller). */
 export const MAX_RACK_IMPORT_ROWS = 20_000;
@@ -73,7 +74,8 @@ export async function importOffcuts({ csv, userId }: { csv: string; userId: numb
       inserted.push(...(await tx.insert(offcuts).values(batch).returning()));
     }
     for (const batch of chunks(inserted, INSERT_BATCH_ROWS)) {
-      await tx.insert(stockMovements).values(
+      await recordOffcutMovement(
+        tx,
         batch.map((o) => ({
           at: now,
           kind: 'offcut_imported' as const,

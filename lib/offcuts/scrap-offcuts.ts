@@ -1,10 +1,11 @@
 import 'server-only';
 import { inArray } from 'drizzle-orm';
 import { getDb } from '@/db';
-import { offcuts, stockMovements } from '@/db/schema';
+import { offcuts } from '@/db/schema';
 import { AppError } from '@/lib/errors';
 import { getSectionPencePerMetre } from '@/lib/stock/section-prices';
 import type { ScrapOffcutsBody } from '@/lib/validations/offcuts';
+import { recordOffcutMovement } from './record-offcut-movement';
 
 /**
  * Scraps offcuts that lie on the rack, all or none: a reserved, used or scrapped offcut in the
@@ -36,7 +37,8 @@ export async function scrapOffcuts({ body, userId }: { body: ScrapOffcutsBody; u
       .update(offcuts)
       .set({ status: 'scrapped', scrapReason: body.reason, updatedAt: now })
       .where(inArray(offcuts.id, ids));
-    await tx.insert(stockMovements).values(
+    await recordOffcutMovement(
+      tx,
       rows.map((o) => ({
         at: now,
         kind: 'offcut_scrapped' as const,

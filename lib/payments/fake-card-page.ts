@@ -1,4 +1,6 @@
 // The local payment fake's own card page: plain HTML, no scripts.
+import { formatPence } from '../format/money';
+
 const escape = (text: string) => text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 export function cardPageHtml({
@@ -14,7 +16,7 @@ export function cardPageHtml({
   error?: string;
   cancelUrl: string;
 }) {
-  const amount = `£${(amountPence / 100).toFixed(2)}`;
+  const amount = formatPence(amountPence);
   return `<!doctype html><html lang="en"><head><meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1"><title>Pay ${amount} – local test payments</title>
 <style>

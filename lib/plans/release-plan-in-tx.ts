@@ -1,8 +1,9 @@
 // The release itself, inside a caller's transaction. No `server-only`: the demo seed releases plans too.
 import { and, eq, inArray, ne } from 'drizzle-orm';
 import type { Tx } from '@/db/client';
-import { jobs, offcuts, planBoards, plans, stockMovements } from '@/db/schema';
+import { jobs, offcuts, planBoards, plans } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 export async function releasePlanInTx(tx: Tx, { planId, userId }: { planId: number; userId: number }) {
   const [plan] = await tx.select().from(plans).where(eq(plans.id, planId)).for('update');
@@ -36,7 +37,8 @@ export async function releasePlanInTx(tx: Tx, { planId, userId }: { planId: numb
       .update(offcuts)
       .set({ status: 'reserved', reservedByPlanId: planId, updatedAt: now })
       .where(inArray(offcuts.id, offcutIds));
-    await tx.insert(stockMovements).values(
+    await recordOffcutMovement(
+      tx,
       rows.map((o) => ({
         at: now,
         kind: 'offcut_reserved' as const,

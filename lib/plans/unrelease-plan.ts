@@ -1,8 +1,9 @@
 import 'server-only';
 import { and, eq } from 'drizzle-orm';
 import { getDb } from '@/db';
-import { jobs, offcuts, planBoards, plans, stockMovements } from '@/db/schema';
+import { jobs, offcuts, planBoards, plans } from '@/db/schema';
 import { AppError, notFound } from '@/lib/errors';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 /** Takes a plan back from the saw before any board is cut, returning its offcuts to the rack. */
 export async function unreleasePlan({ planId, userId }: { planId: number; userId: number }) {
@@ -23,7 +24,8 @@ export async function unreleasePlan({ planId, userId }: { planId: number; userId
       .where(and(eq(offcuts.reservedByPlanId, planId), eq(offcuts.status, 'reserved')))
       .returning();
     if (reserved.length) {
-      await tx.insert(stockMovements).values(
+      await recordOffcutMovement(
+        tx,
         reserved.map((o) => ({
           kind: 'offcut_unreserved' as const,
           userId,

@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { Customer } from '@/db/schema';
 import { fetchJson } from './fetch-json';
+import { customerKeys } from './query-keys';
 
 export type NewCustomerBody = {
   name: string;
@@ -14,7 +15,7 @@ export type CustomerChoice = { customerId: number } | { newCustomer: NewCustomer
 
 export const customersQuery = (q: string) =>
   queryOptions({
-    queryKey: ['customers', q],
+    queryKey: customerKeys.search(q),
     queryFn: () =>
       fetchJson<{ customers: Customer[] }>(`/api/customers?q=${encodeURIComponent(q)}`).then(
         (r) => r.customers,

@@ -2,6 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import type { FrameItem, FrameSchedulePanel, FrameSchedulePanelInput } from '@/lib/frames';
 import type { CustomerChoice } from './customers';
 import { fetchJson } from './fetch-json';
+import { frameKeys } from './query-keys';
 
 export type FrameUnit = 'mm' | 'imperial';
 export type FrameScheduleDto = {
@@ -34,7 +35,7 @@ export type SendToJobRequest = { ifAlreadySent?: 'replace' | 'add' } & (
 
 export const frameScheduleQuery = (id: number) =>
   queryOptions({
-    queryKey: ['frame-schedules', id],
+    queryKey: frameKeys.detail(id),
     queryFn: () => fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}`).then((r) => r.schedule),
   });
 

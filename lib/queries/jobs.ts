@@ -4,6 +4,7 @@ import type { PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
 import type { PaymentState } from '@/lib/quotes/payment-state';
 import type { NewCustomerBody } from './customers';
 import { fetchJson } from './fetch-json';
+import { jobKeys } from './query-keys';
 
 export type JobFilters = {
   q?: string;
@@ -62,7 +63,7 @@ export type JobDetail = { job: JobRecord; items: JobItemRow[]; plans: JobPlanRow
 
 export const jobsQuery = (filters: JobFilters) =>
   queryOptions({
-    queryKey: ['jobs', filters],
+    queryKey: jobKeys.list(filters),
     queryFn: () => {
       const params = new URLSearchParams(Object.entries(filters).filter(([, v]) => v) as [string, string][]);
       return fetchJson<{ jobs: JobListRow[] }>(`/api/jobs?${params}`).then((r) => r.jobs);
@@ -70,7 +71,10 @@ export const jobsQuery = (filters: JobFilters) =>
   });
 
 export const jobQuery = (jobId: number) =>
-  queryOptions({ queryKey: ['job', jobId], queryFn: () => fetchJson<JobDetail>(`/api/jobs/${jobId}`) });
+  queryOptions({
+    queryKey: jobKeys.detail(jobId),
+    queryFn: () => fetchJson<JobDetail>(`/api/jobs/${jobId}`),
+  });
 
 export type JobDetailsBody = Partial<{ customerId: number; newCustomer: NewCustomerBody }> & {
   customer?: string;

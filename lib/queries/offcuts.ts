@@ -1,6 +1,8 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import type { OffcutStatus } from '@/db/enums';
+import type { moveOffcuts } from '@/lib/offcuts/move-offcuts';
 import { fetchJson } from './fetch-json';
+import { offcutKeys } from './query-keys';
 
 export type OffcutRow = {
   id: number;
@@ -43,13 +45,17 @@ export const rackQueryString = (filters: Partial<RackFilters>) =>
 
 export const offcutsQuery = (filters: Partial<RackFilters>) =>
   queryOptions({
-    queryKey: ['offcuts', filters],
+    queryKey: offcutKeys.list(filters),
     queryFn: () => fetchJson<OffcutPage>(`/api/offcuts?${rackQueryString(filters)}`),
     placeholderData: keepPreviousData,
   });
 
-export const moveOffcutRequest = (offcutId: number, location: string) =>
-  fetchJson(`/api/offcuts/${offcutId}`, { method: 'PATCH', body: JSON.stringify({ location }) });
+/** Moves one offcut or many to a rack location: the rack's bulk move, its row move and the saw's labels. */
+export const moveOffcutsRequest = (ids: number[], location: string) =>
+  fetchJson<Awaited<ReturnType<typeof moveOffcuts>>>('/api/offcuts/move', {
+    method: 'POST',
+    body: JSON.stringify({ ids, location }),
+  });
 
 export const scrapOffcutsRequest = (ids: number[], reason: string) =>
   fetchJson<{ scrapped: number }>('/api/offcuts/scrap', {

@@ -6,6 +6,7 @@ import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import type { PaymentState } from '@/lib/quotes/payment-state';
 import type { ReleasePlanBody } from '@/lib/validations/quotes';
 import { fetchJson } from './fetch-json';
+import { planKeys } from './query-keys';
 
 export type PlanBoardView = {
   id: number;
@@ -41,7 +42,7 @@ export type PlanViewData = {
 
 export const planQuery = (planId: number) =>
   queryOptions({
-    queryKey: ['plan', planId],
+    queryKey: planKeys.detail(planId),
     queryFn: () => fetchJson<PlanViewData>(`/api/plans/${planId}`),
   });
 

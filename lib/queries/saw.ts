@@ -4,20 +4,21 @@ import type { SawQueueEntry } from '@/lib/saw/get-saw-queue';
 import type { OffcutBrief } from '@/lib/saw/find-offcut';
 import type { ReportDefectBody } from '@/lib/validations/saw';
 import { fetchJson } from './fetch-json';
+import { planKeys, sawKeys } from './query-keys';
 
 export type { SawPlan, SawQueueEntry, OffcutBrief };
 export type SawBoard = SawPlan['boards'][number];
 
 export const sawQueueQuery = () =>
   queryOptions({
-    queryKey: ['saw', 'queue'],
+    queryKey: sawKeys.queue,
     queryFn: () => fetchJson<{ queue: SawQueueEntry[] }>('/api/saw/queue').then((r) => r.queue),
     refetchInterval: 5_000,
   });
 
 export const sawPlanQuery = (planId: number) =>
   queryOptions({
-    queryKey: ['saw', 'plan', planId],
+    queryKey: sawKeys.plan(planId),
     queryFn: () => fetchJson<SawPlan>(`/api/saw/plans/${planId}`),
     refetchInterval: 15_000,
   });
@@ -25,7 +26,7 @@ export const sawPlanQuery = (planId: number) =>
 /** The office's view of a plan's boards (the plan API), polled for live saw progress. */
 export const planProgressQuery = (planId: number) =>
   queryOptions({
-    queryKey: ['plans', planId, 'progress'],
+    queryKey: planKeys.progress(planId),
     queryFn: () =>
       fetchJson<{ status: string; boards: { status: string }[] }>(`/api/plans/${planId}`).then((p) => ({
         status: p.status,
@@ -69,9 +70,3 @@ export const reportDefectRequest = (planId: number, boardNo: number, body: Repor
 
 export const findOffcutRequest = (tag: string) =>
   fetchJson<{ offcut: OffcutBrief }>(`/api/saw/offcuts?tag=${encodeURIComponent(tag)}`).then((r) => r.offcut);
-
-export const moveOffcutRequest = (offcutId: number, location: string) =>
-  fetchJson<{ offcut: { id: number; location: string } }>(`/api/saw/offcuts/${offcutId}`, {
-    method: 'PATCH',
-    body: JSON.stringify({ location }),
-  });

@@ -1,5 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { fetchJson } from './fetch-json';
+import { sectionKeys } from './query-keys';
+import type { SectionRow } from './stock';
 
 export type SectionOption = {
   id: number;
@@ -10,27 +12,24 @@ export type SectionOption = {
   stockLengths: { id: number; lengthMm: number; pricePence: number; onHand: number | null }[];
 };
 
-type CatalogueSection = Omit<SectionOption, 'stockLengths'> & {
-  active: boolean;
-  lengths: (SectionOption['stockLengths'][number] & { active: boolean })[];
-};
-
-/** Sections a cut list may use: the active ones, with their active stock lengths. */
+/** The sections catalogue (every section and stock length, active or not): the one fetch of it. */
 export const sectionsQuery = () =>
   queryOptions({
-    // Under ['sections'] so the stock pages' invalidations refresh it too; its own key because the shape differs.
-    queryKey: ['sections', 'cut-list-options'],
-    queryFn: () =>
-      fetchJson<{ sections: CatalogueSection[] }>('/api/sections').then((r) =>
-        r.sections
-          .filter((s) => s.active)
-          .map((s) => ({
-            id: s.id,
-            code: s.code,
-            name: s.name,
-            nominalDefaultMm: s.nominalDefaultMm,
-            stockLengths: s.lengths.filter((l) => l.active),
-          })),
-      ),
-    staleTime: 5 * 60_000,
+    queryKey: sectionKeys.all,
+    queryFn: () => fetchJson<{ sections: SectionRow[] }>('/api/sections').then((r) => r.sections),
   });
+
+const toSectionOptions = (sections: SectionRow[]): SectionOption[] =>
+  sections
+    .filter((s) => s.active)
+    .map((s) => ({
+      id: s.id,
+      code: s.code,
+      name: s.name,
+      nominalDefaultMm: s.nominalDefaultMm,
+      stockLengths: s.lengths.filter((l) => l.active),
+    }));
+
+/** Sections a cut list may use: the active ones, with their active stock lengths (same cache as the catalogue). */
+export const sectionOptionsQuery = () =>
+  queryOptions({ ...sectionsQuery(), select: toSectionOptions, staleTime: 5 * 60_000 });

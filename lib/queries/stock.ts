@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { MoistureState } from '@/db/enums';
 import { fetchJson } from './fetch-json';
+import { stockKeys } from './query-keys';
 
 export type StockLengthRow = {
   id: number;
@@ -52,15 +53,9 @@ export type SectionInput = Omit<SectionRow, 'id' | 'lengths' | 'nominalDefaultMm
   }[];
 };
 
-export const sectionsQuery = () =>
-  queryOptions({
-    queryKey: ['sections'],
-    queryFn: () => fetchJson<{ sections: SectionRow[] }>('/api/sections').then((r) => r.sections),
-  });
-
 export const stockMovementsQuery = () =>
   queryOptions({
-    queryKey: ['stock-movements'],
+    queryKey: stockKeys.movements,
     queryFn: () => fetchJson<{ movements: MovementRow[] }>('/api/stock/movements').then((r) => r.movements),
   });
 

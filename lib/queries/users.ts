@@ -1,6 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { Role } from '@/db/enums';
 import { fetchJson } from './fetch-json';
+import { userKeys } from './query-keys';
 
 export type UserRow = {
   id: number;
@@ -13,7 +14,7 @@ export type UserRow = {
 
 export const usersQuery = () =>
   queryOptions({
-    queryKey: ['users'],
+    queryKey: userKeys.all,
     queryFn: () => fetchJson<{ users: UserRow[] }>('/api/users').then((r) => r.users),
   });
 

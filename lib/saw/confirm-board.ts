@@ -1,12 +1,13 @@
 import 'server-only';
 import { and, eq } from 'drizzle-orm';
 import { getDb } from '@/db';
-import { offcuts, planBoards, stockMovements } from '@/db/schema';
+import { offcuts, planBoards } from '@/db/schema';
 import { AppError } from '@/lib/errors';
 import { assertAtSaw, loadBoardForSaw } from './load-board';
 import { makeOffcut } from './make-offcut';
 import { recordStockCut } from './record-stock-cut';
 import { planProgress, settlePlanStatus } from './settle-plan-status';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 /**
  * Confirms a board cut: its pieces count as cut, a consumed offcut leaves the rack, a kept remainder
@@ -70,7 +71,7 @@ export async function confirmBoard({
           'conflict',
           `The offcut for board ${boardNo} is no longer reserved for this plan.`,
         );
-      await tx.insert(stockMovements).values({
+      await recordOffcutMovement(tx, {
         at,
         kind: 'offcut_used',
         userId,

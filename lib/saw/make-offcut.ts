@@ -1,7 +1,8 @@
 // A kept remainder (or the sound part of a bad board) tagged and put on the rack.
 import type { Tx } from '@/db';
-import { offcuts, stockMovements } from '@/db/schema';
+import { offcuts } from '@/db/schema';
 import { issueOffcutTag } from '@/lib/offcuts/issue-offcut-tags';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 /** Where a new offcut waits until someone racks it; the label screen can change it. */
 export const DEFAULT_OFFCUT_LOCATION = 'Rack intake';
@@ -34,7 +35,7 @@ export async function makeOffcut(
       updatedAt: o.at,
     })
     .returning();
-  await tx.insert(stockMovements).values({
+  await recordOffcutMovement(tx, {
     at: o.at,
     kind: 'offcut_made',
     userId: o.userId,

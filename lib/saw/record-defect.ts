@@ -4,6 +4,7 @@ import type { Tx } from '@/db';
 import { offcuts, planBoards, stockLengths, stockMovements, type Job, type PlanBoard } from '@/db/schema';
 import { makeOffcut } from './make-offcut';
 import { recordStockCut } from './record-stock-cut';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 export async function recordDefect(
   tx: Tx,
@@ -65,7 +66,7 @@ export async function recordDefect(
       .set({ status: 'scrapped', reservedByPlanId: null, scrapReason: `Defect: ${why}`, updatedAt: at })
       .where(eq(offcuts.id, board.offcutId))
       .returning();
-    await tx.insert(stockMovements).values({
+    await recordOffcutMovement(tx, {
       at,
       kind: 'offcut_scrapped',
       userId,

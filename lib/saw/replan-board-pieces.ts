@@ -2,20 +2,12 @@
 // between two steps: prepareReplan reads (no transaction), writeReplan re-checks and writes inside one.
 import { and, asc, eq, inArray, max } from 'drizzle-orm';
 import type { DbOrTx, Tx } from '@/db';
-import {
-  jobs,
-  offcuts,
-  planBoards,
-  sections,
-  stockLengths,
-  stockMovements,
-  type Job,
-  type PlanBoard,
-} from '@/db/schema';
+import { jobs, offcuts, planBoards, sections, stockLengths, type Job, type PlanBoard } from '@/db/schema';
 import { buildSolverInput, type PlanningItem } from '@/lib/plans/build-solver-input';
 import { offcutSourceId, parseSourceId, type BoardPiece, type PlanSettings } from '@/lib/plans/plan-shapes';
 import { planBoardRows } from '@/lib/plans/summarise-plan';
 import type { SolveInput, SolvePlan } from '@/solver';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 /** A re-plan is a handful of pieces; the operator is waiting at the saw. */
 const REPLAN_TIME_LIMIT_MS = 1_000;
@@ -133,7 +125,8 @@ export async function writeReplan(
       .set({ status: 'reserved', reservedByPlanId: planId, updatedAt: at })
       .where(and(inArray(offcuts.id, offcutIds), eq(offcuts.status, 'available')))
       .returning();
-    await tx.insert(stockMovements).values(
+    await recordOffcutMovement(
+      tx,
       reserved.map((o) => ({
         at,
         kind: 'offcut_reserved' as const,

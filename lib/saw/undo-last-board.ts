@@ -5,6 +5,7 @@ import { jobs, offcuts, planBoards, plans, stockLengths, stockMovements } from '
 import { AppError } from '@/lib/errors';
 import { loadPlanForSaw } from './load-board';
 import { settlePlanStatus } from './settle-plan-status';
+import { recordOffcutMovement } from '@/lib/offcuts/record-offcut-movement';
 
 /**
  * Takes back the plan's latest board confirmation while the plan is being cut. History is never
@@ -66,7 +67,7 @@ export async function undoLastBoard({ planId, userId }: { planId: number; userId
         .where(and(eq(offcuts.id, board.offcutId), eq(offcuts.status, 'used')))
         .returning();
       if (used) {
-        await tx.insert(stockMovements).values({
+        await recordOffcutMovement(tx, {
           ...base,
           offcutId: used.id,
           lengthMm: used.lengthMm,
@@ -121,7 +122,7 @@ async function withdrawNewOffcut(
     .update(offcuts)
     .set({ status: 'scrapped', reservedByPlanId: null, updatedAt: movement.at ?? new Date() })
     .where(eq(offcuts.id, made.id));
-  await tx.insert(stockMovements).values({
+  await recordOffcutMovement(tx, {
     ...movement,
     offcutId: made.id,
     lengthMm: made.lengthMm,

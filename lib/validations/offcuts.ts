@@ -23,9 +23,13 @@ export const offcutListQuerySchema = z.object({
 });
 export type OffcutListQuery = z.infer<typeof offcutListQuerySchema>;
 
-export const updateOffcutBodySchema = z.object({
-  location: z.string().trim().min(1, 'Enter a rack location.').max(60, 'At most 60 characters.'),
-});
+/** POST /api/offcuts/move: one offcut or many, to one rack location. */
+export const moveOffcutsBodySchema = z
+  .object({
+    ids: z.array(dbIdSchema()).min(1, 'Choose at least one offcut.').max(1000),
+    location: z.string().trim().min(1, 'Enter a rack location.').max(60, 'At most 60 characters.'),
+  })
+  .strict();
 
 export const scrapOffcutsBodySchema = z.object({
   ids: z.array(dbIdSchema()).min(1, 'Choose at least one offcut.').max(1000),

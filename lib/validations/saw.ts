@@ -27,10 +27,6 @@ export const reportDefectBodySchema = z
   .strict();
 export type ReportDefectBody = z.infer<typeof reportDefectBodySchema>;
 
-export const moveOffcutBodySchema = z
-  .object({ location: z.string().trim().min(1, 'Say where the offcut is racked.').max(60) })
-  .strict();
-
 export const findOffcutQuerySchema = z.object({
   tag: z
     .string()

@@ -1,7 +1,7 @@
-import { eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { GET as listOffcuts } from '@/app/api/offcuts/route';
-import { PATCH as patchOffcut } from '@/app/api/offcuts/[offcutId]/route';
+import { POST as moveOffcuts } from '@/app/api/offcuts/move/route';
 import { POST as scrap } from '@/app/api/offcuts/scrap/route';
 import { POST as importRack } from '@/app/api/offcuts/import/route';
 import { GET as exportRack } from '@/app/api/offcuts/export/route';
@@ -26,16 +26,12 @@ describe('role checks on every offcut endpoint', () => {
     const cases: [string, () => Promise<{ status: number }>, (number | null)[], (number | null)[]][] = [
       ['GET offcuts', () => call(listOffcuts, { url: url('') }), [AS.owner, AS.hand, AS.saw], []],
       ['GET export', () => call(exportRack, { url: url('') }), [AS.owner, AS.hand, AS.saw], []],
+      // The saw racks the offcuts it makes, so moving is for everyone signed in.
       [
-        'PATCH offcut',
-        () =>
-          call(patchOffcut, {
-            method: 'PATCH',
-            params: { offcutId: String(o.id) },
-            body: { location: 'Rack C2' },
-          }),
-        [AS.owner, AS.hand],
-        [AS.saw],
+        'POST move',
+        () => call(moveOffcuts, { method: 'POST', body: { ids: [o.id], location: 'Rack C2' } }),
+        [AS.owner, AS.hand, AS.saw],
+        [],
       ],
       [
         'POST import',
@@ -92,30 +88,63 @@ describe('GET /api/offcuts', () => {
 });
 
 describe('changing the rack', () => {
-  it('moves an offcut and records the move', async () => {
-    const [o] = await available();
-    actAs(AS.hand);
-    const res = await call(patchOffcut, {
-      method: 'PATCH',
-      params: { offcutId: String(o.id) },
-      body: { location: 'Rack C2' },
-    });
-    expect(res.status).toBe(200);
-    expect(res.json.offcut.location).toBe('Rack C2');
-    const moves = await t.db
+  const movesOf = (ids: number[]) =>
+    t.db
       .select()
       .from(schema.stockMovements)
-      .where(eq(schema.stockMovements.offcutId, o.id));
-    expect(moves.some((m) => m.kind === 'offcut_moved')).toBe(true);
-    expect(
-      (
-        await call(patchOffcut, {
-          method: 'PATCH',
-          params: { offcutId: String(o.id) },
-          body: { location: '' },
-        })
-      ).status,
-    ).toBe(422);
+      .where(
+        and(inArray(schema.stockMovements.offcutId, ids), eq(schema.stockMovements.kind, 'offcut_moved')),
+      );
+
+  it('moves one offcut and records the move', async () => {
+    const [o] = await available();
+    actAs(AS.hand);
+    const res = await call(moveOffcuts, { method: 'POST', body: { ids: [o.id], location: 'Rack C2' } });
+    expect(res.status).toBe(200);
+    expect(res.json).toMatchObject({ moved: 1, offcuts: [{ id: o.id, tag: o.tag, location: 'Rack C2' }] });
+    expect(await movesOf([o.id])).toHaveLength(1);
+    const empty = await call(moveOffcuts, { method: 'POST', body: { ids: [o.id], location: '' } });
+    expect(empty.status).toBe(422);
+    expect((await call(moveOffcuts, { method: 'POST', body: { ids: [], location: 'Rack D' } })).status).toBe(
+      422,
+    );
+  });
+
+  it('moves several offcuts in one go, one movement each; one already there is not moved again', async () => {
+    const [a, b, c] = await available();
+    await t.db.update(schema.offcuts).set({ location: 'Bay 7' }).where(eq(schema.offcuts.id, c.id));
+    actAs(AS.owner);
+    const res = await call(moveOffcuts, {
+      method: 'POST',
+      body: { ids: [a.id, b.id, c.id, a.id], location: 'Bay 7' },
+    });
+    expect(res.status).toBe(200);
+    expect(res.json.moved).toBe(2);
+    const rows = await t.db
+      .select()
+      .from(schema.offcuts)
+      .where(inArray(schema.offcuts.id, [a.id, b.id, c.id]));
+    expect(rows.map((r) => r.location)).toEqual(['Bay 7', 'Bay 7', 'Bay 7']);
+    const moves = await movesOf([a.id, b.id, c.id]);
+    expect(moves.map((m) => m.offcutId).sort()).toEqual([a.id, b.id].sort());
+    expect(moves.every((m) => m.reason.endsWith('to Bay 7'))).toBe(true);
+  });
+
+  it('refuses the whole move when one chosen offcut has left the rack', async () => {
+    const [a, b] = await available();
+    await t.db.update(schema.offcuts).set({ status: 'scrapped' }).where(eq(schema.offcuts.id, b.id));
+    actAs(AS.hand);
+    const res = await call(moveOffcuts, { method: 'POST', body: { ids: [a.id, b.id], location: 'Bay 9' } });
+    expect(res.status).toBe(409);
+    expect(res.json.error).toContain(`${b.tag} is scrapped`);
+    const [still] = await t.db.select().from(schema.offcuts).where(eq(schema.offcuts.id, a.id));
+    expect(still.location).toBe(a.location);
+    expect(await movesOf([a.id, b.id])).toHaveLength(0);
+    const unknown = await call(moveOffcuts, {
+      method: 'POST',
+      body: { ids: [a.id, 2_000_000], location: 'Bay 9' },
+    });
+    expect(unknown.status).toBe(404);
   });
 
   it('scraps several offcuts with a reason, all or nothing', async () => {

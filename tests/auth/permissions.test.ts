@@ -26,6 +26,7 @@ const expected: Record<Action, { owner: boolean; yard_hand: boolean; saw_operato
   'offcuts:read': { owner: true, yard_hand: true, saw_operator: true },
   'offcuts:edit': { owner: true, yard_hand: true, saw_operator: false },
   'offcuts:label': { owner: true, yard_hand: true, saw_operator: true },
+  'offcuts:move': { owner: true, yard_hand: true, saw_operator: true },
   'frames:edit': { owner: true, yard_hand: true, saw_operator: false },
   'reports:read': { owner: true, yard_hand: false, saw_operator: false },
   'customers:read': { owner: true, yard_hand: true, saw_operator: false },

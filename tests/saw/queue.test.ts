@@ -4,7 +4,7 @@ import { POST as release } from '@/app/api/plans/[planId]/release/route';
 import { POST as done } from '@/app/api/plans/[planId]/boards/[boardNo]/done/route';
 import { GET as queue } from '@/app/api/saw/queue/route';
 import { GET as findOffcut } from '@/app/api/saw/offcuts/route';
-import { PATCH as moveOffcut } from '@/app/api/saw/offcuts/[offcutId]/route';
+import { POST as moveOffcuts } from '@/app/api/offcuts/move/route';
 import * as schema from '@/db/schema';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
@@ -59,15 +59,9 @@ describe('offcuts at the saw', () => {
     expect((await call(findOffcut, { url: 'http://test.local/api/saw/offcuts?tag=NOPE' })).status).toBe(404);
     expect((await call(findOffcut, { url: 'http://test.local/api/saw/offcuts' })).status).toBe(422);
 
-    const id = String(found.json.offcut.id);
-    expect(
-      (await call(moveOffcut, { method: 'PATCH', params: { offcutId: id }, body: { location: '' } })).status,
-    ).toBe(422);
-    const moved = await call(moveOffcut, {
-      method: 'PATCH',
-      params: { offcutId: id },
-      body: { location: 'Rack C2' },
-    });
+    const id = found.json.offcut.id as number;
+    expect((await call(moveOffcuts, { method: 'POST', body: { ids: [id], location: '' } })).status).toBe(422);
+    const moved = await call(moveOffcuts, { method: 'POST', body: { ids: [id], location: 'Rack C2' } });
     expect(moved.status).toBe(200);
     const rows = await t.db
       .select()

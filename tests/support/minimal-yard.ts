@@ -5,7 +5,7 @@ import type { Db } from '@/db';
 import { yardSettings } from '@/db/schema';
 import { createSection } from '@/lib/stock/save-section';
 import { createUser } from '@/lib/users/manage-users';
-import { updateYardSettings } from '@/lib/yard/yard-settings';
+import { updateYardSettings } from '@/lib/yard/update-yard-settings';
 import type { Fixture } from './test-db';
 
 export const TEST_PASSWORD = 'test-password';

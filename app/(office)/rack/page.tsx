@@ -4,7 +4,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { can } from '@/lib/auth/permissions';
 import { listSections } from '@/lib/stock/list-sections';
-import { getYardSettings } from '@/lib/yard/yard-settings';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Offcut rack' };
 

@@ -14,7 +14,7 @@ import { requirePageUser } from '@/lib/auth/page-user';
 import { getOffcutReport, getSavingsReport, getStockReport, getWasteReport } from '@/lib/reports/get-reports';
 import { getMarginReport } from '@/lib/reports/get-margin-report';
 import { readReportRange } from '@/lib/reports/report-range';
-import { getYardSettings } from '@/lib/yard/yard-settings';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Reports' };
 

@@ -3,7 +3,7 @@ import { SettingsForm } from '@/components/yard/settings-form';
 import { Card } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { getYardSettings } from '@/lib/yard/yard-settings';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Yard settings' };
 

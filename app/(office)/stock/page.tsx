@@ -3,7 +3,7 @@ import { StockManager } from '@/components/stock/stock-manager';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { can } from '@/lib/auth/permissions';
-import { getYardSettings } from '@/lib/yard/yard-settings';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Stock' };
 

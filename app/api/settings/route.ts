@@ -3,7 +3,8 @@
 import { NextResponse } from 'next/server';
 import { parseJsonBody, route } from '@/lib/api/route';
 import { yardSettingsBodySchema } from '@/lib/validations/yard-settings';
-import { getYardSettings, updateYardSettings } from '@/lib/yard/yard-settings';
+import { getYardSettings } from '@/lib/yard/get-yard-settings';
+import { updateYardSettings } from '@/lib/yard/update-yard-settings';
 
 export const GET = route('sections:read', async () =>
   NextResponse.json({ settings: await getYardSettings() }),

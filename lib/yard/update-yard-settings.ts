@@ -5,13 +5,6 @@ import { yardSettings } from '@/db/schema';
 import { notFound } from '@/lib/errors';
 import type { YardSettingsBody } from '@/lib/validations/yard-settings';
 
-export async function getYardSettings() {
-  const db = await getDb();
-  const [settings] = await db.select().from(yardSettings).where(eq(yardSettings.id, 1));
-  if (!settings) throw notFound('The yard settings');
-  return settings;
-}
-
 export async function updateYardSettings({ body }: { body: YardSettingsBody }) {
   const db = await getDb();
   const [settings] = await db
