@@ -35,14 +35,20 @@ const ms = (v: number) => (Number.isNaN(v) ? '–' : String(Math.round(v)));
 
 export function loadTable(
   rows: LoadRow[],
-  { seconds, tablets, officeClients }: { seconds: number; tablets: number; officeClients: number },
+  {
+    seconds,
+    tablets,
+    officeClients,
+    load,
+  }: { seconds: number; tablets: number; officeClients: number; load: { start: number; end: number } },
 ): string {
   const lines = [
     '',
     LOAD_HEADING,
     '',
     `Measured by \`npm run bench:load\` on ${new Date().toISOString().slice(0, 10)}, Node ${process.version}, ` +
-      `loopback, on the shared 2-core machine (other work was running; figures are noisy). Each level runs ` +
+      `loopback, on the 2-core development machine (load average ${load.start.toFixed(1)} at the start, ` +
+      `${load.end.toFixed(1)} at the end; the bench itself adds to it). Each level runs ` +
       `${seconds} s: planners create a 200-piece job and plan it (1 s search) back to back; ${tablets} saw ` +
       `tablets poll their queue every 5 s; ${officeClients} office clients open a page or list every second. ` +
       'Page figures cover the tablets and office clients only; turnaround is from the plan request to the ' +

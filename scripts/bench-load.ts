@@ -5,7 +5,7 @@
 // Bounded: each level runs for --seconds, then everything is stopped. Writes docs/benchmarks.md's
 // "Load" section (then `npx prettier --write docs/benchmarks.md`).
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
 import { api, signIn, startInstance, stopInstance, waitUntilHealthy } from '../tests/instances/app-instance';
 import { killWorker, startWorker } from '../tests/server/worker-process';
@@ -160,9 +160,15 @@ async function benchServer(url: string): Promise<LoadRow[]> {
   }
 }
 
+const loadAtStart = loadavg()[0];
 const rows = [...(await benchEmbedded()), ...(serverUrl ? await benchServer(serverUrl) : [])];
 if (!serverUrl) console.log('Server mode skipped: set KERFWISE_BENCH_DATABASE_URL.');
-const table = loadTable(rows, { seconds: SECONDS, tablets: TABLETS, officeClients: OFFICE_CLIENTS });
+const table = loadTable(rows, {
+  seconds: SECONDS,
+  tablets: TABLETS,
+  officeClients: OFFICE_CLIENTS,
+  load: { start: loadAtStart, end: loadavg()[0] },
+});
 console.log(table);
 const docs = 'docs/benchmarks.md';
 writeFileSync(docs, `${withoutLoadSection(readFileSync(docs, 'utf8'))}${table}`);

@@ -7,6 +7,7 @@ import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { layoutPanel, type SectionDimensions } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
+import type { FrameContext } from '@/lib/frames/types';
 import {
   copyFrameScheduleRequest,
   deleteFrameScheduleRequest,
@@ -24,10 +25,16 @@ import { panelIssues, useFramePreview } from './use-frame-preview';
 import { useUnsavedWarning } from './use-unsaved-warning';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
-type Props = { schedule: FrameScheduleDto; sections: FrameSectionOption[]; openJobs: OpenJob[] };
+type Props = {
+  schedule: FrameScheduleDto;
+  sections: FrameSectionOption[];
+  openJobs: OpenJob[];
+  /** The yard's framing habits, so the drawings name and count pieces as the cut list does. */
+  rules: Pick<FrameContext, 'region' | 'minPieceMm'>;
+};
 
 /** The frame schedule editor: panels with live drawings, the piece schedule, save, copy and send to a job. */
-export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
+export function FrameScheduleEditor({ schedule, sections, openJobs, rules }: Props) {
   const router = useRouter();
   const [details, setDetails] = useState<ScheduleDetails>({
     name: schedule.name,
@@ -82,8 +89,8 @@ export function FrameScheduleEditor({ schedule, sections, openJobs }: Props) {
   );
   const layouts = useMemo(() => {
     const panels = preview.data?.panels ?? [];
-    return panels.map((panel) => layoutPanel(panel, { sections: dimensions, panels }));
-  }, [preview.data, dimensions]);
+    return panels.map((panel) => layoutPanel(panel, { ...rules, sections: dimensions, panels }));
+  }, [preview.data, dimensions, rules]);
 
   const update = (index: number, draft: PanelDraft) =>
     setDrafts((ds) => ds.map((d, k) => (k === index ? draft : d)));

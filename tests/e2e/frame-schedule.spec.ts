@@ -169,6 +169,12 @@ test('no two labels overlap on the demo lean-to drawings, at desktop and tablet 
     await expect(page.getByTestId('preview-state')).toHaveText('Up to date');
     const drawings = page.locator('[data-testid^="panel-card-"] svg[role="img"]');
     await expect(drawings).toHaveCount(8); // every panel of the lean-to but the opening, drawn on its wall
+    // The drawings name pieces as the cut list does: the demo yard is in the UK (single head plate).
+    const titles = (await page.locator('[data-testid^="panel-card-"] svg title').allTextContents()).join(
+      '\n',
+    );
+    expect(titles).toContain('head plate');
+    expect(titles).not.toContain('top plate');
     let labels = 0;
     for (const drawing of await drawings.all()) {
       // Each label's box as the browser drew it, in screen pixels.

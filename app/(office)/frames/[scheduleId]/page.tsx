@@ -25,6 +25,7 @@ export default async function FrameSchedulePage({ params }: { params: Promise<{ 
         schedule={schedule}
         sections={sections.list.filter((s) => s.active)}
         openJobs={openJobs}
+        rules={{ region: sections.context.region, minPieceMm: sections.context.minPieceMm }}
       />
     </>
   );
