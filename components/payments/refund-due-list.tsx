@@ -1,6 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -13,17 +14,31 @@ type Row = PaymentsOverview['refundsDue'][number];
 
 /** Cancelled jobs still holding the customer's money; the owner refunds each with a reason. */
 export function RefundDueList({ rows }: { rows: Row[] }) {
-  if (!rows.length) return <p data-testid="refunds-due">No cancelled job holds a payment.</p>;
+  // Kept here, not in the row: once refunded, the refresh drops the row and its state with it.
+  const [sent, setSent] = useState<string | null>(null);
   return (
-    <ul className="divide-y divide-sand" data-testid="refunds-due">
-      {rows.map((row) => (
-        <RefundDueRow key={row.jobId} row={row} />
-      ))}
-    </ul>
+    <div className="space-y-2">
+      {sent && <Notice>{sent}</Notice>}
+      {rows.length ? (
+        <ul className="divide-y divide-sand" data-testid="refunds-due">
+          {rows.map((row) => (
+            <RefundDueRow
+              key={row.jobId}
+              row={row}
+              onRefunded={(pence) =>
+                setSent(`Refund of ${formatPence(pence)} sent to the card for ${row.reference}.`)
+              }
+            />
+          ))}
+        </ul>
+      ) : (
+        <p data-testid="refunds-due">No cancelled job holds a payment.</p>
+      )}
+    </div>
   );
 }
 
-function RefundDueRow({ row }: { row: Row }) {
+function RefundDueRow({ row, onRefunded }: { row: Row; onRefunded: (pence: number) => void }) {
   const router = useRouter();
   const refund = useApiMutation({
     mutationFn: (reason: string) =>
@@ -31,7 +46,10 @@ function RefundDueRow({ row }: { row: Row }) {
         method: 'POST',
         body: JSON.stringify({ reason }),
       }),
-    onSuccess: () => router.refresh(),
+    onSuccess: (data) => {
+      onRefunded(data.requestedPence);
+      router.refresh();
+    },
   });
 
   function submit(e: React.FormEvent<HTMLFormElement>) {
@@ -55,9 +73,6 @@ function RefundDueRow({ row }: { row: Row }) {
           {refund.isPending ? 'Refunding…' : `Refund ${formatPence(row.paidPence)}`}
         </Button>
       </form>
-      {refund.isSuccess && (
-        <Notice>Refund of {formatPence(refund.data.requestedPence)} sent to the card.</Notice>
-      )}
       {refund.isError && <Notice tone="error">{refund.error.message}</Notice>}
     </li>
   );

@@ -68,40 +68,42 @@ test('the owner refunds a cancelled paid job and sees quotes awaiting acceptance
   const link = await (await page.request.post(`/api/plans/${waiting.planId}/quote-link`)).json();
   const cancel = await page.request.patch(`/api/jobs/${paid.job.id}`, { data: { status: 'cancelled' } });
   expect(cancel.status()).toBe(200);
+  try {
+    const customer = await browser.newContext();
+    const quotePage = await customer.newPage();
+    await quotePage.goto(link.url);
+    const validity = quotePage.getByText(/valid until/).first();
+    await expect(validity).toContainText(DATE_AS_WRITTEN);
+    await expect(validity).not.toContainText(/\d{2}\/\d{2}\/\d{4}/);
+    await customer.close();
 
-  const customer = await browser.newContext();
-  const quotePage = await customer.newPage();
-  await quotePage.goto(link.url);
-  const validity = quotePage.getByText(/valid until/).first();
-  await expect(validity).toContainText(DATE_AS_WRITTEN);
-  await expect(validity).not.toContainText(/\d{2}\/\d{2}\/\d{4}/);
-  await customer.close();
+    await signIn(page, DEMO.owner);
+    await page.goto('/payments');
+    const waitingQuote = (await (await page.request.get(`/api/plans/${waiting.planId}`)).json()).quote;
+    const awaiting = page
+      .locator('div')
+      .filter({ has: page.getByRole('heading', { name: 'Quotes awaiting acceptance' }) })
+      .last();
+    await expect(awaiting).toContainText(waitingQuote.number);
+    await expect(awaiting).toContainText(DATE_AS_WRITTEN);
 
-  await signIn(page, DEMO.owner);
-  await page.goto('/payments');
-  const waitingQuote = (await (await page.request.get(`/api/plans/${waiting.planId}`)).json()).quote;
-  const awaiting = page
-    .locator('div')
-    .filter({ has: page.getByRole('heading', { name: 'Quotes awaiting acceptance' }) })
-    .last();
-  await expect(awaiting).toContainText(waitingQuote.number);
-  await expect(awaiting).toContainText(DATE_AS_WRITTEN);
-
-  const refunds = page.getByTestId('refunds-due');
-  await expect(refunds).toContainText(paid.job.reference);
-  await refunds.getByLabel(`Reason for refunding ${paid.job.reference}`).fill('Customer cancelled the shed');
-  await page.screenshot({ path: 'test-results/payments-refunds.png', fullPage: true });
-  await refunds.getByRole('button', { name: /^Refund £/ }).click();
-  await expect(page.getByText(/Refund of £[\d.]+ sent to the card/)).toBeVisible();
-  await page.reload();
-  await expect(page.getByTestId('refunds-due')).not.toContainText(paid.job.reference);
-  const ledger = page.getByTestId('payment-ledger');
-  await expect(ledger).toContainText('Customer cancelled the shed');
-  await expect(ledger).toContainText(/[−-]£\d+\.\d\d/); // the refund is a negative row
-  // Reopen the job so the demo's list of cancelled jobs is as other tests expect it.
-  expect((await page.request.patch(`/api/jobs/${paid.job.id}`, { data: { status: 'draft' } })).status()).toBe(
-    200,
-  );
+    const refunds = page.getByTestId('refunds-due');
+    await expect(refunds).toContainText(paid.job.reference);
+    await refunds
+      .getByLabel(`Reason for refunding ${paid.job.reference}`)
+      .fill('Customer cancelled the shed');
+    await page.screenshot({ path: 'test-results/payments-refunds.png', fullPage: true });
+    await refunds.getByRole('button', { name: /^Refund £/ }).click();
+    await expect(page.getByText(/Refund of £[\d.]+ sent to the card/)).toBeVisible();
+    await page.reload();
+    await expect(page.getByTestId('refunds-due')).not.toContainText(paid.job.reference);
+    const ledger = page.getByTestId('payment-ledger');
+    await expect(ledger).toContainText('Customer cancelled the shed');
+    await expect(ledger).toContainText(/[−-]£\d+\.\d\d/); // the refund is a negative row
+  } finally {
+    // Reopen the job however the test ends, so the demo's cancelled jobs stay as other tests expect.
+    await page.request.patch(`/api/jobs/${paid.job.id}`, { data: { status: 'draft' } });
+  }
 });
 
 test('the owner edits how a section is sold, with its cost, and reads the margin at cost', async ({
