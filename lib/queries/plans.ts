@@ -4,7 +4,7 @@ import type { CuttingPlanPrice } from '@/lib/pricing/pricing-types';
 import type { BoardPiece, PlanSection, PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
 import type { QuoteView } from '@/lib/quotes/get-plan-quote';
 import type { PaymentState } from '@/lib/quotes/payment-state';
-import type { ReleasePlanBody } from '@/lib/validations/quotes';
+import type { ReleasePlanBodyInput } from '@/lib/validations/quotes';
 import { fetchJson } from './fetch-json';
 import { planKeys } from './query-keys';
 
@@ -95,7 +95,10 @@ export function describePlanRun(run: PlanRunView): string {
   return run.status === 'done' ? 'Done, opening the plan…' : 'Stopped.';
 }
 
-export const releasePlanRequest = (planId: number, { override, confirmShortfall }: ReleasePlanBody = {}) =>
+export const releasePlanRequest = (
+  planId: number,
+  { override, confirmShortfall }: ReleasePlanBodyInput = {},
+) =>
   fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, {
     method: 'POST',
     body: JSON.stringify({ override, confirmShortfall }),

@@ -8,7 +8,7 @@ export const releasePlanBodySchema = z
     confirmShortfall: z.literal(true).optional(),
   })
   .strict();
-export type ReleasePlanBody = z.input<typeof releasePlanBodySchema>;
+export type ReleasePlanBodyInput = z.input<typeof releasePlanBodySchema>;
 
 /** POST /api/quote-links/[token]/accept */
 export const acceptQuoteBodySchema = z.object({
