@@ -8,7 +8,6 @@ import { getJobById } from '@/lib/jobs/get-job';
 import { findOrNotFound } from '@/lib/pages/find-or-not-found';
 import { getPlanById } from '@/lib/plans/get-plan';
 import { getPlanContext } from '@/lib/plans/get-plan-context';
-import type { PlanViewData } from '@/lib/queries/plans';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Cut sheet' };
@@ -30,12 +29,7 @@ export default async function CutSheetPage({ params }: { params: Promise<{ planI
           Back to the plan
         </Link>
       </div>
-      <CutSheet
-        plan={JSON.parse(JSON.stringify(plan)) as PlanViewData}
-        job={job}
-        yardName={yard.yardName}
-        offcutTags={context.offcutTags}
-      />
+      <CutSheet plan={plan} job={job} yardName={yard.yardName} offcutTags={context.offcutTags} />
     </DisplayUnitProvider>
   );
 }
