@@ -2,11 +2,12 @@
 
 import { useEffect, useState } from 'react';
 import type { FrameSchedulePanelInput } from '@/lib/frames';
-import { previewFramesRequest, type FramePreviewDto, type FrameUnit } from '@/lib/queries/frames';
+import { previewFramesRequest, type FramePreviewDto } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import { fieldIssues } from '@/lib/queries/field-errors';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
-type Body = { unit: FrameUnit; panels: FrameSchedulePanelInput[] };
+type Body = { unit: DisplayUnit; panels: FrameSchedulePanelInput[] };
 
 /** Field messages by panel index and field name, from a 422's `panels.2.centres` paths. */
 export function panelIssues(error: unknown) {

@@ -13,7 +13,6 @@ import { fetchJson } from './fetch-json';
 import { frameKeys } from './query-keys';
 import type { Wire, WireOf } from './wire';
 
-export type FrameUnit = FramePreviewBody['unit'];
 export type FrameScheduleDto = WireOf<typeof getFrameScheduleById>;
 /** The preview answer: the panels as the server read them, and their cut list. */
 export type FramePreviewDto = Wire<Pick<FramePreviewBody, 'unit' | 'panels'>> &
