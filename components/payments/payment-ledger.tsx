@@ -12,7 +12,7 @@ export function PaymentLedger({ rows }: { rows: PaymentsOverview['payments'] }) 
           <tr key={p.id} className="border-t border-sand">
             <td className="py-1.5 pr-3 whitespace-nowrap">{new Date(p.at).toLocaleString('en-GB')}</td>
             <td className="py-1.5 pr-3">{p.reference}</td>
-            <td className="py-1.5 pr-3">{p.customer}</td>
+            <td className="py-1.5 pr-3">{p.customerName}</td>
             <td className="py-1.5 pr-3">
               {p.kind.replace('_', ' ')}
               {p.status === 'failed' ? ' (failed)' : ''}

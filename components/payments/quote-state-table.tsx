@@ -15,7 +15,7 @@ export function QuoteStateTable({ rows }: { rows: PaymentsOverview['outstanding'
         {rows.map((r) => (
           <tr key={r.quoteId} className="border-t border-sand">
             <td className="py-1.5 pr-3 font-semibold">{r.number}</td>
-            <td className="py-1.5 pr-3">{r.customer}</td>
+            <td className="py-1.5 pr-3">{r.customerName}</td>
             <td className="py-1.5 pr-3">{PAYMENT_STATE_LABEL[r.state]}</td>
             <td className="py-1.5 pr-3 font-mono">{formatPence(r.grossPence)}</td>
             <td className="py-1.5 pr-3 font-mono">{formatPence(r.paidPence)}</td>

@@ -56,7 +56,7 @@ function RefundDueRow({ row, onRefunded }: { row: Row; onRefunded: (pence: numbe
   return (
     <li className="space-y-2 py-3">
       <p>
-        <span className="font-semibold">{row.reference}</span> · {row.customer} · paid{' '}
+        <span className="font-semibold">{row.reference}</span> · {row.customerName} · paid{' '}
         <span className="font-mono">{formatPence(row.paidPence)}</span>
       </p>
       <form onSubmit={submit} className="flex flex-wrap items-end gap-3" noValidate>

@@ -29,7 +29,7 @@ export const createJobBodySchema = z
   .object({
     customerId: z.number().int().positive().optional(),
     newCustomer: createCustomerBodySchema.optional(),
-    customer: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
+    customerName: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
     deliveryChargePence: deliveryChargePence.optional(),
     reference: z
       .string()
@@ -41,7 +41,7 @@ export const createJobBodySchema = z
     customerEmail: email.optional(),
     notes: z.string().max(2000).optional(),
   })
-  .refine((v) => [v.customerId, v.newCustomer, v.customer].filter((x) => x !== undefined).length === 1, {
+  .refine((v) => [v.customerId, v.newCustomer, v.customerName].filter((x) => x !== undefined).length === 1, {
     message: 'Choose a customer or enter a new one.',
     path: ['customerId'],
   });
@@ -51,7 +51,7 @@ export type CreateJobBodyInput = z.input<typeof createJobBodySchema>;
 /** PATCH /api/jobs/[jobId]: edit details, cancel (status "cancelled") or reopen a cancelled job (status "draft"). */
 export const updateJobBodySchema = z
   .object({
-    customer: z.string().trim().min(1, 'Enter the customer.').max(120),
+    customerName: z.string().trim().min(1, 'Enter the customer.').max(120),
     reference: z.string().trim().min(1, 'Enter a reference.').max(40),
     dueDate: dueDate.nullable(),
     customerEmail: email,
