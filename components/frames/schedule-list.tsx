@@ -1,14 +1,8 @@
 import Link from 'next/link';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import type { listFrameSchedules } from '@/lib/frames-data/frame-schedules';
 
-type Row = {
-  id: number;
-  name: string;
-  customerName: string;
-  panelCount: number;
-  updatedAt: string;
-  jobReferences: string[];
-};
+type Row = Awaited<ReturnType<typeof listFrameSchedules>>[number];
 
 /** Saved frame schedules, latest first, with the jobs made from each. */
 export function ScheduleList({ schedules }: { schedules: Row[] }) {

@@ -9,11 +9,13 @@ import { Notice } from '@/components/ui/notice';
 import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
 import type { CustomerChoice } from '@/lib/validations/customers';
 import type { SendScheduleToJobBodyInput } from '@/lib/validations/frames';
+import type { listJobsOpenForFrames } from '@/lib/frames-data/send-schedule-to-job';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { sendScheduleToJobRequest } from '@/lib/queries/frames';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
-export type OpenJob = { id: number; reference: string; customerName: string; status: string };
+/** A job the schedule may go to, as the server page lists them. */
+export type OpenJob = Awaited<ReturnType<typeof listJobsOpenForFrames>>[number];
 
 type Props = {
   scheduleId: number;
