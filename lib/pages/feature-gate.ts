@@ -1,6 +1,7 @@
 // A feature's layout.tsx: the role check for every page of the feature. It runs above the feature's
 // loading.tsx (a Suspense boundary): once a loading state has streamed the answer is already HTTP 200,
-// so a refusal made below it could no longer answer 403.
+// so a refusal made below it could no longer answer 403. Pages keep their own check beside their
+// data: a client-side navigation re-renders only the segments that change, not this layout.
 import 'server-only';
 import type { ReactNode } from 'react';
 import { requirePageUser } from '@/lib/auth/page-user';
