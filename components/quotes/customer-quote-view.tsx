@@ -57,7 +57,7 @@ export function CustomerQuoteView({
         {data.items.some((item) => item.toleranceMm > 0) && (
           <p className="text-sm text-bark-soft">
             A nominal piece is sold by its length but may be cut a few millimetres short, so that a whole
-            stock length or fewer boards can be used; an exact piece is cut to the millimetre.
+            stock length or fewer boards can be used; an exact piece is supplied to the millimetre.
           </p>
         )}
         <ul
@@ -77,7 +77,7 @@ export function CustomerQuoteView({
                 <span className="block text-sm text-bark-soft" data-testid="piece-length-kind">
                   {item.toleranceMm > 0
                     ? `nominal: may be up to ${item.toleranceMm} mm short`
-                    : 'cut to exact length'}
+                    : 'exact length'}
                 </span>
               </span>
             </li>

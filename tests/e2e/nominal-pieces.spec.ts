@@ -78,7 +78,7 @@ test.describe('nominal pieces and full lengths', () => {
     await quotePage.goto(link.url);
     const kinds = quotePage.getByTestId('customer-pieces').getByTestId('piece-length-kind');
     await expect(kinds).toHaveCount(2);
-    await expect(kinds.nth(0)).toHaveText('cut to exact length');
+    await expect(kinds.nth(0)).toHaveText('exact length');
     await expect(kinds.nth(1)).toHaveText('nominal: may be up to 5 mm short');
     await quotePage.screenshot({ path: 'test-results/screens/nominal-customer-quote.png', fullPage: true });
     await customer.close();
