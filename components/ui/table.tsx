@@ -16,14 +16,16 @@ export function Table({ className, ...props }: React.TableHTMLAttributes<HTMLTab
 export function TableHead({
   columns = [],
   density = 'roomy',
+  className,
   children,
 }: {
   columns?: Column[];
   density?: Density;
+  className?: string;
   children?: React.ReactNode;
 }) {
   return (
-    <thead className="bg-shaving text-sm">
+    <thead className={cn('bg-shaving text-sm', className)}>
       <tr>
         {columns.map((c, i) =>
           typeof c === 'string' ? (
