@@ -1,6 +1,6 @@
 import type { FrameItem } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
-import type { FrameUnit } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import { formatLength } from '@/lib/units';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
@@ -13,7 +13,7 @@ export function PieceScheduleTable({
 }: {
   items: FrameItem[];
   sections: FrameSectionOption[];
-  unit: FrameUnit;
+  unit: DisplayUnit;
 }) {
   const sectionName = (id: number) => sections.find((s) => s.id === id)?.name ?? `Section ${id}`;
   const totals = new Map<number, { pieces: number; mm: number }>();

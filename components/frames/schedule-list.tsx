@@ -1,15 +1,9 @@
 import Link from 'next/link';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
+import type { listFrameSchedules } from '@/lib/frames-data/frame-schedules';
 
-type Row = {
-  id: number;
-  name: string;
-  customerName: string;
-  panelCount: number;
-  updatedAt: string;
-  jobReferences: string[];
-};
+type Row = Awaited<ReturnType<typeof listFrameSchedules>>[number];
 
 /** Saved frame schedules, latest first, with the jobs made from each. */
 export function ScheduleList({ schedules }: { schedules: Row[] }) {

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { formatPence } from '@/lib/format/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
 import {
@@ -26,24 +27,16 @@ export function JobPlans({
   canPlan: boolean;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
   // Server mode: the queued run being followed, so the page can show its progress and call it off.
   const [run, setRun] = useState<PlanRunView | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const [picked, setPicked] = useState<number[]>([]);
-
-  async function plan() {
-    setBusy(true);
-    setError(null);
-    try {
-      const created = await createPlanRequest(jobId, {}, setRun);
-      router.push(`/plans/${created.id}`);
-    } catch (e) {
-      setError((e as Error).message);
-      setRun(null);
-      setBusy(false);
-    }
-  }
+  const planning = useApiMutation({
+    mutationFn: () => createPlanRequest(jobId, {}, setRun),
+    onSuccess: (created) => router.push(`/plans/${created.id}`),
+    onError: () => setRun(null),
+  });
+  // Busy until the new plan's page opens.
+  const busy = planning.isPending || planning.isSuccess;
   const toggle = (id: number) =>
     setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : [...p.slice(-1), id]));
 
@@ -51,7 +44,7 @@ export function JobPlans({
     <div className="space-y-4">
       {canPlan && (
         <div className="flex flex-wrap items-center gap-3">
-          <Button onClick={plan} disabled={busy} size="lg">
+          <Button onClick={() => planning.mutate()} disabled={busy} size="lg">
             {busy ? (run ? describePlanRun(run) : 'Finding the best plan…') : 'Plan this job'}
           </Button>
           {busy && run && (run.status === 'queued' || run.status === 'running') && (
@@ -61,7 +54,7 @@ export function JobPlans({
           )}
         </div>
       )}
-      {error && <Notice tone="error">{error}</Notice>}
+      {planning.error && <Notice tone="error">{planning.error.message}</Notice>}
       {plans.length > 0 && (
         <Table data-testid="job-plans">
           <TableHead

@@ -8,6 +8,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { createJobRequest, jobsQuery, type JobFilters as Filters } from '@/lib/queries/jobs';
+import { jobKeys } from '@/lib/queries/query-keys';
 import { JobDetailsForm } from './job-details-form';
 import { JobFilters } from './job-filters';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
@@ -40,10 +41,9 @@ export function JobsBoard() {
           <JobDetailsForm
             submitLabel="Create job"
             testId="new-job-form"
-            onSubmit={async (body) => {
-              const { job } = await createJobRequest(body);
-              router.push(`/jobs/${job.id}`);
-            }}
+            save={createJobRequest}
+            invalidates={[jobKeys.all]}
+            onSaved={({ job }) => router.push(`/jobs/${job.id}`)}
           />
         </Card>
       )}

@@ -17,7 +17,7 @@ export function PaymentLedger({ rows }: { rows: PaymentsOverview['payments'] }) 
               {new Date(p.at).toLocaleString('en-GB')}
             </Cell>
             <Cell density="compact">{p.reference}</Cell>
-            <Cell density="compact">{p.customer}</Cell>
+            <Cell density="compact">{p.customerName}</Cell>
             <Cell density="compact">
               {p.kind.replace('_', ' ')}
               {p.status === 'failed' ? ' (failed)' : ''}

@@ -26,7 +26,7 @@ export function QuoteStateTable({ rows }: { rows: PaymentsOverview['outstanding'
             <Cell density="compact" className="font-semibold">
               {r.number}
             </Cell>
-            <Cell density="compact">{r.customer}</Cell>
+            <Cell density="compact">{r.customerName}</Cell>
             <Cell density="compact">{PAYMENT_STATE_LABEL[r.state]}</Cell>
             <Cell density="compact" numeric className="font-mono">
               {formatPence(r.grossPence)}

@@ -13,7 +13,7 @@ test.describe('nominal pieces and full lengths', () => {
     browser,
   }) => {
     await signIn(page, DEMO.hand);
-    const created = await page.request.post('/api/jobs', { data: { customer: 'Hollin Lane Sheds' } });
+    const created = await page.request.post('/api/jobs', { data: { customerName: 'Hollin Lane Sheds' } });
     expect(created.status()).toBe(201);
     const { job } = await created.json();
     const { sections } = await (await page.request.get('/api/sections')).json();

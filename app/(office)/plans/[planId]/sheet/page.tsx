@@ -7,7 +7,6 @@ import { requirePageUser } from '@/lib/auth/page-user';
 import { getJobById } from '@/lib/jobs/get-job';
 import { planOrNotFound } from '@/lib/pages/page-records';
 import { getPlanById } from '@/lib/plans/get-plan';
-import type { PlanViewData } from '@/lib/queries/plans';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Cut sheet' };
@@ -28,12 +27,7 @@ export default async function CutSheetPage({ params }: { params: Promise<{ planI
           Back to the plan
         </Link>
       </div>
-      <CutSheet
-        plan={JSON.parse(JSON.stringify(plan)) as PlanViewData}
-        job={job}
-        yardName={yard.yardName}
-        offcutTags={context.offcutTags}
-      />
+      <CutSheet plan={plan} job={job} yardName={yard.yardName} offcutTags={context.offcutTags} />
     </DisplayUnitProvider>
   );
 }
