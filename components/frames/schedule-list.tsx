@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { ScrollRegion } from '@/components/ui/scroll-region';
-import type { listFrameSchedules } from '@/lib/frames-data/frame-schedules';
 import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
+import type { listFrameSchedules } from '@/lib/frames-data/frame-schedules';
 
 type Row = Awaited<ReturnType<typeof listFrameSchedules>>[number];
 

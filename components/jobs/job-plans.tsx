@@ -5,8 +5,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { formatPence } from '@/lib/format/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
 import {
