@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
 import { formatPence } from '@/lib/format/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
 import {
@@ -62,21 +63,22 @@ export function JobPlans({
       )}
       {error && <Notice tone="error">{error}</Notice>}
       {plans.length > 0 && (
-        <table className="w-full text-left" data-testid="job-plans">
-          <thead className="bg-shaving text-sm">
-            <tr>
-              <th className="p-2">Compare</th>
-              <th className="p-2">Plan</th>
-              <th className="p-2">Status</th>
-              <th className="p-2 text-right">Boards</th>
-              <th className="p-2 text-right">Yield</th>
-              <th className="p-2 text-right">Price</th>
-            </tr>
-          </thead>
+        <Table data-testid="job-plans">
+          <TableHead
+            density="snug"
+            columns={[
+              'Compare',
+              'Plan',
+              'Status',
+              { label: 'Boards', numeric: true },
+              { label: 'Yield', numeric: true },
+              { label: 'Price', numeric: true },
+            ]}
+          />
           <tbody>
             {plans.map((p) => (
-              <tr key={p.id} className="border-t border-shaving">
-                <td className="p-2">
+              <TableRow key={p.id}>
+                <Cell density="snug">
                   <input
                     type="checkbox"
                     className="h-5 w-5"
@@ -84,8 +86,8 @@ export function JobPlans({
                     checked={picked.includes(p.id)}
                     onChange={() => toggle(p.id)}
                   />
-                </td>
-                <td className="p-2">
+                </Cell>
+                <Cell density="snug">
                   <Link className="font-semibold text-spruce underline" href={`/plans/${p.id}`}>
                     Plan {p.id}
                   </Link>{' '}
@@ -93,15 +95,21 @@ export function JobPlans({
                     kerf {p.settings.kerfMm}, trim {p.settings.trimMm}
                     {p.settings.useOffcuts ? '' : ', no offcuts'}
                   </span>
-                </td>
-                <td className="p-2">{p.status}</td>
-                <td className="p-2 text-right tabular-nums">{p.totals.boards}</td>
-                <td className="p-2 text-right tabular-nums">{p.totals.yieldPercent}%</td>
-                <td className="p-2 text-right tabular-nums">{formatPence(p.pricePence)}</td>
-              </tr>
+                </Cell>
+                <Cell density="snug">{p.status}</Cell>
+                <Cell density="snug" numeric>
+                  {p.totals.boards}
+                </Cell>
+                <Cell density="snug" numeric>
+                  {p.totals.yieldPercent}%
+                </Cell>
+                <Cell density="snug" numeric>
+                  {formatPence(p.pricePence)}
+                </Cell>
+              </TableRow>
             ))}
           </tbody>
-        </table>
+        </Table>
       )}
       {picked.length === 2 && (
         <Link
