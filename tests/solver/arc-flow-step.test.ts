@@ -68,7 +68,7 @@ describe('compressed arc-flow step', () => {
     );
   });
 
-  it('keeps every pattern: any set of pieces that fits a board has a path from its kind', () => {
+  it('keeps every pattern and only patterns that fit: any set of pieces that fits a board has a path', () => {
     fc.assert(
       fc.property(
         yardJob(6, true),
@@ -79,6 +79,15 @@ describe('compressed arc-flow step', () => {
           const demand = model.items.map((it) => it.count);
           const caps = model.bins.map((b, bin) => ({ bin, cap: b.capacity }));
           const graph = buildArcFlowGraph(model, demand, () => true, caps, Infinity)!;
+          // Every path fits its board: each arc climbs at least its piece's weight, every kind
+          // starts at or after top − capacity, and all paths end at `top`.
+          graph.arcItem.forEach((i, a) => {
+            const rise = graph.labels[graph.arcTo[a]] - graph.labels[graph.arcFrom[a]];
+            expect(rise).toBeGreaterThanOrEqual(i >= 0 ? model.items[i].weight : 0);
+          });
+          for (const e of graph.entries)
+            expect(graph.labels[e.node]).toBeGreaterThanOrEqual(graph.top - model.bins[e.bin].capacity);
+          expect(graph.labels[graph.end]).toBe(graph.top);
           const bin = binPick % model.bins.length;
           // Greedy: add picked pieces while they fit the trimmed board and stay within demand.
           const left = [...demand];
