@@ -16,10 +16,12 @@ import { costStep } from './money';
 import { makeBoard, type PackedBoard, type Packing } from './packing';
 
 /**
- * Graphs above this many arcs (after compression) are not built: HiGHS in WebAssembly needs far more
- * than 10 s on them (Hard28: 27 000–47 000 arcs; two of them unsolved after 5 s of processor time).
+ * Graphs above this many arcs (after compression) are not built. Yard jobs stay far below (under 800
+ * arcs in the bench); Hard28 (27 000–47 000) is out of reach for HiGHS in WebAssembly within 10 s. At
+ * 20 000 the model also ran at the end of Falkenauer t120 instances (4 500–5 300 arcs) and the set lost
+ * 2–4 of 20 in back-to-back runs against 5 000 (15–17 against 18–19 at a load of 11–13).
  */
-const MAX_ARCS = 20_000;
+const MAX_ARCS = 5_000;
 
 export interface ArcFlowResult {
   /** Cheapest plan HiGHS found (checked with the engine's own fit rules), or null. */
