@@ -88,6 +88,11 @@ for (const set of published) {
     `${set.padEnd(16)} n=${row.instances} opt=${atOpt} above=${above} proven=${proven} median=${row.medianMs.toFixed(0)}ms slowest=${row.slowestMs.toFixed(0)}ms | FFD opt=${ffdOpt} above=${ffdAbove}`,
   );
   if (misses.length) console.log(`  missed: ${misses.join(', ')}`);
+  // Peak so far (the OS's figure) and what typed arrays and WebAssembly memory hold now.
+  const mem = process.memoryUsage();
+  console.log(
+    `  peak RSS so far ${((process.resourceUsage().maxRSS * 1024) / 1048576).toFixed(0)} MB; now: JS heap ${(mem.heapUsed / 1048576).toFixed(0)} MB, array buffers and WebAssembly ${(mem.arrayBuffers / 1048576).toFixed(0)} MB`,
+  );
 }
 
 const yardRows: YardRow[] = [];

@@ -1,20 +1,27 @@
 // The complete integer step: the arc-flow model (J. M. Valério de Carvalho, "Exact solution of
 // bin-packing problems using column generation and branch-and-bound", Annals of OR 86, 1999) over
-// every board kind at once, solved by HiGHS. A board is a path of piece arcs from 0 to its kind's
-// capacity (loss arcs fill the rest), so every pattern is in the model and HiGHS's optimum is the
-// job's cheapest cost, not just the cheapest over a pool. Boards of only nominal pieces may be
+// every board kind at once, solved by HiGHS. A board is a path of piece arcs from where its kind
+// starts to the one shared end (a loss arc skips the rest), in the compressed graph of
+// arc-flow-graph.ts, so every pattern is in the model and HiGHS's optimum is the job's cheapest
+// cost, not just the cheapest over a pool. Boards of only nominal pieces may be
 // untrimmed: they get a second graph with the untrimmed capacities; a piece sold full length is a
 // column of its own. The heuristics' best plan is handed over as the starting solution, and a
 // callback stops HiGHS at our own deadline, because its own clock is checked too rarely here.
 
+import { buildArcFlowGraph, boardPath, type ArcFlowGraph } from './arc-flow-graph';
 import { boardFits, isFullLength, isOpenBoard } from './board-fit';
 import { highsEngine, runUntil } from './highs-engine';
 import type { Model } from './model';
 import { costStep } from './money';
 import { makeBoard, type PackedBoard, type Packing } from './packing';
 
-/** Graphs above this many arcs are not built (memory and time on a shared 2-core machine). */
-const MAX_ARCS = 30_000;
+/**
+ * Graphs above this many arcs (after compression) are not built. Yard jobs stay far below (under 800
+ * arcs in the bench); Hard28 (27 000–47 000) is out of reach for HiGHS in WebAssembly within 10 s. At
+ * 20 000 the model also ran at the end of Falkenauer t120 instances (4 500–5 300 arcs) and the set lost
+ * 2–4 of 20 in back-to-back runs against 5 000 (15–17 against 18–19 at a load of 11–13).
+ */
+const MAX_ARCS = 5_000;
 
 export interface ArcFlowResult {
   /** Cheapest plan HiGHS found (checked with the engine's own fit rules), or null. */
@@ -25,90 +32,9 @@ export interface ArcFlowResult {
   proven: boolean;
 }
 
-/** One graph: nodes are positions along a board (mm + kerf); arcs cut a piece or waste a stretch. */
-interface Graph {
-  positions: number[];
-  arcFrom: number[];
-  arcTo: number[];
-  /** Item type of a piece arc, −1 for a loss arc. */
-  arcItem: number[];
-  /** Loss arc leaving each node (−1 at the last). */
-  lossOf: number[];
-  /** Piece arc by `from * items + item`. */
-  pieceArc: Map<number, number>;
-  /** Board kinds this graph closes, and the node of each kind's capacity. */
-  returns: { bin: number; node: number }[];
-}
-
-function buildGraph(
-  model: Model,
-  demand: number[],
-  itemOk: (i: number) => boolean,
-  capacities: { bin: number; cap: number }[],
-): Graph | null {
-  const top = Math.max(0, ...capacities.map((c) => c.cap));
-  const reached = new Uint8Array(top + 1);
-  reached[0] = 1;
-  const used = new Int32Array(top + 1);
-  const pieceStarts: [number, number][] = [];
-  // Items longest first, each path takes them in that order and never more than are ordered.
-  model.items.forEach((it, i) => {
-    if (!itemOk(i) || demand[i] === 0) return;
-    const w = it.weight;
-    used.fill(0);
-    for (let v = 0; v + w <= top; v++) {
-      if (!reached[v] || used[v] >= demand[i]) continue;
-      pieceStarts.push([v, i]);
-      const to = v + w;
-      if (!reached[to]) {
-        reached[to] = 1;
-        used[to] = used[v] + 1;
-      } else if (used[to] > used[v] + 1) used[to] = used[v] + 1;
-    }
-  });
-  if (pieceStarts.length > MAX_ARCS) return null;
-  // A position no piece leaves can only waste its way to a board end, so its arcs go straight to
-  // the nearest board end at or after it (an exact reduction: fewer nodes, same paths).
-  const isEnd = new Uint8Array(top + 1);
-  for (const c of capacities) isEnd[c.cap] = 1;
-  const hasOut = new Uint8Array(top + 1);
-  for (const [v] of pieceStarts) hasOut[v] = 1;
-  const target = new Int32Array(top + 1);
-  for (let v = top, end = top; v >= 0; v--) {
-    if (isEnd[v]) end = v;
-    target[v] = hasOut[v] || isEnd[v] ? v : end;
-  }
-  const nodeOf = new Int32Array(top + 1).fill(-1);
-  const positions: number[] = [];
-  for (let v = 0; v <= top; v++) if (v === 0 || hasOut[v] || isEnd[v]) nodeOf[v] = positions.push(v) - 1;
-  const g: Graph = {
-    positions,
-    arcFrom: [],
-    arcTo: [],
-    arcItem: [],
-    lossOf: positions.map(() => -1),
-    pieceArc: new Map(),
-    returns: capacities.map((c) => ({ bin: c.bin, node: nodeOf[c.cap] })),
-  };
-  const n = model.items.length;
-  for (const [v, i] of pieceStarts) {
-    g.pieceArc.set(nodeOf[v] * n + i, g.arcFrom.length);
-    g.arcFrom.push(nodeOf[v]);
-    g.arcTo.push(nodeOf[target[v + model.items[i].weight]]);
-    g.arcItem.push(i);
-  }
-  for (let k = 0; k + 1 < positions.length; k++) {
-    g.lossOf[k] = g.arcFrom.length;
-    g.arcFrom.push(k);
-    g.arcTo.push(k + 1);
-    g.arcItem.push(-1);
-  }
-  return g;
-}
-
 /** Columns of the model, in order: each graph's arcs then its returns, then full-length boards. */
 interface Layout {
-  graphs: { graph: Graph; arcStart: number; returnStart: number }[];
+  graphs: { graph: ArcFlowGraph; arcStart: number; returnStart: number }[];
   full: { item: number; bin: number; col: number }[];
   numCols: number;
 }
@@ -124,21 +50,23 @@ export function arcFlowStep(
   if (!highs || timeMs < 20 || demand.every((d) => d === 0)) return null;
   const deadline = performance.now() + timeMs;
   const open = model.bins.map((b) => b.source === 'stock' && b.openCapacity > b.capacity);
-  const trimmed = buildGraph(
+  const trimmed = buildArcFlowGraph(
     model,
     demand,
     () => true,
     model.bins.flatMap((b, j) => (limits[j] > 0 && b.capacity > 0 ? [{ bin: j, cap: b.capacity }] : [])),
+    MAX_ARCS,
   );
   if (!trimmed) return null;
   const graphs = [trimmed];
   const nominal = model.items.some((it, i) => it.tolerance > 0 && demand[i] > 0);
   if (nominal && open.some((o, j) => o && limits[j] > 0)) {
-    const untrimmed = buildGraph(
+    const untrimmed = buildArcFlowGraph(
       model,
       demand,
       (i) => model.items[i].tolerance > 0,
       model.bins.flatMap((b, j) => (open[j] && limits[j] > 0 ? [{ bin: j, cap: b.openCapacity }] : [])),
+      MAX_ARCS,
     );
     if (!untrimmed) return null;
     graphs.push(untrimmed);
@@ -148,7 +76,7 @@ export function arcFlowStep(
     const arcStart = layout.numCols;
     const returnStart = arcStart + graph.arcFrom.length;
     layout.graphs.push({ graph, arcStart, returnStart });
-    layout.numCols = returnStart + graph.returns.length;
+    layout.numCols = returnStart + graph.entries.length;
   }
   model.items.forEach((it, i) => {
     if (demand[i] === 0) return;
@@ -179,7 +107,7 @@ export function arcFlowStep(
     const status = mip.getModelStatus();
     const dual = Number(mip.info.get('mip_dual_bound'));
     const proven = status === highs.constants.modelStatus.optimal;
-    const boundUnits = Number.isFinite(dual) ? Math.ceil(dual - 1e-6) * step : 0;
+    const boundUnits = Number.isFinite(dual) ? Math.max(0, Math.ceil(dual - 1e-6)) * step : 0;
     const primal = Number(mip.info.get('primal_solution_status'));
     let packing: Packing | null = null;
     if (primal === 2) {
@@ -200,7 +128,7 @@ function writeModel(model: Model, demand: number[], limits: number[], layout: La
   let numRows = 0;
   for (const { graph } of layout.graphs) {
     rowStart.push(numRows);
-    numRows += graph.positions.length;
+    numRows += graph.labels.length;
   }
   const demandRow = demand.map((d) => (d > 0 ? numRows++ : -1));
   const limitRow = limits.map((l) => (Number.isFinite(l) ? numRows++ : -1));
@@ -218,9 +146,10 @@ function writeModel(model: Model, demand: number[], limits: number[], layout: La
         colUpper[c] = demand[item];
       }
     });
-    graph.returns.forEach((ret, k) => {
+    graph.entries.forEach((ret, k) => {
       const c = returnStart + k;
-      cols[c].push([r0 + ret.node, -1], [r0, 1]);
+      // A board of this kind: one unit of flow from the shared end back to where the kind starts.
+      cols[c].push([r0 + graph.end, -1], [r0 + ret.node, 1]);
       if (limitRow[ret.bin] >= 0) cols[c].push([limitRow[ret.bin], 1]);
       colCost[c] = model.bins[ret.bin].costUnits / step;
       colUpper[c] = limits[ret.bin];
@@ -274,7 +203,6 @@ function writeModel(model: Model, demand: number[], limits: number[], layout: La
 /** The heuristic plan as arc flows, so HiGHS starts from it; null if some board has no path. */
 function startingSolution(model: Model, plan: Packing, layout: Layout): Float64Array | null {
   const x = new Float64Array(layout.numCols);
-  const n = model.items.length;
   for (const b of plan.boards) {
     const bin = model.bins[b.bin];
     if (bin.source === 'stock' && isFullLength(model, bin, b.items)) {
@@ -283,20 +211,13 @@ function startingSolution(model: Model, plan: Packing, layout: Layout): Float64A
       x[f.col]++;
       continue;
     }
-    const g = bin.source === 'stock' && isOpenBoard(model, bin, b.items) && layout.graphs[1] ? 1 : 0;
-    const { graph, arcStart, returnStart } = layout.graphs[g];
-    const ret = graph.returns.findIndex((r) => r.bin === b.bin);
+    const open = bin.source === 'stock' && isOpenBoard(model, bin, b.items) && layout.graphs[1];
+    const { graph, arcStart, returnStart } = layout.graphs[open ? 1 : 0];
+    const ret = graph.entries.findIndex((r) => r.bin === b.bin);
     if (ret < 0) return null;
-    let node = 0;
-    for (const i of [...b.items].sort((p, q) => p - q)) {
-      const a = graph.pieceArc.get(node * n + i);
-      if (a === undefined) return null;
-      x[arcStart + a]++;
-      node = graph.arcTo[a];
-    }
-    const end = graph.returns[ret].node;
-    if (node > end) return null;
-    for (; node < end; node++) x[arcStart + graph.lossOf[node]]++;
+    const path = boardPath(model, graph, open ? bin.openCapacity : bin.capacity, b.items);
+    if (!path) return null;
+    for (const a of path) x[arcStart + a]++;
     x[returnStart + ret]++;
   }
   return x;
@@ -308,32 +229,25 @@ function decompose(model: Model, demand: number[], layout: Layout, x: number[]):
   for (const f of layout.full)
     for (let k = 0; k < x[f.col]; k++) boards.push(makeBoard(model, f.bin, [f.item]));
   for (const { graph, arcStart, returnStart } of layout.graphs) {
-    const flow = (a: number) => x[arcStart + a];
-    const outArcs: number[][] = graph.positions.map(() => []);
+    const outArcs: number[][] = graph.labels.map(() => []);
     graph.arcFrom.forEach((from, a) => {
-      if (flow(a) > 0) outArcs[from].push(a);
-    });
-    const returnsAt = new Map<number, number[]>();
-    graph.returns.forEach((r, k) => {
-      if (x[returnStart + k] > 0) returnsAt.set(r.node, [...(returnsAt.get(r.node) ?? []), k]);
+      if (x[arcStart + a] > 0) outArcs[from].push(a);
     });
     const left = x.slice(arcStart, returnStart);
-    const retLeft = x.slice(returnStart, returnStart + graph.returns.length);
-    let boardsLeft = retLeft.reduce((s, v) => s + v, 0);
-    for (; boardsLeft > 0; boardsLeft--) {
-      let node = 0;
-      const items: number[] = [];
-      for (;;) {
-        const next = outArcs[node].find((a) => left[a] > 0);
-        if (next === undefined) break;
-        left[next]--;
-        if (graph.arcItem[next] >= 0) items.push(graph.arcItem[next]);
-        node = graph.arcTo[next];
+    // Flow is conserved, so a walk from where a board starts always reaches the shared end.
+    for (const [k, entry] of graph.entries.entries()) {
+      for (let n = 0; n < x[returnStart + k]; n++) {
+        let node = entry.node;
+        const items: number[] = [];
+        while (node !== graph.end) {
+          const next = outArcs[node].find((a) => left[a] > 0);
+          if (next === undefined) return null;
+          left[next]--;
+          if (graph.arcItem[next] >= 0) items.push(graph.arcItem[next]);
+          node = graph.arcTo[next];
+        }
+        if (items.length > 0) boards.push(makeBoard(model, entry.bin, items));
       }
-      const k = (returnsAt.get(node) ?? []).find((r) => retLeft[r] > 0);
-      if (k === undefined) return null;
-      retLeft[k]--;
-      if (items.length > 0) boards.push(makeBoard(model, graph.returns[k].bin, items));
     }
   }
   const surplus = [...demand];
@@ -344,5 +258,6 @@ function decompose(model: Model, demand: number[], layout: Layout, x: number[]):
     if (items.length > 0) kept.push(makeBoard(model, boards[k].bin, items));
   }
   if (surplus.some((s) => s > 0)) return null;
+  if (kept.some((b) => !boardFits(model, b.bin, b.items))) return null;
   return { boards: kept.reverse(), unplaced: model.items.map(() => 0) };
 }

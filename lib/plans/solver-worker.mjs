@@ -28,6 +28,6 @@ parentPort?.on('message', (input) => {
 // Jobs are sent once the thread says it is ready, so a solve's deadline never counts the start-up.
 parentPort?.postMessage({ ready: true });
 // HiGHS's first models in a thread are several times slower (WebAssembly optimises as it runs), so
-// a small built-in job warms it up in the first idle moment: a job already waiting goes first, and
+// built-in jobs warm it up in the first idle moment: a job already waiting goes first, and
 // no later plan pays for the cold start.
 setTimeout(() => void prepareSolver({ warmUp: true }).catch(() => undefined), 100);
