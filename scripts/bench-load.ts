@@ -45,7 +45,7 @@ async function planner(
   for (let round = 0; Date.now() < until; round++) {
     const job = await api(target.base, cookie, '/api/jobs', {
       method: 'POST',
-      body: { customer: `Bench customer ${n}-${round}` },
+      body: { customerName: `Bench customer ${n}-${round}` },
     });
     const jobId = job.json.job.id;
     for (let row = 0; row < 10; row++) {

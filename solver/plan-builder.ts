@@ -47,7 +47,7 @@ export function buildPlan(
         );
     const pieces = pb.items.map((i) => queues[i].shift() as string);
     const layout = layOutBoard(usable, cutLengths, model.kerf);
-    const remainderKept = isKept(model, layout.remainder);
+    const keepRemainder = isKept(model, layout.remainder);
     const trimKerf = trim > 0 ? model.kerf : 0;
     return {
       sourceId: bin.id,
@@ -60,9 +60,9 @@ export function buildPlan(
       fullLength,
       marks: layout.marks,
       remainder: layout.remainder,
-      remainderKept,
+      keepRemainder,
       kerfLoss: layout.kerfLoss + trimKerf,
-      scrap: trim + (remainderKept ? 0 : layout.remainder),
+      scrap: trim + (keepRemainder ? 0 : layout.remainder),
       cost: bin.cost,
     };
   });
@@ -104,7 +104,7 @@ function sumTotals(boards: PlanBoard[]): PlanTotals {
     cost += b.cost;
     kerfLoss += b.kerfLoss;
     scrap += b.scrap;
-    if (b.remainderKept) {
+    if (b.keepRemainder) {
       keptOffcuts++;
       keptLength += b.remainder;
     }

@@ -53,7 +53,7 @@ export interface PlanBoard {
   /** Length left after the last cut. */
   remainder: number;
   /** True when the remainder is at least minOffcut and goes back on the rack. */
-  remainderKept: boolean;
+  keepRemainder: boolean;
   kerfLoss: number;
   /** Trim plus any remainder too short to keep. */
   scrap: number;

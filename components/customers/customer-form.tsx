@@ -4,7 +4,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { fetchJson } from '@/lib/queries/fetch-json';
+import { createCustomerRequest } from '@/lib/queries/customers';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 const input = 'mt-1 block w-full rounded border border-bark-soft px-3 py-2 font-normal';
 
@@ -12,36 +13,37 @@ const input = 'mt-1 block w-full rounded border border-bark-soft px-3 py-2 font-
 export function CustomerForm() {
   const router = useRouter();
   const [account, setAccount] = useState<'retail' | 'trade'>('retail');
-  const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
-
-  async function submit(e: React.FormEvent<HTMLFormElement>) {
-    e.preventDefault();
-    const form = e.currentTarget;
-    const f = new FormData(form);
-    const text = (k: string) => String(f.get(k) ?? '');
-    try {
-      const created = await fetchJson<{ name: string }>('/api/customers', {
-        method: 'POST',
-        body: JSON.stringify({
-          name: text('name'),
-          contact: text('contact'),
-          phone: text('phone'),
-          email: text('email'),
-          address: text('address'),
-          account,
-          ...(account === 'trade' && {
-            creditDays: Number(text('creditDays') || 30),
-            discountPercent: Number(text('discountPercent') || 0),
-          }),
+  const create = useApiMutation({
+    mutationFn: ({ data }: { data: FormData; form: HTMLFormElement }) => {
+      const text = (k: string) => String(data.get(k) ?? '');
+      return createCustomerRequest({
+        name: text('name'),
+        contact: text('contact'),
+        phone: text('phone'),
+        email: text('email'),
+        address: text('address'),
+        account,
+        ...(account === 'trade' && {
+          creditDays: Number(text('creditDays') || 30),
+          discountPercent: Number(text('discountPercent') || 0),
         }),
       });
+    },
+    onSuccess: (_, { form }) => {
       form.reset();
       setAccount('retail');
-      setMessage({ tone: 'info', text: `${created.name} added.` });
       router.refresh();
-    } catch (err) {
-      setMessage({ tone: 'error', text: (err as Error).message });
-    }
+    },
+  });
+  const message = create.error
+    ? { tone: 'error' as const, text: create.error.message }
+    : create.data
+      ? { tone: 'info' as const, text: `${create.data.name} added.` }
+      : null;
+
+  function submit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    create.mutate({ data: new FormData(e.currentTarget), form: e.currentTarget });
   }
 
   return (

@@ -2,7 +2,8 @@
 
 import { useRouter } from 'next/navigation';
 import { Notice } from '@/components/ui/notice';
-import { ApiError, fetchJson } from '@/lib/queries/fetch-json';
+import { importCustomersRequest } from '@/lib/queries/customers';
+import { ApiError } from '@/lib/queries/fetch-json';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 type RowError = { row: number; message: string };
@@ -11,12 +12,7 @@ type RowError = { row: number; message: string };
 export function CustomerImport() {
   const router = useRouter();
   const upload = useApiMutation({
-    mutationFn: async (file: File) =>
-      fetchJson<{ imported: number }>('/api/customers/import', {
-        method: 'POST',
-        headers: { 'content-type': 'text/csv' },
-        body: await file.text(),
-      }),
+    mutationFn: async (file: File) => importCustomersRequest(await file.text()),
     onSuccess: () => router.refresh(),
   });
   const rows =

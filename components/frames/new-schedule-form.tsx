@@ -4,7 +4,8 @@ import { useRouter } from 'next/navigation';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import { createFrameScheduleRequest, type FrameUnit } from '@/lib/queries/frames';
+import { createFrameScheduleRequest } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import { fieldIssues } from '@/lib/queries/field-errors';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
@@ -24,7 +25,7 @@ export function NewScheduleForm() {
     create.mutate({
       name: String(form.get('name')),
       customerName: String(form.get('customerName')),
-      unit: String(form.get('unit')) as FrameUnit,
+      unit: String(form.get('unit')) as DisplayUnit,
     });
   }
 

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
 import type { PanelLayout } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
-import type { FrameUnit } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import { formatLength } from '@/lib/units';
 import { PanelElevation } from './panel-elevation';
 import type { PanelDraft } from './panel-draft';
@@ -17,7 +17,7 @@ type Props = {
   draft: PanelDraft;
   drafts: PanelDraft[];
   sections: FrameSectionOption[];
-  unit: FrameUnit;
+  unit: DisplayUnit;
   errors: Record<string, string>;
   layout: PanelLayout | null;
   onChange: (draft: PanelDraft) => void;

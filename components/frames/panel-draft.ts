@@ -1,5 +1,5 @@
 import type { FrameSchedulePanel, FrameSchedulePanelInput } from '@/lib/frames';
-import type { FrameUnit } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import { formatLength, parseLength } from '@/lib/units';
 import { NEW_PANEL_VALUES, PANEL_FIELDS, type PanelKind } from './panel-fields';
 
@@ -13,7 +13,7 @@ export type PanelDraft = {
   exact: Record<string, number>;
 };
 
-const toText = (value: unknown, type: string, unit: FrameUnit): string => {
+const toText = (value: unknown, type: string, unit: DisplayUnit): string => {
   if (value === undefined || value === null) return '';
   if (type === 'yesno') return value ? 'yes' : 'no';
   if (type === 'length' && typeof value === 'number') return formatLength(value, unit);
@@ -22,7 +22,7 @@ const toText = (value: unknown, type: string, unit: FrameUnit): string => {
 
 export function panelToDraft(
   panel: FrameSchedulePanel | (Record<string, unknown> & { kind: PanelKind }),
-  unit: FrameUnit,
+  unit: DisplayUnit,
   key: string,
 ): PanelDraft {
   const record = panel as Record<string, unknown>;
@@ -59,7 +59,7 @@ export function newPanelDraft(
   kind: PanelKind,
   drafts: PanelDraft[],
   fallbackSectionId: number | undefined,
-  unit: FrameUnit,
+  unit: DisplayUnit,
   /** Cladding starts on a cladding board, not on the framing section above it. */
   claddingSectionId?: number,
 ): PanelDraft {
@@ -113,7 +113,7 @@ export function draftToPanel(draft: PanelDraft): {
 }
 
 /** Shows every readable length in the new unit; stored millimetres stay exact. */
-export function reformatLengths(draft: PanelDraft, unit: FrameUnit): PanelDraft {
+export function reformatLengths(draft: PanelDraft, unit: DisplayUnit): PanelDraft {
   const values = { ...draft.values };
   const exact = { ...draft.exact };
   for (const field of PANEL_FIELDS[draft.kind]) {

@@ -2,7 +2,7 @@
 
 import { Field } from '@/components/ui/field';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
-import type { FrameUnit } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import type { PanelDraft } from './panel-draft';
 import { PANEL_FIELDS, type FieldSpec } from './panel-fields';
 
@@ -10,7 +10,7 @@ type Props = {
   draft: PanelDraft;
   drafts: PanelDraft[];
   sections: FrameSectionOption[];
-  unit: FrameUnit;
+  unit: DisplayUnit;
   errors: Record<string, string>;
   onChange: (draft: PanelDraft) => void;
 };

@@ -1,8 +1,9 @@
 import type { FrameItem } from '@/lib/frames';
 import type { FrameSectionOption } from '@/lib/frames-data/frame-section-option';
-import type { FrameUnit } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 import { formatLength } from '@/lib/units';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
 
 /** Every piece: its mark on the drawings, where it goes, section, length, count and any angled cut. */
 export function PieceScheduleTable({
@@ -12,7 +13,7 @@ export function PieceScheduleTable({
 }: {
   items: FrameItem[];
   sections: FrameSectionOption[];
-  unit: FrameUnit;
+  unit: DisplayUnit;
 }) {
   const sectionName = (id: number) => sections.find((s) => s.id === id)?.name ?? `Section ${id}`;
   const totals = new Map<number, { pieces: number; mm: number }>();
@@ -22,48 +23,61 @@ export function PieceScheduleTable({
   }
   return (
     <ScrollRegion label="Pieces of the schedule">
-      <table className="w-full text-left" data-testid="piece-schedule">
-        <thead className="bg-shaving text-sm">
-          <tr>
-            <th className="p-2">Mark</th>
-            <th className="p-2">Piece</th>
-            <th className="p-2">Section</th>
-            <th className="p-2 text-right">Length</th>
-            <th className="p-2 text-right">Qty</th>
-            <th className="p-2 text-right">Angle</th>
-          </tr>
-        </thead>
+      <Table data-testid="piece-schedule">
+        <TableHead
+          density="snug"
+          columns={[
+            'Mark',
+            'Piece',
+            'Section',
+            { label: 'Length', numeric: true },
+            { label: 'Qty', numeric: true },
+            { label: 'Angle', numeric: true },
+          ]}
+        />
         <tbody>
           {items.map((item) => (
-            <tr key={item.mark} className="border-t border-shaving">
-              <td className="p-2 font-mono text-sm">{item.mark}</td>
-              <td className="p-2">
+            <TableRow key={item.mark}>
+              <Cell density="snug" className="font-mono text-sm">
+                {item.mark}
+              </Cell>
+              <Cell density="snug">
                 {item.label}
                 {item.note && <span className="block text-sm text-bark-soft">{item.note}</span>}
-              </td>
-              <td className="p-2 text-sm">{sectionName(item.sectionId)}</td>
-              <td className="p-2 text-right font-mono">{formatLength(item.length, unit)}</td>
-              <td className="p-2 text-right font-mono">{item.quantity}</td>
-              <td className="p-2 text-right font-mono">{item.angle ? `${item.angle.toFixed(1)}°` : ''}</td>
-            </tr>
+              </Cell>
+              <Cell density="snug" className="text-sm">
+                {sectionName(item.sectionId)}
+              </Cell>
+              <Cell density="snug" numeric className="font-mono">
+                {formatLength(item.length, unit)}
+              </Cell>
+              <Cell density="snug" numeric className="font-mono">
+                {item.quantity}
+              </Cell>
+              <Cell density="snug" numeric className="font-mono">
+                {item.angle ? `${item.angle.toFixed(1)}°` : ''}
+              </Cell>
+            </TableRow>
           ))}
         </tbody>
         <tfoot className="border-t-2 border-grain text-sm">
           {[...totals].map(([id, t]) => (
             <tr key={id} data-testid="section-total">
               <td />
-              <td className="p-2 font-semibold" colSpan={2}>
+              <Cell density="snug" className="font-semibold" colSpan={2}>
                 Total {sectionName(id)}
-              </td>
-              <td className="p-2 text-right font-mono">
+              </Cell>
+              <Cell density="snug" numeric className="font-mono">
                 {unit === 'mm' ? `${(t.mm / 1000).toFixed(1)} m` : formatLength(t.mm, unit)}
-              </td>
-              <td className="p-2 text-right font-mono">{t.pieces}</td>
+              </Cell>
+              <Cell density="snug" numeric className="font-mono">
+                {t.pieces}
+              </Cell>
               <td />
             </tr>
           ))}
         </tfoot>
-      </table>
+      </Table>
     </ScrollRegion>
   );
 }

@@ -1,9 +1,14 @@
 'use client';
 
 import { Field } from '@/components/ui/field';
-import type { FrameUnit } from '@/lib/queries/frames';
+import type { DisplayUnit } from '@/lib/units';
 
-export type ScheduleDetails = { name: string; customerName: string; customerEmail: string; unit: FrameUnit };
+export type ScheduleDetails = {
+  name: string;
+  customerName: string;
+  customerEmail: string;
+  unit: DisplayUnit;
+};
 
 /** Name, customer and their e-mail, and the unit lengths are shown in. */
 export function ScheduleDetailsFields({
@@ -53,7 +58,7 @@ export function ScheduleDetailsFields({
           <select
             {...p}
             value={value.unit}
-            onChange={(e) => onChange({ ...value, unit: e.target.value as FrameUnit })}
+            onChange={(e) => onChange({ ...value, unit: e.target.value as DisplayUnit })}
           >
             <option value="mm">Millimetres</option>
             <option value="imperial">Feet and inches</option>

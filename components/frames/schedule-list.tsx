@@ -1,46 +1,35 @@
 import Link from 'next/link';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
+import type { listFrameSchedules } from '@/lib/frames-data/frame-schedules';
 
-type Row = {
-  id: number;
-  name: string;
-  customerName: string;
-  panelCount: number;
-  updatedAt: string;
-  jobReferences: string[];
-};
+type Row = Awaited<ReturnType<typeof listFrameSchedules>>[number];
 
 /** Saved frame schedules, latest first, with the jobs made from each. */
 export function ScheduleList({ schedules }: { schedules: Row[] }) {
   if (schedules.length === 0) return <p className="p-4 text-bark-soft">No frame schedules yet.</p>;
   return (
     <ScrollRegion label="Frame schedules">
-      <table className="w-full text-left" data-testid="schedule-list">
-        <thead className="bg-shaving text-sm">
-          <tr>
-            <th className="p-3">Schedule</th>
-            <th className="p-3">Customer</th>
-            <th className="p-3 text-right">Panels</th>
-            <th className="p-3">Jobs</th>
-            <th className="p-3">Changed</th>
-          </tr>
-        </thead>
+      <Table data-testid="schedule-list">
+        <TableHead
+          columns={['Schedule', 'Customer', { label: 'Panels', numeric: true }, 'Jobs', 'Changed']}
+        />
         <tbody>
           {schedules.map((s) => (
-            <tr key={s.id} className="border-t border-shaving">
-              <td className="p-3">
+            <TableRow key={s.id}>
+              <Cell>
                 <Link href={`/frames/${s.id}`} className="font-semibold text-spruce underline">
                   {s.name}
                 </Link>
-              </td>
-              <td className="p-3">{s.customerName}</td>
-              <td className="p-3 text-right">{s.panelCount}</td>
-              <td className="p-3">{s.jobReferences.join(', ') || '—'}</td>
-              <td className="p-3 text-sm">{s.updatedAt.slice(0, 10)}</td>
-            </tr>
+              </Cell>
+              <Cell>{s.customerName}</Cell>
+              <Cell numeric>{s.panelCount}</Cell>
+              <Cell>{s.jobReferences.join(', ') || '—'}</Cell>
+              <Cell className="text-sm">{s.updatedAt.slice(0, 10)}</Cell>
+            </TableRow>
           ))}
         </tbody>
-      </table>
+      </Table>
     </ScrollRegion>
   );
 }

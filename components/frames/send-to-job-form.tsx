@@ -7,13 +7,15 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
-import type { CustomerChoice } from '@/lib/queries/customers';
+import type { CustomerChoice } from '@/lib/validations/customers';
+import type { SendScheduleToJobBodyInput } from '@/lib/validations/frames';
+import type { listJobsOpenForFrames } from '@/lib/frames-data/send-schedule-to-job';
 import { ApiError } from '@/lib/queries/fetch-json';
-import { sendScheduleToJobRequest, type SendToJobRequest } from '@/lib/queries/frames';
-import { fieldIssues } from '@/lib/queries/field-errors';
+import { sendScheduleToJobRequest } from '@/lib/queries/frames';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
-export type OpenJob = { id: number; reference: string; customerName: string; status: string };
+/** A job the schedule may go to, as the server page lists them. */
+export type OpenJob = Awaited<ReturnType<typeof listJobsOpenForFrames>>[number];
 
 type Props = {
   scheduleId: number;
@@ -36,14 +38,13 @@ export function SendToJobForm({
   const router = useRouter();
   const [target, setTarget] = useState<'new' | 'existing'>('new');
   const send = useApiMutation({
-    mutationFn: async (body: SendToJobRequest) => {
+    mutationFn: async (body: SendScheduleToJobBodyInput) => {
       await beforeSend();
       return sendScheduleToJobRequest(scheduleId, body);
     },
     onSuccess: ({ jobId }) => router.push(`/jobs/${jobId}`),
   });
-  const issues = fieldIssues(send.error);
-  const error = (path: string) => issues.find((i) => i.path === path)?.message;
+  const error = (path: string): string | undefined => send.fieldErrors[path];
   // The job already holds this schedule's pieces: the server asks before adding a second set.
   const alreadySent =
     send.error instanceof ApiError &&
@@ -147,7 +148,8 @@ export function SendToJobForm({
           </div>
         </div>
       ) : (
-        send.error && !issues.length && <Notice tone="error">{send.error.message}</Notice>
+        send.error &&
+        !Object.keys(send.fieldErrors).length && <Notice tone="error">{send.error.message}</Notice>
       )}
       {send.isSuccess && <Notice>Sent. Opening the job…</Notice>}
       <Button type="submit" size="lg" disabled={disabled || send.isPending || send.isSuccess}>

@@ -1,12 +1,10 @@
 'use client';
 
 import { useEffect, useState } from 'react';
-import type { FrameSchedulePanelInput } from '@/lib/frames';
-import { previewFramesRequest, type FramePreviewDto, type FrameUnit } from '@/lib/queries/frames';
+import type { FramePreviewBodyInput } from '@/lib/frames';
+import { previewFramesRequest, type FramePreviewDto } from '@/lib/queries/frames';
 import { fieldIssues } from '@/lib/queries/field-errors';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
-
-type Body = { unit: FrameUnit; panels: FrameSchedulePanelInput[] };
 
 /** Field messages by panel index and field name, from a 422's `panels.2.centres` paths. */
 export function panelIssues(error: unknown) {
@@ -22,7 +20,7 @@ export function panelIssues(error: unknown) {
 }
 
 /** Live preview: asks the server for the cut list 400 ms after the last edit; null body = nothing to ask. */
-export function useFramePreview(body: Body | null) {
+export function useFramePreview(body: FramePreviewBodyInput | null) {
   const key = body ? JSON.stringify(body) : null;
   const [sentKey, setSentKey] = useState<string | null>(null);
   // The last good answer stays on screen while the next one is on its way, so drawings do not flicker.
@@ -32,7 +30,7 @@ export function useFramePreview(body: Body | null) {
     if (!key || key === sentKey) return;
     const timer = setTimeout(() => {
       setSentKey(key);
-      mutate(JSON.parse(key) as Body);
+      mutate(JSON.parse(key) as FramePreviewBodyInput);
     }, 400);
     return () => clearTimeout(timer);
   }, [key, sentKey, mutate]);

@@ -1,6 +1,6 @@
 'use client';
 
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useDropzone } from 'react-dropzone';
 import { Button } from '@/components/ui/button';
@@ -15,9 +15,33 @@ import { sectionOptionsQuery } from '@/lib/queries/sections';
 import { MAX_IMPORT_BYTES } from '@/lib/validations/jobs';
 import { ImportErrors, type RowError } from './import-errors';
 import { jobKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 type Outcome =
   { kind: 'done'; text: string } | { kind: 'errors'; summary: string; errors: RowError[] } | null;
+
+/** What the last upload came to: rows imported, or the rows to fix. */
+function uploadOutcome(upload: {
+  data?: { imported: number };
+  variables?: { source: string };
+  error: Error | null;
+}): Outcome {
+  if (upload.data && upload.variables) {
+    const { imported } = upload.data;
+    return {
+      kind: 'done',
+      text: `Imported ${imported} row${imported === 1 ? '' : 's'} from ${upload.variables.source}.`,
+    };
+  }
+  if (!upload.error) return null;
+  const body = upload.error instanceof ApiError ? (upload.error.body as ImportRefusal | null) : null;
+  return {
+    kind: 'errors',
+    summary: upload.error.message,
+    errors: body?.errors ?? body?.details?.errors ?? [],
+  };
+}
+type ImportRefusal = { errors?: RowError[]; details?: { errors?: RowError[] } };
 
 const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet';
 
@@ -26,34 +50,22 @@ const XLSX = 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'
  * workbook's first sheet is turned into tab-separated text here; the server checks every row.
  */
 export function CutListImport({ jobId }: { jobId: number }) {
-  const queryClient = useQueryClient();
   const sections = useQuery(sectionOptionsQuery());
-  const [outcome, setOutcome] = useState<Outcome>(null);
-  const [busy, setBusy] = useState(false);
+  // A workbook the browser could not read never reaches the server; its message is kept here.
+  const [unread, setUnread] = useState<Outcome>(null);
   const [replace, setReplace] = useState(false);
   const [pasted, setPasted] = useState('');
+  const upload = useApiMutation({
+    mutationFn: ({ text }: { text: string; source: string }) => importItemsRequest(jobId, text, replace),
+    invalidates: [jobKeys.detail(jobId)],
+    onSuccess: () => setPasted(''),
+  });
+  const busy = upload.isPending;
+  const outcome: Outcome = unread ?? uploadOutcome(upload);
 
-  async function send(text: string, source: string) {
-    setBusy(true);
-    setOutcome(null);
-    try {
-      const { imported } = await importItemsRequest(jobId, text, replace);
-      setOutcome({
-        kind: 'done',
-        text: `Imported ${imported} row${imported === 1 ? '' : 's'} from ${source}.`,
-      });
-      setPasted('');
-      await queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
-    } catch (error) {
-      const errors =
-        error instanceof ApiError
-          ? ((error.body as { errors?: RowError[]; details?: { errors?: RowError[] } })?.errors ??
-            (error.body as { details?: { errors?: RowError[] } })?.details?.errors)
-          : undefined;
-      setOutcome({ kind: 'errors', summary: (error as Error).message, errors: errors ?? [] });
-    } finally {
-      setBusy(false);
-    }
+  function send(text: string, source: string) {
+    setUnread(null);
+    upload.mutate({ text, source });
   }
 
   const dropzone = useDropzone({
@@ -70,7 +82,8 @@ export function CutListImport({ jobId }: { jobId: number }) {
       if (!file.name.toLowerCase().endsWith('.xlsx')) return send(await file.text(), file.name);
       const text = await xlsxToTsv(await file.arrayBuffer()).catch(() => null);
       if (text !== null) return send(text, file.name);
-      setOutcome({
+      upload.reset();
+      setUnread({
         kind: 'errors',
         summary: `${file.name} was not read.`,
         errors: [
@@ -78,8 +91,9 @@ export function CutListImport({ jobId }: { jobId: number }) {
         ],
       });
     },
-    onDropRejected: ([rejection]) =>
-      setOutcome({
+    onDropRejected: ([rejection]) => {
+      upload.reset();
+      setUnread({
         kind: 'errors',
         summary: `${rejection.file.name} was not read.`,
         errors: rejection.errors.map((e) => ({
@@ -87,7 +101,8 @@ export function CutListImport({ jobId }: { jobId: number }) {
           column: null,
           message: e.code === 'file-too-large' ? 'The file is larger than 5 MB; split it.' : e.message,
         })),
-      }),
+      });
+    },
   });
 
   const template = sections.data ? buildYardCutListTemplate(sections.data) : null;

@@ -4,8 +4,9 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
 import { useDisplayUnit } from '@/components/units/display-unit';
-import type { ItemBody, JobItemRow } from '@/lib/queries/jobs';
+import type { JobItemRow } from '@/lib/queries/jobs';
 import type { SectionOption } from '@/lib/queries/sections';
+import type { JobItemBodyInput } from '@/lib/validations/jobs';
 import { describeTolerance } from '@/lib/nominal/tolerance';
 import { fitBody, FitFields, useFit } from './fit-fields';
 
@@ -13,7 +14,7 @@ type Props = {
   item?: JobItemRow;
   sections: SectionOption[];
   editable: boolean;
-  onSave: (body: ItemBody) => Promise<unknown>;
+  onSave: (body: JobItemBodyInput) => Promise<unknown>;
   onDelete?: () => Promise<unknown>;
   /** Section a new row starts with: the last row's, so a list of one section is quick to type. */
   defaultSectionId?: number;

@@ -1,24 +1,25 @@
 'use client';
 
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useDisplayUnit } from '@/components/units/display-unit';
-import {
-  addItemRequest,
-  deleteItemRequest,
-  updateItemRequest,
-  type ItemBody,
-  type JobItemRow,
-} from '@/lib/queries/jobs';
+import { addItemRequest, deleteItemRequest, updateItemRequest, type JobItemRow } from '@/lib/queries/jobs';
 import { sectionOptionsQuery } from '@/lib/queries/sections';
 import { ItemRow } from './item-row';
 import { sumItemsPerSection } from './section-totals';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { jobKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
+import type { JobItemBodyInput } from '@/lib/validations/jobs';
 
 const PAGE = 200;
+
+type ItemChange =
+  | { kind: 'add'; body: JobItemBodyInput }
+  | { kind: 'update'; itemId: number; body: JobItemBodyInput }
+  | { kind: 'delete'; itemId: number };
 
 /** The job's cut list as an editable table, with pieces and running length per section. */
 export function ItemsTable({
@@ -34,20 +35,23 @@ export function ItemsTable({
   const sections = useQuery(sectionOptionsQuery());
   const { format, suffix } = useDisplayUnit();
   const [shown, setShown] = useState(PAGE);
-  const [error, setError] = useState<string | null>(null);
   const refresh = () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
-  const mutate = useMutation({
-    mutationFn: (run: () => Promise<unknown>) => run(),
-    onMutate: () => setError(null),
-    onError: (e) => setError(e.message),
-    onSettled: refresh,
+  // One mutation for every row: the table shows its error; a failed change also refreshes the list.
+  const change = useApiMutation({
+    mutationFn: (c: ItemChange): Promise<unknown> =>
+      c.kind === 'add'
+        ? addItemRequest(jobId, c.body)
+        : c.kind === 'update'
+          ? updateItemRequest(jobId, c.itemId, c.body)
+          : deleteItemRequest(jobId, c.itemId),
+    invalidates: [jobKeys.detail(jobId)],
+    onError: () => refresh(),
   });
-  const run = (fn: () => Promise<unknown>) => mutate.mutateAsync(fn);
   const totals = sumItemsPerSection(items);
 
   return (
     <div className="space-y-3">
-      {error && <Notice tone="error">{error}</Notice>}
+      {change.error && <Notice tone="error">{change.error.message}</Notice>}
       <ScrollRegion label="Line items">
         <table className="w-full text-left" data-testid="items-table">
           <thead className="bg-shaving text-sm">
@@ -70,8 +74,8 @@ export function ItemsTable({
                 item={item}
                 sections={sections.data ?? []}
                 editable={editable}
-                onSave={(body: ItemBody) => run(() => updateItemRequest(jobId, item.id, body))}
-                onDelete={() => run(() => deleteItemRequest(jobId, item.id))}
+                onSave={(body) => change.mutateAsync({ kind: 'update', itemId: item.id, body })}
+                onDelete={() => change.mutateAsync({ kind: 'delete', itemId: item.id })}
               />
             ))}
             {editable && sections.data && (
@@ -79,7 +83,7 @@ export function ItemsTable({
                 sections={sections.data}
                 editable
                 defaultSectionId={items.at(-1)?.sectionId}
-                onSave={(body) => run(() => addItemRequest(jobId, body))}
+                onSave={(body) => change.mutateAsync({ kind: 'add', body })}
               />
             )}
           </tbody>

@@ -1,55 +1,55 @@
 'use client';
 
-import { useState } from 'react';
+import type { QueryKey } from '@tanstack/react-query';
 import { CustomerPicker } from '@/components/customers/customer-picker';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { readCustomerChoice } from '@/lib/customers/read-customer-choice';
-import type { JobDetailsBody } from '@/lib/queries/jobs';
-import { fieldIssues } from '@/lib/queries/field-errors';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
+import type { CreateJobBodyInput, UpdateJobBodyInput } from '@/lib/validations/jobs';
 
 type Values = { reference: string; dueDate: string; customerEmail: string; notes: string };
 const fieldNames: (keyof Values)[] = ['reference', 'dueDate', 'customerEmail', 'notes'];
 
+/** What the form sends: fits both a new job and a change to one. */
+export type JobDetailsBody = CreateJobBodyInput & UpdateJobBodyInput;
+
 /** Customer (picked, or new inline), reference, due date, e-mail and notes: to create or edit a job. */
-export function JobDetailsForm({
+export function JobDetailsForm<TSaved>({
   initial,
   submitLabel,
-  onSubmit,
+  save,
+  invalidates,
+  onSaved,
   testId,
 }: {
   initial?: Partial<Values> & { customer?: { id: number; name: string } | null };
   submitLabel: string;
-  onSubmit: (body: JobDetailsBody) => Promise<unknown>;
+  save: (body: JobDetailsBody) => Promise<TSaved>;
+  /** Keys (from query-keys.ts) the saved details make stale. */
+  invalidates?: readonly QueryKey[];
+  onSaved?: (saved: TSaved) => unknown;
   testId?: string;
 }) {
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [busy, setBusy] = useState(false);
+  const mutation = useApiMutation({ mutationFn: save, invalidates, onSuccess: onSaved });
+  const errors: Record<string, string | undefined> = {
+    form: mutation.error?.message,
+    ...mutation.fieldErrors,
+  };
+  const busy = mutation.isPending;
 
-  async function submit(e: React.FormEvent<HTMLFormElement>) {
+  function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const data = new FormData(e.currentTarget);
     const v = Object.fromEntries(fieldNames.map((k) => [k, String(data.get(k) ?? '')])) as Values;
-    setBusy(true);
-    setErrors({});
-    try {
-      await onSubmit({
-        ...readCustomerChoice(data),
-        reference: v.reference || undefined,
-        dueDate: v.dueDate || null,
-        customerEmail: v.customerEmail,
-        notes: v.notes,
-      });
-    } catch (error) {
-      const issues = fieldIssues(error);
-      setErrors({
-        form: (error as Error).message,
-        ...Object.fromEntries(issues.map((i) => [i.path, i.message])),
-      });
-    } finally {
-      setBusy(false);
-    }
+    mutation.mutate({
+      ...readCustomerChoice(data),
+      reference: v.reference || undefined,
+      dueDate: v.dueDate || null,
+      customerEmail: v.customerEmail,
+      notes: v.notes,
+    });
   }
 
   const input = (name: keyof Values, label: string, type = 'text', hint?: string) => (

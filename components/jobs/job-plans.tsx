@@ -5,6 +5,8 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { formatPence } from '@/lib/format/money';
 import type { JobPlanRow } from '@/lib/queries/jobs';
 import {
@@ -25,24 +27,16 @@ export function JobPlans({
   canPlan: boolean;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
   // Server mode: the queued run being followed, so the page can show its progress and call it off.
   const [run, setRun] = useState<PlanRunView | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const [picked, setPicked] = useState<number[]>([]);
-
-  async function plan() {
-    setBusy(true);
-    setError(null);
-    try {
-      const created = await createPlanRequest(jobId, {}, setRun);
-      router.push(`/plans/${created.id}`);
-    } catch (e) {
-      setError((e as Error).message);
-      setRun(null);
-      setBusy(false);
-    }
-  }
+  const planning = useApiMutation({
+    mutationFn: () => createPlanRequest(jobId, {}, setRun),
+    onSuccess: (created) => router.push(`/plans/${created.id}`),
+    onError: () => setRun(null),
+  });
+  // Busy until the new plan's page opens.
+  const busy = planning.isPending || planning.isSuccess;
   const toggle = (id: number) =>
     setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : [...p.slice(-1), id]));
 
@@ -50,7 +44,7 @@ export function JobPlans({
     <div className="space-y-4">
       {canPlan && (
         <div className="flex flex-wrap items-center gap-3">
-          <Button onClick={plan} disabled={busy} size="lg">
+          <Button onClick={() => planning.mutate()} disabled={busy} size="lg">
             {busy ? (run ? describePlanRun(run) : 'Finding the best plan…') : 'Plan this job'}
           </Button>
           {busy && run && (run.status === 'queued' || run.status === 'running') && (
@@ -60,23 +54,24 @@ export function JobPlans({
           )}
         </div>
       )}
-      {error && <Notice tone="error">{error}</Notice>}
+      {planning.error && <Notice tone="error">{planning.error.message}</Notice>}
       {plans.length > 0 && (
-        <table className="w-full text-left" data-testid="job-plans">
-          <thead className="bg-shaving text-sm">
-            <tr>
-              <th className="p-2">Compare</th>
-              <th className="p-2">Plan</th>
-              <th className="p-2">Status</th>
-              <th className="p-2 text-right">Boards</th>
-              <th className="p-2 text-right">Yield</th>
-              <th className="p-2 text-right">Price</th>
-            </tr>
-          </thead>
+        <Table data-testid="job-plans">
+          <TableHead
+            density="snug"
+            columns={[
+              'Compare',
+              'Plan',
+              'Status',
+              { label: 'Boards', numeric: true },
+              { label: 'Yield', numeric: true },
+              { label: 'Price', numeric: true },
+            ]}
+          />
           <tbody>
             {plans.map((p) => (
-              <tr key={p.id} className="border-t border-shaving">
-                <td className="p-2">
+              <TableRow key={p.id}>
+                <Cell density="snug">
                   <input
                     type="checkbox"
                     className="h-5 w-5"
@@ -84,8 +79,8 @@ export function JobPlans({
                     checked={picked.includes(p.id)}
                     onChange={() => toggle(p.id)}
                   />
-                </td>
-                <td className="p-2">
+                </Cell>
+                <Cell density="snug">
                   <Link className="font-semibold text-spruce underline" href={`/plans/${p.id}`}>
                     Plan {p.id}
                   </Link>{' '}
@@ -93,15 +88,21 @@ export function JobPlans({
                     kerf {p.settings.kerfMm}, trim {p.settings.trimMm}
                     {p.settings.useOffcuts ? '' : ', no offcuts'}
                   </span>
-                </td>
-                <td className="p-2">{p.status}</td>
-                <td className="p-2 text-right tabular-nums">{p.totals.boards}</td>
-                <td className="p-2 text-right tabular-nums">{p.totals.yieldPercent}%</td>
-                <td className="p-2 text-right tabular-nums">{formatPence(p.pricePence)}</td>
-              </tr>
+                </Cell>
+                <Cell density="snug">{p.status}</Cell>
+                <Cell density="snug" numeric>
+                  {p.totals.boards}
+                </Cell>
+                <Cell density="snug" numeric>
+                  {p.totals.yieldPercent}%
+                </Cell>
+                <Cell density="snug" numeric>
+                  {formatPence(p.pricePence)}
+                </Cell>
+              </TableRow>
             ))}
           </tbody>
-        </table>
+        </Table>
       )}
       {picked.length === 2 && (
         <Link

@@ -1,6 +1,6 @@
 'use client';
 
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
@@ -14,22 +14,26 @@ import { JobDetailsForm } from './job-details-form';
 import { JobPlans } from './job-plans';
 import { JobStatusBadge } from './job-status-badge';
 import { jobKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 /** Everything the yard hand does to one job: details, cut list, import, planning. */
 export function JobWorkspace({ jobId }: { jobId: number }) {
-  const queryClient = useQueryClient();
   const job = useQuery(jobQuery(jobId));
   const [editing, setEditing] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const changeStatus = useApiMutation({
+    mutationFn: (status: 'cancelled' | 'draft') => updateJobRequest(jobId, { status }),
+    invalidates: [jobKeys.detail(jobId)],
+  });
   if (job.isPending) return <p>Loading the job…</p>;
   if (job.error) return <Notice tone="error">{job.error.message}</Notice>;
   const { job: j, items, plans } = job.data;
   const listEditable = j.status === 'draft' || j.status === 'planned';
-  const refresh = () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) });
-  const setStatus = async (status: 'cancelled' | 'draft') => {
-    setError(null);
-    await updateJobRequest(jobId, { status }).then(refresh, (e: Error) => setError(e.message));
-  };
+  // The workspace shows a failed change's message; the caller only needs to know it has finished.
+  const setStatus = (status: 'cancelled' | 'draft') =>
+    changeStatus.mutateAsync(status).then(
+      () => undefined,
+      () => undefined,
+    );
 
   return (
     <div className="space-y-6">
@@ -55,7 +59,7 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
           )}
         </div>
       </header>
-      {error && <Notice tone="error">{error}</Notice>}
+      {changeStatus.error && <Notice tone="error">{changeStatus.error.message}</Notice>}
       {editing && (
         <Card>
           <JobDetailsForm
@@ -67,11 +71,9 @@ export function JobWorkspace({ jobId }: { jobId: number }) {
               notes: j.notes,
             }}
             submitLabel="Save details"
-            onSubmit={async (body) => {
-              await updateJobRequest(jobId, body);
-              await refresh();
-              setEditing(false);
-            }}
+            save={(body) => updateJobRequest(jobId, body)}
+            invalidates={[jobKeys.detail(jobId)]}
+            onSaved={() => setEditing(false)}
           />
           {listEditable && (
             <div className="mt-6 border-t-2 border-shaving pt-4">

@@ -8,11 +8,13 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { createJobRequest, jobsQuery, type JobFilters as Filters } from '@/lib/queries/jobs';
+import { jobKeys } from '@/lib/queries/query-keys';
 import { JobDetailsForm } from './job-details-form';
 import { JobFilters } from './job-filters';
 import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { JobStatusBadge } from './job-status-badge';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
 
 /** The office's job list: filters, the table, and a form for a new job. */
 export function JobsBoard() {
@@ -39,10 +41,9 @@ export function JobsBoard() {
           <JobDetailsForm
             submitLabel="Create job"
             testId="new-job-form"
-            onSubmit={async (body) => {
-              const { job } = await createJobRequest(body);
-              router.push(`/jobs/${job.id}`);
-            }}
+            save={createJobRequest}
+            invalidates={[jobKeys.all]}
+            onSaved={({ job }) => router.push(`/jobs/${job.id}`)}
           />
         </Card>
       )}
@@ -55,40 +56,40 @@ export function JobsBoard() {
         )}
         {jobs.data && jobs.data.length > 0 && (
           <ScrollRegion label="Jobs">
-            <table className="w-full text-left" data-testid="jobs-table">
-              <thead className="bg-shaving text-sm">
-                <tr>
-                  <th className="p-3">Reference</th>
-                  <th className="p-3">Customer</th>
-                  <th className="p-3">Due</th>
-                  <th className="p-3 text-right">Pieces</th>
-                  <th className="p-3">Status</th>
-                  <th className="p-3">Quote</th>
-                </tr>
-              </thead>
+            <Table data-testid="jobs-table">
+              <TableHead
+                columns={[
+                  'Reference',
+                  'Customer',
+                  'Due',
+                  { label: 'Pieces', numeric: true },
+                  'Status',
+                  'Quote',
+                ]}
+              />
               <tbody>
                 {jobs.data.map((job) => (
-                  <tr key={job.id} className="border-t border-shaving hover:bg-sawdust">
-                    <td className="p-3 font-semibold">
+                  <TableRow key={job.id} className="hover:bg-sawdust">
+                    <Cell className="font-semibold">
                       <Link href={`/jobs/${job.id}`} className="text-spruce underline">
                         {job.reference}
                       </Link>
-                    </td>
-                    <td className="p-3">{job.customerName}</td>
-                    <td className="p-3 tabular-nums">{job.dueDate ?? '—'}</td>
-                    <td className="p-3 text-right tabular-nums">{job.pieceCount}</td>
-                    <td className="p-3">
+                    </Cell>
+                    <Cell>{job.customerName}</Cell>
+                    <Cell className="tabular-nums">{job.dueDate ?? '—'}</Cell>
+                    <Cell numeric>{job.pieceCount}</Cell>
+                    <Cell>
                       <JobStatusBadge status={job.status} />
-                    </td>
-                    <td className="p-3" data-testid="job-quote-state">
+                    </Cell>
+                    <Cell data-testid="job-quote-state">
                       {job.quoteNumber && job.paymentState
                         ? `${job.quoteNumber} · ${PAYMENT_STATE_LABEL[job.paymentState]}`
                         : '—'}
-                    </td>
-                  </tr>
+                    </Cell>
+                  </TableRow>
                 ))}
               </tbody>
-            </table>
+            </Table>
           </ScrollRegion>
         )}
       </Card>

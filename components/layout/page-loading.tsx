@@ -1,4 +1,4 @@
-/** Shown by each route group's loading.tsx while a page reads its data. */
+/** Shown by each feature's loading.tsx while a page reads its data. */
 export function PageLoading() {
   return (
     <div className="space-y-4 py-6" aria-busy="true" data-testid="page-loading">

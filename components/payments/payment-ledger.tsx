@@ -1,28 +1,35 @@
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
 import { formatPence } from '@/lib/format/money';
 import type { PaymentsOverview } from '@/lib/quotes/get-payments-overview';
-import { PaymentsTableHead } from './payments-table-head';
 
 export function PaymentLedger({ rows }: { rows: PaymentsOverview['payments'] }) {
   if (!rows.length) return <p>No payments yet.</p>;
   return (
-    <table className="w-full text-left text-sm" data-testid="payment-ledger">
-      <PaymentsTableHead columns={['When', 'Job', 'Customer', 'What', 'Amount', 'By', 'Note']} />
+    <Table className="text-sm" data-testid="payment-ledger">
+      <TableHead
+        density="compact"
+        columns={['When', 'Job', 'Customer', 'What', { label: 'Amount', numeric: true }, 'By', 'Note']}
+      />
       <tbody>
         {rows.map((p) => (
-          <tr key={p.id} className="border-t border-sand">
-            <td className="py-1.5 pr-3 whitespace-nowrap">{new Date(p.at).toLocaleString('en-GB')}</td>
-            <td className="py-1.5 pr-3">{p.reference}</td>
-            <td className="py-1.5 pr-3">{p.customer}</td>
-            <td className="py-1.5 pr-3">
+          <TableRow key={p.id}>
+            <Cell density="compact" className="whitespace-nowrap">
+              {new Date(p.at).toLocaleString('en-GB')}
+            </Cell>
+            <Cell density="compact">{p.reference}</Cell>
+            <Cell density="compact">{p.customerName}</Cell>
+            <Cell density="compact">
               {p.kind.replace('_', ' ')}
               {p.status === 'failed' ? ' (failed)' : ''}
-            </td>
-            <td className="py-1.5 pr-3 font-mono">{formatPence(p.amountPence)}</td>
-            <td className="py-1.5 pr-3">{p.byName}</td>
-            <td className="py-1.5 pr-3">{p.note}</td>
-          </tr>
+            </Cell>
+            <Cell density="compact" numeric className="font-mono">
+              {formatPence(p.amountPence)}
+            </Cell>
+            <Cell density="compact">{p.byName}</Cell>
+            <Cell density="compact">{p.note}</Cell>
+          </TableRow>
         ))}
       </tbody>
-    </table>
+    </Table>
   );
 }

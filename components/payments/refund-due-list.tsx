@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { formatPence } from '@/lib/format/money';
-import { fetchJson } from '@/lib/queries/fetch-json';
+import { refundJobRequest } from '@/lib/queries/quotes';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import type { PaymentsOverview } from '@/lib/quotes/get-payments-overview';
 
@@ -41,11 +41,7 @@ export function RefundDueList({ rows }: { rows: Row[] }) {
 function RefundDueRow({ row, onRefunded }: { row: Row; onRefunded: (pence: number) => void }) {
   const router = useRouter();
   const refund = useApiMutation({
-    mutationFn: (reason: string) =>
-      fetchJson<{ requestedPence: number }>(`/api/jobs/${row.jobId}/refund`, {
-        method: 'POST',
-        body: JSON.stringify({ reason }),
-      }),
+    mutationFn: (reason: string) => refundJobRequest(row.jobId, { reason }),
     onSuccess: (data) => {
       onRefunded(data.requestedPence);
       router.refresh();
@@ -60,7 +56,7 @@ function RefundDueRow({ row, onRefunded }: { row: Row; onRefunded: (pence: numbe
   return (
     <li className="space-y-2 py-3">
       <p>
-        <span className="font-semibold">{row.reference}</span> · {row.customer} · paid{' '}
+        <span className="font-semibold">{row.reference}</span> · {row.customerName} · paid{' '}
         <span className="font-mono">{formatPence(row.paidPence)}</span>
       </p>
       <form onSubmit={submit} className="flex flex-wrap items-end gap-3" noValidate>

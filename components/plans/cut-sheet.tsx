@@ -4,11 +4,15 @@ import { formatCustomerDate } from '@/lib/format/customer-date';
 import { angleLine } from '@/lib/plans/angle-line';
 import { actualCutMm, cutRange } from '@/lib/plans/cut-words';
 import { useFormatLength } from '@/components/units/display-unit';
-import type { PlanViewData } from '@/lib/queries/plans';
+import type { PlanBoardView, PlanViewData } from '@/lib/queries/plans';
 import { DiagramLegend } from './diagram-legend';
 import { formatPounds } from '@/lib/format/money';
 import { PlanSectionBoards } from './plan-section-boards';
 
+/** What the sheet draws: the plan's settings, sections, boards and price (the server page passes its own). */
+type CutSheetPlan = Pick<PlanViewData, 'id' | 'settings' | 'sections' | 'price'> & {
+  boards: PlanBoardView[];
+};
 type Job = { reference: string; customerName: string; dueDate: string | null };
 
 /** The printable cut sheet: job, pieces by section, board diagrams and the quote. */
@@ -18,7 +22,7 @@ export function CutSheet({
   yardName,
   offcutTags,
 }: {
-  plan: PlanViewData;
+  plan: CutSheetPlan;
   job: Job;
   yardName: string;
   offcutTags: Record<number, string>;

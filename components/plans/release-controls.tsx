@@ -1,6 +1,5 @@
 'use client';
 
-import { useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
@@ -14,53 +13,27 @@ import {
   type PlanViewData,
 } from '@/lib/queries/plans';
 import { jobKeys, planKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
+import type { ReleasePlanBodyInput } from '@/lib/validations/quotes';
 
 type Taken = { id: number; tag: string; status: string };
+type Refusal = { offcuts?: Taken[]; missing?: string; reason?: string };
+type ReleaseChange = { kind: 'release'; body?: ReleasePlanBodyInput } | { kind: 'unrelease' };
 
 /** Release to the saw, or take back. A release that lost an offcut names it and offers a fresh plan. */
 export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner: boolean }) {
-  const queryClient = useQueryClient();
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  const [taken, setTaken] = useState<Taken[]>([]);
-  const [needsPayment, setNeedsPayment] = useState(false);
   const [reason, setReason] = useState('');
-  // The stock count cannot cover the plan: the yard hand confirms before it goes to the saw.
-  const [stockShort, setStockShort] = useState(false);
-
-  async function act(request: () => Promise<unknown>) {
-    setBusy(true);
-    setError(null);
-    setTaken([]);
-    setNeedsPayment(false);
-    setStockShort(false);
-    try {
-      await request();
-      await Promise.all([
-        queryClient.invalidateQueries({ queryKey: planKeys.detail(plan.id) }),
-        queryClient.invalidateQueries({ queryKey: jobKeys.detail(plan.jobId) }),
-      ]);
-      router.refresh();
-    } catch (e) {
-      setError((e as Error).message);
-      if (e instanceof ApiError && e.status === 409) {
-        const details = (e.body as { details?: { offcuts?: Taken[]; missing?: string; reason?: string } })
-          ?.details;
-        setTaken(details?.offcuts ?? []);
-        setNeedsPayment(Boolean(details?.missing));
-        setStockShort(details?.reason === 'stock_short');
-      }
-    } finally {
-      setBusy(false);
-    }
-  }
-
-  async function replan() {
-    setBusy(true);
-    try {
+  const change = useApiMutation({
+    mutationFn: (c: ReleaseChange): Promise<unknown> =>
+      c.kind === 'release' ? releasePlanRequest(plan.id, c.body) : unreleasePlanRequest(plan.id),
+    invalidates: [planKeys.detail(plan.id), jobKeys.detail(plan.jobId)],
+    onSuccess: () => router.refresh(),
+  });
+  const replan = useApiMutation({
+    mutationFn: () => {
       const { stockLengthIds, kerfMm, trimMm, minOffcutMm, useOffcuts, timeLimitMs } = plan.settings;
-      const next = await createPlanRequest(plan.jobId, {
+      return createPlanRequest(plan.jobId, {
         stockLengthIds,
         kerfMm,
         trimMm,
@@ -68,28 +41,38 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
         useOffcuts,
         timeLimitMs,
       });
-      router.push(`/plans/${next.id}`);
-    } catch (e) {
-      setError((e as Error).message);
-      setBusy(false);
-    }
-  }
+    },
+    onSuccess: (next) => router.push(`/plans/${next.id}`),
+  });
+  // Busy until a new plan's page opens.
+  const busy = change.isPending || replan.isPending || replan.isSuccess;
+  const error = replan.error?.message ?? change.error?.message;
+  // A 409 says why the plan cannot go to the saw yet.
+  const refusal =
+    change.error instanceof ApiError && change.error.status === 409
+      ? (change.error.body as { details?: Refusal } | null)?.details
+      : undefined;
+  const taken = refusal?.offcuts ?? [];
+  const needsPayment = Boolean(refusal?.missing);
+  // The stock count cannot cover the plan: the yard hand confirms before it goes to the saw.
+  const stockShort = refusal?.reason === 'stock_short';
+  const act = (c: ReleaseChange) => {
+    replan.reset();
+    change.mutate(c);
+  };
+  const release = (body?: ReleasePlanBodyInput) => act({ kind: 'release', body });
 
   return (
     <div className="space-y-3" data-testid="release-controls">
       {plan.status === 'planned' && <StockShortfalls planId={plan.id} />}
       <div className="flex flex-wrap gap-2">
         {plan.status === 'planned' && (
-          <Button size="lg" disabled={busy} onClick={() => act(() => releasePlanRequest(plan.id))}>
+          <Button size="lg" disabled={busy} onClick={() => release()}>
             Release to the saw
           </Button>
         )}
         {plan.status === 'released' && (
-          <Button
-            variant="secondary"
-            disabled={busy}
-            onClick={() => act(() => unreleasePlanRequest(plan.id))}
-          >
+          <Button variant="secondary" disabled={busy} onClick={() => act({ kind: 'unrelease' })}>
             Take back from the saw
           </Button>
         )}
@@ -116,7 +99,7 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
                 Taken from the rack since this plan was made:{' '}
                 {taken.map((o) => `${o.tag} (${o.status})`).join(', ')}.
               </p>
-              <Button className="mt-2" variant="secondary" disabled={busy} onClick={replan}>
+              <Button className="mt-2" variant="secondary" disabled={busy} onClick={() => replan.mutate()}>
                 Plan again with what is on the rack now
               </Button>
             </>
@@ -126,7 +109,7 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
               className="mt-2"
               variant="secondary"
               disabled={busy}
-              onClick={() => act(() => releasePlanRequest(plan.id, { confirmShortfall: true }))}
+              onClick={() => release({ confirmShortfall: true })}
               data-testid="confirm-shortfall"
             >
               The boards are in the yard: release anyway
@@ -137,7 +120,7 @@ export function ReleaseControls({ plan, isOwner }: { plan: PlanViewData; isOwner
               className="mt-3 flex flex-wrap items-end gap-2"
               onSubmit={(e) => {
                 e.preventDefault();
-                void act(() => releasePlanRequest(plan.id, { override: reason }));
+                release({ override: reason });
               }}
             >
               <label className="flex min-w-64 flex-1 flex-col text-sm font-semibold text-bark">

@@ -2,50 +2,43 @@
 
 import { useQuery } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
 import { createPlanRequest, type PlanViewData } from '@/lib/queries/plans';
 import { sectionOptionsQuery } from '@/lib/queries/sections';
-import { fieldIssues } from '@/lib/queries/field-errors';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
+import type { CreatePlanBodyInput } from '@/lib/validations/plans';
 
 /** Plan the job again with other settings; the new plan opens beside a link to compare with this one. */
 export function ReplanForm({ plan }: { plan: PlanViewData }) {
   const router = useRouter();
   const fmt = useFormatLength();
   const sections = useQuery(sectionOptionsQuery());
-  const [busy, setBusy] = useState(false);
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  const replan = useApiMutation({
+    mutationFn: (settings: CreatePlanBodyInput) => createPlanRequest(plan.jobId, settings),
+    onSuccess: (next) => router.push(`/plans/${next.id}?previous=${plan.id}`),
+  });
+  // Busy until the new plan's page opens.
+  const busy = replan.isPending || replan.isSuccess;
+  const errors: Record<string, string | undefined> = { form: replan.error?.message, ...replan.fieldErrors };
   const planSections = (sections.data ?? []).filter((s) => plan.sections.some((p) => p.sectionId === s.id));
   const allowed = plan.settings.stockLengthIds;
 
-  async function submit(e: React.FormEvent<HTMLFormElement>) {
+  function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const data = new FormData(e.currentTarget);
     const ids = data.getAll('stockLengthId').map(Number);
     const everyLength = planSections.flatMap((s) => s.stockLengths).length;
-    setBusy(true);
-    setErrors({});
-    try {
-      const next = await createPlanRequest(plan.jobId, {
-        kerfMm: Number(data.get('kerfMm')),
-        trimMm: Number(data.get('trimMm')),
-        minOffcutMm: Number(data.get('minOffcutMm')),
-        useOffcuts: data.get('useOffcuts') === 'on',
-        timeLimitMs: Math.round(Number(data.get('seconds')) * 1000),
-        stockLengthIds: ids.length === everyLength ? null : ids,
-      });
-      router.push(`/plans/${next.id}?previous=${plan.id}`);
-    } catch (error) {
-      const issues = fieldIssues(error);
-      setErrors({
-        form: (error as Error).message,
-        ...Object.fromEntries(issues.map((i) => [i.path, i.message])),
-      });
-      setBusy(false);
-    }
+    replan.mutate({
+      kerfMm: Number(data.get('kerfMm')),
+      trimMm: Number(data.get('trimMm')),
+      minOffcutMm: Number(data.get('minOffcutMm')),
+      useOffcuts: data.get('useOffcuts') === 'on',
+      timeLimitMs: Math.round(Number(data.get('seconds')) * 1000),
+      stockLengthIds: ids.length === everyLength ? null : ids,
+    });
   }
 
   const number = (name: string, label: string, value: number, step = 1) => (

@@ -3,24 +3,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { Notice } from '@/components/ui/notice';
 import { useFormatLength } from '@/components/units/display-unit';
-import { fetchJson } from '@/lib/queries/fetch-json';
-import { planKeys } from '@/lib/queries/query-keys';
-
-type Shortfall = {
-  stockLengthId: number;
-  sectionName: string;
-  lengthMm: number;
-  needed: number;
-  onHand: number;
-};
+import { planStockCheckQuery } from '@/lib/queries/plans';
 
 /** Before release: stock lengths the plan needs more of than the yard holds. Silent when nothing is short. */
 export function StockShortfalls({ planId }: { planId: number }) {
   const fmt = useFormatLength();
-  const check = useQuery({
-    queryKey: planKeys.stockCheck(planId),
-    queryFn: () => fetchJson<{ short: Shortfall[] }>(`/api/plans/${planId}/stock-check`),
-  });
+  const check = useQuery(planStockCheckQuery(planId));
   if (!check.data || check.data.short.length === 0) return null;
   return (
     <Notice tone="warning" data-testid="stock-shortfalls">

@@ -1,57 +1,43 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { formatCustomerDate } from '@/lib/format/customer-date';
 import { formatPence } from '@/lib/format/money';
-import { fetchJson } from '@/lib/queries/fetch-json';
+import { acceptQuoteRequest, payQuoteRequest } from '@/lib/queries/quotes';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import type { CustomerQuote } from '@/lib/quotes/get-customer-quote';
 
 /** Accept (typed name, non-returnable tick, on account for trade), then pay a deposit or in full. */
 export function CustomerQuoteActions({ token, data }: { token: string; data: CustomerQuote }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(data.payment.lastFailure);
   const { quote, payment } = data;
-  const base = `/api/quote-links/${token}`;
+  const accept = useApiMutation({
+    mutationFn: (form: FormData) =>
+      acceptQuoteRequest(token, {
+        name: String(form.get('name') ?? ''),
+        // An unticked box is sent as it is: the server answers with its own message.
+        nonReturnable: (form.get('nonReturnable') === 'on') as true,
+        onAccount: form.get('onAccount') === 'on',
+      }),
+    onSuccess: () => router.refresh(),
+  });
+  const pay = useApiMutation({
+    mutationFn: (share: 'deposit' | 'full') => payQuoteRequest(token, { share }),
+    onSuccess: ({ url }) => window.location.assign(url),
+  });
+  // Busy too once the payment page is opening.
+  const busy = accept.isPending || pay.isPending || pay.isSuccess;
+  // The last failed card payment shows until the customer tries again.
+  const error =
+    accept.error?.message ??
+    pay.error?.message ??
+    (accept.isIdle && pay.isIdle ? data.payment.lastFailure : null);
 
-  async function accept(e: React.FormEvent<HTMLFormElement>) {
+  function submitAcceptance(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const form = new FormData(e.currentTarget);
-    setBusy(true);
-    setError(null);
-    try {
-      await fetchJson(`${base}/accept`, {
-        method: 'POST',
-        body: JSON.stringify({
-          name: String(form.get('name') ?? ''),
-          nonReturnable: form.get('nonReturnable') === 'on',
-          onAccount: form.get('onAccount') === 'on',
-        }),
-      });
-      router.refresh();
-    } catch (err) {
-      setError((err as Error).message);
-    } finally {
-      setBusy(false);
-    }
-  }
-
-  async function pay(share: 'deposit' | 'full') {
-    setBusy(true);
-    setError(null);
-    try {
-      const { url } = await fetchJson<{ url: string }>(`${base}/pay`, {
-        method: 'POST',
-        body: JSON.stringify({ share }),
-      });
-      window.location.assign(url);
-    } catch (err) {
-      setError((err as Error).message);
-      setBusy(false);
-    }
+    accept.mutate(new FormData(e.currentTarget));
   }
 
   if (!quote.acceptedAt) {
@@ -61,7 +47,7 @@ export function CustomerQuoteActions({ token, data }: { token: string; data: Cus
       );
     return (
       <form
-        onSubmit={accept}
+        onSubmit={submitAcceptance}
         className="space-y-3 rounded-xl border border-sand bg-white p-4 sm:p-6"
         data-testid="accept-form"
       >
@@ -106,7 +92,7 @@ export function CustomerQuoteActions({ token, data }: { token: string; data: Cus
       {canPay && (
         <div className="flex flex-col gap-2 sm:flex-row">
           {depositDue > 0 && (
-            <Button size="lg" disabled={busy} onClick={() => pay('deposit')}>
+            <Button size="lg" disabled={busy} onClick={() => pay.mutate('deposit')}>
               Pay deposit {formatPence(depositDue)}
             </Button>
           )}
@@ -114,7 +100,7 @@ export function CustomerQuoteActions({ token, data }: { token: string; data: Cus
             size="lg"
             variant={depositDue > 0 ? 'secondary' : 'primary'}
             disabled={busy}
-            onClick={() => pay('full')}
+            onClick={() => pay.mutate('full')}
           >
             Pay {formatPence(payment.balancePence)} {payment.paidPence > 0 ? 'balance' : 'in full'}
           </Button>

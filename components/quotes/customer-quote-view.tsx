@@ -54,6 +54,12 @@ export function CustomerQuoteView({
       <CustomerQuoteActions token={token} data={data} />
       <section className="space-y-2">
         <h2 className="text-xl font-bold">Your pieces</h2>
+        {data.items.some((item) => item.toleranceMm > 0) && (
+          <p className="text-sm text-bark-soft">
+            A nominal piece is sold by its length but may be cut a few millimetres short, so that a whole
+            stock length or fewer boards can be used; an exact piece is supplied to the millimetre.
+          </p>
+        )}
         <ul
           className="divide-y divide-sand rounded-xl border border-sand bg-white"
           data-testid="customer-pieces"
@@ -64,8 +70,15 @@ export function CustomerQuoteView({
                 {item.section}
                 {item.label ? ` · ${item.label}` : ''}
               </span>
-              <span className="font-mono whitespace-nowrap">
-                {item.lengthMm} mm × {item.quantity}
+              <span className="text-right">
+                <span className="font-mono whitespace-nowrap">
+                  {item.lengthMm} mm × {item.quantity}
+                </span>
+                <span className="block text-sm text-bark-soft" data-testid="piece-length-kind">
+                  {item.toleranceMm > 0
+                    ? `nominal: may be up to ${item.toleranceMm} mm short`
+                    : 'exact length'}
+                </span>
               </span>
             </li>
           ))}

@@ -1,6 +1,5 @@
 'use client';
 
-import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -10,23 +9,32 @@ import { PAYMENT_STATE_LABEL } from '@/lib/quotes/payment-state';
 import { QuoteTable } from './quote-table';
 import { formatCustomerDate } from '@/lib/format/customer-date';
 import { planKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 /** The plan's quote for the office: figures, acceptance and payment, and the customer's link. */
 export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: boolean }) {
   const { quote } = plan;
-  const queryClient = useQueryClient();
   const [link, setLink] = useState<{ url: string; expiresAt: string } | null>(null);
-  const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | null>(null);
-
-  async function run(action: () => Promise<void>) {
-    setMessage(null);
-    try {
-      await action();
-      await queryClient.invalidateQueries({ queryKey: planKeys.detail(plan.id) });
-    } catch (e) {
-      setMessage({ tone: 'error', text: (e as Error).message });
-    }
-  }
+  const makeLink = useApiMutation({
+    mutationFn: () => createQuoteLinkRequest(plan.id),
+    invalidates: [planKeys.detail(plan.id)],
+    onSuccess: setLink,
+  });
+  const withdraw = useApiMutation({
+    mutationFn: () => revokeQuoteLinksRequest(plan.id),
+    invalidates: [planKeys.detail(plan.id)],
+    onSuccess: () => setLink(null),
+  });
+  // One message at a time: the latest action's.
+  const failed = makeLink.error ?? withdraw.error;
+  const message = failed
+    ? { tone: 'error' as const, text: failed.message }
+    : withdraw.data
+      ? {
+          tone: 'info' as const,
+          text: `${withdraw.data.revoked} link${withdraw.data.revoked === 1 ? '' : 's'} withdrawn.`,
+        }
+      : null;
 
   return (
     <section className="space-y-3" data-testid="quote-panel">
@@ -49,19 +57,19 @@ export function QuotePanel({ plan, canShare }: { plan: PlanViewData; canShare: b
         <div className="no-print flex flex-wrap gap-2">
           <Button
             variant="secondary"
-            onClick={() => run(async () => setLink(await createQuoteLinkRequest(plan.id)))}
+            onClick={() => {
+              withdraw.reset();
+              makeLink.mutate();
+            }}
           >
             Make a link for the customer
           </Button>
           <Button
             variant="secondary"
-            onClick={() =>
-              run(async () => {
-                const { revoked } = await revokeQuoteLinksRequest(plan.id);
-                setLink(null);
-                setMessage({ tone: 'info', text: `${revoked} link${revoked === 1 ? '' : 's'} withdrawn.` });
-              })
-            }
+            onClick={() => {
+              makeLink.reset();
+              withdraw.mutate();
+            }}
           >
             Withdraw links
           </Button>

@@ -3,6 +3,7 @@
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/field';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { Cell, HeadCell, Table, TableHead, TableRow } from '@/components/ui/table';
 import { downloadCsv, rowsToCsv, type Column } from './csv-download';
 
 type Props<T> = {
@@ -45,28 +46,26 @@ export function ChartPanel<T>({ id, title, lead, rows, columns, empty, emptyText
           <details>
             <summary className="cursor-pointer text-sm font-semibold text-spruce">Show the figures</summary>
             <ScrollRegion label={`${title}: the figures`} className="mt-2 max-h-80">
-              <table className="w-full text-left text-sm">
-                <thead className="sticky top-0 bg-shaving">
-                  <tr>
-                    {columns.map((c) => (
-                      <th key={c.key} className="p-1.5">
-                        {c.label}
-                      </th>
-                    ))}
-                  </tr>
-                </thead>
+              <Table className="text-sm">
+                <TableHead density="compact" className="sticky top-0">
+                  {columns.map((c) => (
+                    <HeadCell key={c.key} density="compact">
+                      {c.label}
+                    </HeadCell>
+                  ))}
+                </TableHead>
                 <tbody>
                   {rows.map((r, i) => (
-                    <tr key={i} className="border-t border-shaving">
+                    <TableRow key={i}>
                       {columns.map((c) => (
-                        <td key={c.key} className="p-1.5">
+                        <Cell key={c.key} density="compact">
                           {c.format ? c.format(r[c.key], r) : String(r[c.key])}
-                        </td>
+                        </Cell>
                       ))}
-                    </tr>
+                    </TableRow>
                   ))}
                 </tbody>
-              </table>
+              </Table>
             </ScrollRegion>
           </details>
         </>

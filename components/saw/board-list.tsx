@@ -1,5 +1,5 @@
 // Every board of the plan with its state; tap one to cut it out of order.
-import { sawLength } from './format-saw-length';
+import { formatLength, type DisplayUnit } from '@/lib/units';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
 import { TagCode } from './tag-code';
@@ -14,7 +14,7 @@ export function BoardList({
 }: {
   boards: SawBoard[];
   current: number | null;
-  unit: 'mm' | 'imperial';
+  unit: DisplayUnit;
   onPick: (boardNo: number) => void;
 }) {
   return (
@@ -46,7 +46,8 @@ export function BoardList({
                 )}
               </span>
               <span className="block text-sm">
-                {sawLength(b.lengthMm, unit)} · {b.pieces.length} {b.pieces.length === 1 ? 'piece' : 'pieces'}
+                {formatLength(b.lengthMm, unit, { withUnit: true })} · {b.pieces.length}{' '}
+                {b.pieces.length === 1 ? 'piece' : 'pieces'}
               </span>
             </span>
             <span className="text-right text-sm font-semibold uppercase">{STATE[b.status]}</span>

@@ -1,15 +1,13 @@
 // What to fetch, the trim, each piece by its length (marks as the tape's aid), and what is left.
-import { sawLength } from './format-saw-length';
+import { formatLength, type DisplayUnit } from '@/lib/units';
 import { angleLine } from '@/lib/plans/angle-line';
 import { actualCutMm, cutDiffers, FULL_LENGTH_WORDS } from '@/lib/plans/cut-words';
 import type { SawBoard } from '@/lib/queries/saw';
 import { cn } from '@/lib/cn';
 import { TagCode } from './tag-code';
 
-type Unit = 'mm' | 'imperial';
-
-export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
-  const len = (mm: number) => sawLength(mm, unit);
+export function FetchLine({ board, unit }: { board: SawBoard; unit: DisplayUnit }) {
+  const len = (mm: number) => formatLength(mm, unit, { withUnit: true });
   return (
     <p className="text-2xl font-bold text-bark" data-testid="fetch-line">
       {board.source === 'offcut' && board.offcut ? (
@@ -33,8 +31,8 @@ export function FetchLine({ board, unit }: { board: SawBoard; unit: Unit }) {
   );
 }
 
-export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit; nextCut: number }) {
-  const len = (mm: number) => sawLength(mm, unit);
+export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: DisplayUnit; nextCut: number }) {
+  const len = (mm: number) => formatLength(mm, unit, { withUnit: true });
   // New stock of only nominal pieces is not trimmed: its factory end is accepted.
   const from =
     board.source === 'offcut' ? 'the sawn end' : board.trimMm > 0 ? 'the squared end' : 'the factory end';
@@ -110,7 +108,7 @@ export function CutList({ board, unit, nextCut }: { board: SawBoard; unit: Unit;
 }
 
 /** A board sold whole: no trim and no cut; the operator checks it and hands it over. */
-function FullLengthStep({ board, unit }: { board: SawBoard; unit: Unit }) {
+function FullLengthStep({ board, unit }: { board: SawBoard; unit: DisplayUnit }) {
   const piece = board.pieces[0];
   return (
     <ol className="space-y-2" data-testid="cut-list">
@@ -122,7 +120,7 @@ function FullLengthStep({ board, unit }: { board: SawBoard; unit: Unit }) {
           {FULL_LENGTH_WORDS[0].toUpperCase() + FULL_LENGTH_WORDS.slice(1)}
         </span>
         <span className="block text-xl font-semibold">
-          {piece?.label || 'piece'} {sawLength(board.lengthMm, unit)}
+          {piece?.label || 'piece'} {formatLength(board.lengthMm, unit, { withUnit: true })}
           {piece?.marks ? ` · ${piece.marks}` : ''}: check the board for splits and shakes, then hand it over
           as it is.
         </span>
@@ -131,14 +129,14 @@ function FullLengthStep({ board, unit }: { board: SawBoard; unit: Unit }) {
   );
 }
 
-export function LeftOver({ board, unit }: { board: SawBoard; unit: Unit }) {
+export function LeftOver({ board, unit }: { board: SawBoard; unit: DisplayUnit }) {
   if (board.remainderMm <= 0)
     return (
       <p className="text-lg font-semibold" data-testid="left-over">
         Nothing left over.
       </p>
     );
-  const len = sawLength(board.remainderMm, unit);
+  const len = formatLength(board.remainderMm, unit, { withUnit: true });
   return board.keepRemainder ? (
     <p className="rounded-lg bg-amber px-4 py-2 text-xl font-bold text-white" data-testid="left-over">
       Keep {len}: it gets a tag when you confirm — label it and rack it.

@@ -4,11 +4,12 @@ import type { SawBoard } from '@/lib/queries/saw';
 import { BoardDrawing } from './board-drawing';
 import { CutList, FetchLine, LeftOver } from './board-steps';
 import { SectionChange } from './section-change';
+import type { DisplayUnit } from '@/lib/units';
 
 type Props = {
   board: SawBoard;
   total: number;
-  unit: 'mm' | 'imperial';
+  unit: DisplayUnit;
   kerfMm: number;
   nextCut: number;
   busy: boolean;

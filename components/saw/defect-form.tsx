@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { parseLength } from '@/lib/units';
-import { DEFECT_REASONS, type DefectReason, type ReportDefectBody } from '@/lib/validations/saw';
+import { DEFECT_REASONS, type DefectReason, type ReportDefectBodyInput } from '@/lib/validations/saw';
 import { cn } from '@/lib/cn';
 
 export function DefectForm({
@@ -17,7 +17,7 @@ export function DefectForm({
   boardNo: number;
   busy: boolean;
   error: string | null;
-  onSend: (body: ReportDefectBody) => void;
+  onSend: (body: ReportDefectBodyInput) => void;
   onCancel: () => void;
 }) {
   const [reason, setReason] = useState<DefectReason | null>(null);

@@ -5,11 +5,11 @@ import { useCallback, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { findOffcutRequest, type OffcutBrief } from '@/lib/queries/saw';
-import { sawLength } from './format-saw-length';
+import { formatLength, type DisplayUnit } from '@/lib/units';
 import { LabelScanner } from './label-scanner';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
-export function OffcutFinder({ unit }: { unit: 'mm' | 'imperial' }) {
+export function OffcutFinder({ unit }: { unit: DisplayUnit }) {
   const [tag, setTag] = useState('');
   const [scanning, setScanning] = useState(false);
   const find = useApiMutation({ mutationFn: findOffcutRequest });
@@ -57,7 +57,7 @@ export function OffcutFinder({ unit }: { unit: 'mm' | 'imperial' }) {
   );
 }
 
-function OffcutCard({ offcut, unit }: { offcut: OffcutBrief; unit: 'mm' | 'imperial' }) {
+function OffcutCard({ offcut, unit }: { offcut: OffcutBrief; unit: DisplayUnit }) {
   return (
     <section
       className="space-y-1 rounded-xl border-2 border-bark bg-white p-4 text-lg"
@@ -65,7 +65,7 @@ function OffcutCard({ offcut, unit }: { offcut: OffcutBrief; unit: 'mm' | 'imper
     >
       <h2 className="font-mono text-3xl font-bold">{offcut.tag}</h2>
       <p className="text-2xl font-bold">
-        {offcut.sectionName} · {sawLength(offcut.lengthMm, unit)}
+        {offcut.sectionName} · {formatLength(offcut.lengthMm, unit, { withUnit: true })}
       </p>
       <p>
         <strong>Where:</strong> {offcut.location || 'not recorded'} · <strong>Status:</strong> {offcut.status}

@@ -2,6 +2,7 @@
 import { Button } from '@/components/ui/button';
 import type { SawBoard } from '@/lib/queries/saw';
 import { CutList } from './board-steps';
+import type { DisplayUnit } from '@/lib/units';
 
 export function PastBoard({
   board,
@@ -9,7 +10,7 @@ export function PastBoard({
   onNext,
 }: {
   board: SawBoard;
-  unit: 'mm' | 'imperial';
+  unit: DisplayUnit;
   onNext: () => void;
 }) {
   const bad = board.status === 'defective';

@@ -2,12 +2,12 @@
 // The saw operator's screen for one plan: one board at a time, confirmed with one tap.
 import Link from 'next/link';
 import { useState } from 'react';
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { Notice } from '@/components/ui/notice';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/queries/fetch-json';
 import { confirmBoardRequest, reportDefectRequest, sawPlanQuery, undoBoardRequest } from '@/lib/queries/saw';
-import type { ReportDefectBody } from '@/lib/validations/saw';
+import type { ReportDefectBodyInput } from '@/lib/validations/saw';
 import { BoardCountQuestion } from './board-count-question';
 import { BoardList } from './board-list';
 import { CurrentBoard } from './current-board';
@@ -16,6 +16,7 @@ import { PastBoard } from './past-board';
 import { SafetyLine } from './safety-line';
 import { StationMessage, type Message } from './station-message';
 import { sawKeys } from '@/lib/queries/query-keys';
+import { useApiMutation } from '@/lib/queries/use-api-mutation';
 
 export function SawStation({ planId }: { planId: number }) {
   const client = useQueryClient();
@@ -26,6 +27,7 @@ export function SawStation({ planId }: { planId: number }) {
   const [message, setMessage] = useState<Message | null>(null);
   // The stock count says this board's length is gone: ask before recording the cut.
   const [countQuestion, setCountQuestion] = useState<{ boardNo: number; text: string } | null>(null);
+  // Refreshed inside onSuccess, not by `invalidates`: the boards must be fresh before the message shows.
   const refresh = () => client.invalidateQueries({ queryKey: sawKeys.all });
   const moveOn = () => {
     setPicked(null);
@@ -34,7 +36,7 @@ export function SawStation({ planId }: { planId: number }) {
     setCountQuestion(null);
   };
 
-  const done = useMutation({
+  const done = useApiMutation({
     mutationFn: ({ boardNo, boardThere }: { boardNo: number; boardThere?: true }) =>
       confirmBoardRequest(planId, boardNo, boardThere),
     // Fresh boards first, then the message: the screen never shows a confirmed board as the next one.
@@ -54,7 +56,7 @@ export function SawStation({ planId }: { planId: number }) {
       else setMessage({ kind: 'error', text: e.message });
     },
   });
-  const undo = useMutation({
+  const undo = useApiMutation({
     mutationFn: () => undoBoardRequest(planId),
     onSuccess: async (r) => {
       await refresh();
@@ -64,8 +66,8 @@ export function SawStation({ planId }: { planId: number }) {
     },
     onError: (e) => setMessage({ kind: 'error', text: e.message }),
   });
-  const defect = useMutation({
-    mutationFn: ({ boardNo, body }: { boardNo: number; body: ReportDefectBody }) =>
+  const defect = useApiMutation({
+    mutationFn: ({ boardNo, body }: { boardNo: number; body: ReportDefectBodyInput }) =>
       reportDefectRequest(planId, boardNo, body),
     onSuccess: async (r) => {
       await refresh();

@@ -7,6 +7,7 @@ import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit } from '@/db/enums';
 import { stockMovementsQuery } from '@/lib/queries/stock';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { Cell, Table, TableHead, TableRow } from '@/components/ui/table';
 import { cn } from '@/lib/cn';
 
 const KIND_NAMES: Record<string, string> = {
@@ -24,39 +25,35 @@ export function RecentMovements({ unit }: { unit: DisplayUnit }) {
   if (movements.error) return <Notice tone="error">{movements.error.message}</Notice>;
   return (
     <ScrollRegion label="Recent stock movements" className={cn(cardClass, 'p-0')}>
-      <table className="w-full text-left text-sm" data-testid="movements-table">
-        <thead className="bg-shaving">
-          <tr>
-            <th className="p-2">When</th>
-            <th className="p-2">What</th>
-            <th className="p-2">Stock length</th>
-            <th className="p-2 text-right">Change</th>
-            <th className="p-2">Why</th>
-            <th className="p-2">Who</th>
-          </tr>
-        </thead>
+      <Table className="text-sm" data-testid="movements-table">
+        <TableHead
+          density="snug"
+          columns={['When', 'What', 'Stock length', { label: 'Change', numeric: true }, 'Why', 'Who']}
+        />
         <tbody>
           {(movements.data ?? []).map((m) => (
-            <tr key={m.id} className="border-t border-shaving">
-              <td className="p-2 whitespace-nowrap">
+            <TableRow key={m.id}>
+              <Cell density="snug" className="whitespace-nowrap">
                 {new Date(m.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })}
-              </td>
-              <td className="p-2">{KIND_NAMES[m.kind] ?? m.kind}</td>
-              <td className="p-2">
+              </Cell>
+              <Cell density="snug">{KIND_NAMES[m.kind] ?? m.kind}</Cell>
+              <Cell density="snug">
                 {m.sectionName} — {lengthText(m.lengthMm, unit)}
-              </td>
-              <td
-                className={`p-2 text-right font-semibold ${m.quantityDelta < 0 ? 'text-brick' : 'text-spruce-dark'}`}
+              </Cell>
+              <Cell
+                density="snug"
+                numeric
+                className={cn('font-semibold', m.quantityDelta < 0 ? 'text-brick' : 'text-spruce-dark')}
               >
                 {m.quantityDelta > 0 ? '+' : ''}
                 {m.quantityDelta}
-              </td>
-              <td className="p-2">{m.reason}</td>
-              <td className="p-2">{m.userName ?? '—'}</td>
-            </tr>
+              </Cell>
+              <Cell density="snug">{m.reason}</Cell>
+              <Cell density="snug">{m.userName ?? '—'}</Cell>
+            </TableRow>
           ))}
         </tbody>
-      </table>
+      </Table>
       {movements.isPending && <p className="p-3">Loading…</p>}
     </ScrollRegion>
   );

@@ -7,7 +7,8 @@ import { Notice } from '@/components/ui/notice';
 import { sectionKeys } from '@/lib/queries/query-keys';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import { SectionTradeFields, type TradeDraft } from './section-trade-fields';
-import { saveSectionRequest, type SectionInput, type SectionRow } from '@/lib/queries/stock';
+import { saveSectionRequest, type SectionRow } from '@/lib/queries/stock';
+import type { SectionBodyInput } from '@/lib/validations/stock';
 
 type LengthDraft = {
   id?: number;
@@ -65,7 +66,7 @@ export function SectionEditor({ section, onClose }: { section: SectionRow | null
   const save = useApiMutation({
     invalidates: [sectionKeys.all],
     mutationFn: () => {
-      const body: SectionInput = {
+      const body: SectionBodyInput = {
         ...draft.fields,
         thicknessMm: Number(draft.fields.thicknessMm),
         widthMm: Number(draft.fields.widthMm),

@@ -69,6 +69,6 @@ export function useDisplayUnit(): UnitContext {
 
 /** "2400 mm" or "7′-10 1/2″". */
 export function useFormatLength() {
-  const { format, suffix } = useDisplayUnit();
-  return (mm: number) => `${format(mm)}${suffix}`;
+  const { unit } = useDisplayUnit();
+  return (mm: number) => formatLength(mm, unit, { withUnit: true });
 }

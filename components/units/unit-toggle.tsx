@@ -1,12 +1,13 @@
 'use client';
 
 import { cn } from '@/lib/cn';
+import type { DisplayUnit } from '@/lib/units';
 import { useDisplayUnit } from './display-unit';
 
 /** Switches how lengths are shown for this person: millimetres or feet-inches. */
 export function UnitToggle() {
   const { unit, setUnit } = useDisplayUnit();
-  const option = (value: 'mm' | 'imperial', label: string) => (
+  const option = (value: DisplayUnit, label: string) => (
     <button
       type="button"
       aria-pressed={unit === value}

@@ -2,6 +2,7 @@
 
 import type { DisplayUnit } from '@/db/enums';
 import { lengthText } from '@/components/stock/stock-length-label';
+import { Cell, HeadCell, Table, TableHead, TableRow } from '@/components/ui/table';
 import type { OffcutRow, RackFilters } from '@/lib/queries/offcuts';
 import { OffcutLocationCell } from './offcut-location-cell';
 
@@ -44,80 +45,84 @@ export function RackTable({
   const sortBy = (key: string) =>
     onSort(key, filters.sort === key && filters.dir === 'desc' ? 'asc' : 'desc');
   return (
-    <table className="w-full text-left text-sm" data-testid="rack-table">
-      <thead className="bg-shaving">
-        <tr>
-          <th className="p-2">
-            <input
-              type="checkbox"
-              aria-label="Choose every offcut on this page"
-              checked={allChosen}
-              onChange={(e) =>
-                onChoose(
-                  rows.map((r) => r.id),
-                  e.target.checked,
-                )
-              }
-            />
-          </th>
-          {COLUMNS.map(([key, label]) => (
-            <th
-              key={key}
-              className="p-2"
-              aria-sort={
-                filters.sort === key ? (filters.dir === 'asc' ? 'ascending' : 'descending') : undefined
-              }
+    <Table className="text-sm" data-testid="rack-table">
+      <TableHead>
+        <HeadCell density="snug">
+          <input
+            type="checkbox"
+            aria-label="Choose every offcut on this page"
+            checked={allChosen}
+            onChange={(e) =>
+              onChoose(
+                rows.map((r) => r.id),
+                e.target.checked,
+              )
+            }
+          />
+        </HeadCell>
+        {COLUMNS.map(([key, label]) => (
+          <HeadCell
+            key={key}
+            density="snug"
+            aria-sort={
+              filters.sort === key ? (filters.dir === 'asc' ? 'ascending' : 'descending') : undefined
+            }
+          >
+            <button
+              type="button"
+              className="font-semibold underline-offset-2 hover:underline"
+              onClick={() => sortBy(key)}
             >
-              <button
-                type="button"
-                className="font-semibold underline-offset-2 hover:underline"
-                onClick={() => sortBy(key)}
-              >
-                {label}
-                {filters.sort === key ? (filters.dir === 'desc' ? ' ▼' : ' ▲') : ''}
-              </button>
-            </th>
-          ))}
-          <th className="p-2">Status</th>
-          <th className="p-2">From</th>
-        </tr>
-      </thead>
+              {label}
+              {filters.sort === key ? (filters.dir === 'desc' ? ' ▼' : ' ▲') : ''}
+            </button>
+          </HeadCell>
+        ))}
+        <HeadCell density="snug">Status</HeadCell>
+        <HeadCell density="snug">From</HeadCell>
+      </TableHead>
       <tbody>
         {rows.map((o) => {
           const age = Math.floor((now - Date.parse(o.createdAt)) / DAY_MS);
           return (
-            <tr key={o.id} className="border-t border-shaving" data-testid={`offcut-row-${o.tag}`}>
-              <td className="p-2">
+            <TableRow key={o.id} data-testid={`offcut-row-${o.tag}`}>
+              <Cell density="snug">
                 <input
                   type="checkbox"
                   aria-label={`Choose ${o.tag}`}
                   checked={chosen.has(o.id)}
                   onChange={(e) => onChoose([o.id], e.target.checked)}
                 />
-              </td>
-              <td className="p-2 font-mono font-semibold whitespace-nowrap">{o.tag}</td>
-              <td className="p-2">{o.sectionName}</td>
-              <td className="p-2 whitespace-nowrap">{lengthText(o.lengthMm, unit)}</td>
-              <td className="p-2">
+              </Cell>
+              <Cell density="snug" className="font-mono font-semibold whitespace-nowrap">
+                {o.tag}
+              </Cell>
+              <Cell density="snug">{o.sectionName}</Cell>
+              <Cell density="snug" className="whitespace-nowrap">
+                {lengthText(o.lengthMm, unit)}
+              </Cell>
+              <Cell density="snug">
                 <OffcutLocationCell offcut={o} canEdit={canEdit} onError={onError} />
-              </td>
-              <td className="p-2 whitespace-nowrap">
+              </Cell>
+              <Cell density="snug" className="whitespace-nowrap">
                 {age} d
                 {age >= clearAfterDays && (o.status === 'available' || o.status === 'reserved') && (
                   <span className="ml-2 rounded bg-amber-light px-1.5 py-0.5 text-xs font-semibold">
                     clear?
                   </span>
                 )}
-              </td>
-              <td className="p-2">
+              </Cell>
+              <Cell density="snug">
                 {o.status}
                 {o.scrapReason ? ` — ${o.scrapReason}` : ''}
-              </td>
-              <td className="p-2 text-bark-soft">{o.origin}</td>
-            </tr>
+              </Cell>
+              <Cell density="snug" className="text-bark-soft">
+                {o.origin}
+              </Cell>
+            </TableRow>
           );
         })}
       </tbody>
-    </table>
+    </Table>
   );
 }

@@ -5,8 +5,9 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import type { DisplayUnit, Region } from '@/db/enums';
-import { fetchJson } from '@/lib/queries/fetch-json';
+import { saveYardSettingsRequest } from '@/lib/queries/yard';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
+import type { YardSettingsBodyInput } from '@/lib/validations/yard-settings';
 
 export type SettingsValues = {
   yardName: string;
@@ -83,17 +84,20 @@ export function SettingsForm({ initial }: { initial: SettingsValues }) {
   );
   const save = useApiMutation({
     mutationFn: () =>
-      fetchJson('/api/settings', {
-        method: 'PATCH',
-        body: JSON.stringify({
-          ...Object.fromEntries(NUMBERS.map(([k]) => [k, values[k] === '' ? null : Number(values[k])])),
-          yardName: values.yardName,
-          displayUnit: values.displayUnit,
-          region: values.region,
-          yardAddress: values.yardAddress,
-          vatNumber: values.vatNumber,
-          remaindersGoTo: values.remaindersGoTo,
-        }),
+      saveYardSettingsRequest({
+        // An empty box is sent as null: the server answers with that field's own message.
+        ...(Object.fromEntries(
+          NUMBERS.map(([k]) => [k, values[k] === '' ? null : Number(values[k])]),
+        ) as Pick<
+          YardSettingsBodyInput,
+          'kerfMm' | 'trimMm' | 'minOffcutMm' | 'perCutChargePence' | 'clearOffcutsAfterDays'
+        >),
+        yardName: values.yardName,
+        displayUnit: values.displayUnit as YardSettingsBodyInput['displayUnit'],
+        region: values.region as YardSettingsBodyInput['region'],
+        yardAddress: values.yardAddress,
+        vatNumber: values.vatNumber,
+        remaindersGoTo: values.remaindersGoTo as YardSettingsBodyInput['remaindersGoTo'],
       }),
   });
   const issue = (k: string) => save.fieldErrors[k];

@@ -1,4 +1,4 @@
-import type { CustomerChoice } from '@/lib/queries/customers';
+import type { CustomerChoice } from '@/lib/validations/customers';
 
 /** The customer chosen in a form holding the customer picker: a record's id, or a new customer's fields. */
 export function readCustomerChoice(form: FormData): CustomerChoice | Record<string, never> {

@@ -224,7 +224,7 @@ export async function seedHistory(
           used.updatedAt = doneAt;
         }
         let newOffcutId: number | null = null;
-        if (board.remainderKept) {
+        if (board.keepRemainder) {
           newOffcutId = ++next.offcut;
           const made: Offcut = {
             id: newOffcutId,
@@ -280,7 +280,7 @@ export async function seedHistory(
           trimMm: board.trim,
           pieces: boardPiecesOf(board, SETTINGS.kerfMm, labels),
           remainderMm: board.remainder,
-          keepRemainder: board.remainderKept,
+          keepRemainder: board.keepRemainder,
           status: 'done',
           doneAt,
           doneBy: userIds.saw,

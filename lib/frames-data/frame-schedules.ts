@@ -1,6 +1,7 @@
 import 'server-only';
 import { desc, eq, inArray } from 'drizzle-orm';
 import { getDb, type DbOrTx } from '@/db';
+import type { DisplayUnit } from '@/db/enums';
 import { frameSchedules, jobs } from '@/db/schema';
 import { frameSchedulePanelSchema, type FrameSchedulePanel } from '@/lib/frames';
 import { AppError, notFound } from '@/lib/errors';
@@ -13,7 +14,7 @@ export type FrameScheduleRecord = {
   name: string;
   customerName: string;
   customerEmail: string;
-  unit: 'mm' | 'imperial';
+  unit: DisplayUnit;
   panels: FrameSchedulePanel[];
   updatedAt: string;
   jobs: { id: number; reference: string; status: string }[];

@@ -1,8 +1,9 @@
 import { z } from 'zod';
+import { DISPLAY_UNITS } from '@/db/enums';
 import { findGeometryIssues } from './find-geometry-issues';
 import { frameSchedulePanelSchema } from './panel-schemas';
 
-export const frameUnitSchema = z.enum(['mm', 'imperial'], { error: 'Unit must be mm or imperial' });
+export const frameUnitSchema = z.enum(DISPLAY_UNITS, { error: 'Unit must be mm or imperial' });
 
 /** A whole frame schedule: shape checks per field, then geometry checks across fields and panels. */
 export const framePreviewBodySchema = z

@@ -17,7 +17,7 @@ export async function createJob({ body, userId }: { body: CreateJobBody; userId:
     const customer = await resolveJobCustomer(tx, {
       customerId: body.customerId,
       newCustomer: body.newCustomer,
-      name: body.customer,
+      name: body.customerName,
       email: body.customerEmail,
     });
     const [job] = await tx

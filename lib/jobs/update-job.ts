@@ -13,11 +13,11 @@ export async function updateJob({ jobId, body }: { jobId: number; body: UpdateJo
     const [job] = await tx.select().from(jobs).where(eq(jobs.id, jobId)).for('update');
     if (!job) throw notFound('That job');
     const changes: Partial<NewJob> = { updatedAt: new Date() };
-    if (body.customerId !== undefined || body.newCustomer !== undefined || body.customer !== undefined) {
+    if (body.customerId !== undefined || body.newCustomer !== undefined || body.customerName !== undefined) {
       const customer = await resolveJobCustomer(tx, {
         customerId: body.customerId,
         newCustomer: body.newCustomer,
-        name: body.customer,
+        name: body.customerName,
       });
       Object.assign(changes, {
         customerId: customer.id,

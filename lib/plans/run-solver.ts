@@ -69,6 +69,14 @@ export function runSolver(input: SolveInput): Promise<SolvePlan> {
   });
 }
 
+/**
+ * Starts the pool's threads ahead of the first plan, so the first yard hand of the day does not wait for
+ * the engine to load. Idle threads do not keep the process alive.
+ */
+export function warmSolverThreads(): void {
+  while (pool.threads.length < POOL_SIZE) startThread();
+}
+
 /** How many solver threads this process has started, and how many are alive now. */
 export function solverPoolStats(): { started: number; alive: number } {
   return { started: pool.started, alive: pool.threads.length };

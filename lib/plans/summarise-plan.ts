@@ -109,7 +109,7 @@ export function planBoardRows(
         trimMm: board.trim,
         pieces: boardPieces(board, input, labels),
         remainderMm: board.remainder,
-        keepRemainder: board.remainderKept,
+        keepRemainder: board.keepRemainder,
         fullLength: board.fullLength ?? false,
       });
     }

@@ -1,23 +1,29 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { Customer } from '@/db/schema';
+import type { createCustomer } from '@/lib/customers/create-customer';
+import type { importCustomers } from '@/lib/customers/import-customers';
+import type { listCustomers } from '@/lib/customers/list-customers';
+import type { CreateCustomerBodyInput } from '@/lib/validations/customers';
 import { fetchJson } from './fetch-json';
 import { customerKeys } from './query-keys';
+import type { WireOf } from './wire';
 
-export type NewCustomerBody = {
-  name: string;
-  account: 'retail' | 'trade';
-  phone?: string;
-  email?: string;
-};
-
-/** Who a new job is for: an existing customer record, or a new one made together with the job. */
-export type CustomerChoice = { customerId: number } | { newCustomer: NewCustomerBody };
+export type CustomerRow = WireOf<typeof listCustomers>[number];
 
 export const customersQuery = (q: string) =>
   queryOptions({
     queryKey: customerKeys.search(q),
     queryFn: () =>
-      fetchJson<{ customers: Customer[] }>(`/api/customers?q=${encodeURIComponent(q)}`).then(
+      fetchJson<{ customers: CustomerRow[] }>(`/api/customers?q=${encodeURIComponent(q)}`).then(
         (r) => r.customers,
       ),
+  });
+
+export const createCustomerRequest = (body: CreateCustomerBodyInput) =>
+  fetchJson<WireOf<typeof createCustomer>>('/api/customers', { method: 'POST', body: JSON.stringify(body) });
+
+export const importCustomersRequest = (csvText: string) =>
+  fetchJson<WireOf<typeof importCustomers>>('/api/customers/import', {
+    method: 'POST',
+    headers: { 'content-type': 'text/csv' },
+    body: csvText,
   });

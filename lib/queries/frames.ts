@@ -1,37 +1,22 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { FrameItem, FrameSchedulePanel, FrameSchedulePanelInput } from '@/lib/frames';
-import type { CustomerChoice } from './customers';
+import type { FramePreviewBody, FramePreviewBodyInput } from '@/lib/frames';
+import type {
+  copyFrameSchedule,
+  createFrameSchedule,
+  getFrameScheduleById,
+  updateFrameSchedule,
+} from '@/lib/frames-data/frame-schedules';
+import type { previewFrameSchedule } from '@/lib/frames-data/preview-frame-schedule';
+import type { sendScheduleToJob } from '@/lib/frames-data/send-schedule-to-job';
+import type { SaveFrameScheduleBodyInput, SendScheduleToJobBodyInput } from '@/lib/validations/frames';
 import { fetchJson } from './fetch-json';
 import { frameKeys } from './query-keys';
+import type { Wire, WireOf } from './wire';
 
-export type FrameUnit = 'mm' | 'imperial';
-export type FrameScheduleDto = {
-  id: number;
-  name: string;
-  customerName: string;
-  customerEmail: string;
-  unit: FrameUnit;
-  panels: FrameSchedulePanel[];
-  updatedAt: string;
-  jobs: { id: number; reference: string; status: string }[];
-};
-export type FramePreviewDto = {
-  unit: FrameUnit;
-  panels: FrameSchedulePanel[];
-  items: FrameItem[];
-  warnings: string[];
-  notice: string;
-};
-export type SaveFrameScheduleRequest = {
-  name: string;
-  customerName: string;
-  unit: FrameUnit;
-  panels: FrameSchedulePanelInput[];
-};
-export type SendToJobRequest = { ifAlreadySent?: 'replace' | 'add' } & (
-  | { jobId: number }
-  | { newJob: CustomerChoice & { customerEmail?: string; reference?: string; dueDate?: string } }
-);
+export type FrameScheduleDto = WireOf<typeof getFrameScheduleById>;
+/** The preview answer: the panels as the server read them, and their cut list. */
+export type FramePreviewDto = Wire<Pick<FramePreviewBody, 'unit' | 'panels'>> &
+  Pick<WireOf<typeof previewFrameSchedule>, 'items' | 'warnings' | 'notice'>;
 
 export const frameScheduleQuery = (id: number) =>
   queryOptions({
@@ -39,31 +24,31 @@ export const frameScheduleQuery = (id: number) =>
     queryFn: () => fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}`).then((r) => r.schedule),
   });
 
-export const previewFramesRequest = (body: { unit: FrameUnit; panels: FrameSchedulePanelInput[] }) =>
+export const previewFramesRequest = (body: FramePreviewBodyInput) =>
   fetchJson<FramePreviewDto>('/api/frames/preview', { method: 'POST', body: JSON.stringify(body) });
 
-export const createFrameScheduleRequest = (body: Partial<SaveFrameScheduleRequest> & { name: string }) =>
-  fetchJson<{ schedule: FrameScheduleDto }>('/api/frames', {
+export const createFrameScheduleRequest = (body: SaveFrameScheduleBodyInput) =>
+  fetchJson<{ schedule: WireOf<typeof createFrameSchedule> }>('/api/frames', {
     method: 'POST',
     body: JSON.stringify(body),
   }).then((r) => r.schedule);
 
-export const saveFrameScheduleRequest = (id: number, body: SaveFrameScheduleRequest) =>
-  fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}`, {
+export const saveFrameScheduleRequest = (id: number, body: SaveFrameScheduleBodyInput) =>
+  fetchJson<{ schedule: WireOf<typeof updateFrameSchedule> }>(`/api/frames/${id}`, {
     method: 'PUT',
     body: JSON.stringify(body),
   }).then((r) => r.schedule);
 
 export const copyFrameScheduleRequest = (id: number) =>
-  fetchJson<{ schedule: FrameScheduleDto }>(`/api/frames/${id}/copy`, { method: 'POST' }).then(
-    (r) => r.schedule,
-  );
+  fetchJson<{ schedule: WireOf<typeof copyFrameSchedule> }>(`/api/frames/${id}/copy`, {
+    method: 'POST',
+  }).then((r) => r.schedule);
 
 export const deleteFrameScheduleRequest = (id: number) =>
   fetchJson<null>(`/api/frames/${id}`, { method: 'DELETE' });
 
-export const sendScheduleToJobRequest = (id: number, body: SendToJobRequest) =>
-  fetchJson<{ jobId: number; lineCount: number }>(`/api/frames/${id}/send-to-job`, {
+export const sendScheduleToJobRequest = (id: number, body: SendScheduleToJobBodyInput) =>
+  fetchJson<Pick<WireOf<typeof sendScheduleToJob>, 'jobId' | 'lineCount'>>(`/api/frames/${id}/send-to-job`, {
     method: 'POST',
     body: JSON.stringify(body),
   });

@@ -1,10 +1,19 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { JobListShow, JobStatus, PlanStatus } from '@/db/enums';
-import type { PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
-import type { PaymentState } from '@/lib/quotes/payment-state';
-import type { NewCustomerBody } from './customers';
+import type { JobListShow, JobStatus } from '@/db/enums';
+import type { createJob } from '@/lib/jobs/create-job';
+import type { getJobById } from '@/lib/jobs/get-job';
+import type { addJobItem, deleteJobItem, updateJobItem } from '@/lib/jobs/job-items';
+import type { listJobs } from '@/lib/jobs/list-jobs';
+import type { updateJob } from '@/lib/jobs/update-job';
+import type {
+  CreateJobBodyInput,
+  JobItemBodyInput,
+  UpdateJobBodyInput,
+  UpdateJobItemBodyInput,
+} from '@/lib/validations/jobs';
 import { fetchJson } from './fetch-json';
 import { jobKeys } from './query-keys';
+import type { WireOf } from './wire';
 
 export type JobFilters = {
   q?: string;
@@ -14,52 +23,11 @@ export type JobFilters = {
   dueTo?: string;
 };
 
-export type JobListRow = {
-  id: number;
-  reference: string;
-  customerName: string;
-  customerEmail: string;
-  dueDate: string | null;
-  status: JobStatus;
-  itemCount: number;
-  pieceCount: number;
-  /** The latest quote and where its acceptance and payment stand (null before the first plan). */
-  quoteNumber: string | null;
-  paymentState: PaymentState | null;
-};
-
-export type JobRecord = Omit<JobListRow, 'itemCount' | 'pieceCount' | 'quoteNumber' | 'paymentState'> & {
-  customerId: number | null;
-  notes: string;
-  createdAt: string;
-  updatedAt: string;
-};
-
-export type JobItemRow = {
-  id: number;
-  sectionId: number;
-  sectionName: string;
-  sectionCode: string;
-  lengthMm: number;
-  quantity: number;
-  label: string;
-  note: string;
-  /** Millimetres the piece may be cut short; 0: exact. */
-  toleranceMm: number;
-  position: number;
-};
-
-export type JobPlanRow = {
-  id: number;
-  status: PlanStatus;
-  settings: PlanSettings;
-  totals: PlanTotals;
-  pricePence: number;
-  createdAt: string;
-  releasedAt: string | null;
-};
-
-export type JobDetail = { job: JobRecord; items: JobItemRow[]; plans: JobPlanRow[] };
+export type JobListRow = WireOf<typeof listJobs>[number];
+export type JobDetail = WireOf<typeof getJobById>;
+export type JobRecord = JobDetail['job'];
+export type JobItemRow = JobDetail['items'][number];
+export type JobPlanRow = JobDetail['plans'][number];
 
 export const jobsQuery = (filters: JobFilters) =>
   queryOptions({
@@ -76,40 +44,29 @@ export const jobQuery = (jobId: number) =>
     queryFn: () => fetchJson<JobDetail>(`/api/jobs/${jobId}`),
   });
 
-export type JobDetailsBody = Partial<{ customerId: number; newCustomer: NewCustomerBody }> & {
-  customer?: string;
-  reference?: string;
-  dueDate?: string | null;
-  customerEmail?: string;
-  notes?: string;
-  status?: 'cancelled' | 'draft';
-};
+export const createJobRequest = (body: CreateJobBodyInput) =>
+  fetchJson<{ job: WireOf<typeof createJob> }>('/api/jobs', { method: 'POST', body: JSON.stringify(body) });
 
-export const createJobRequest = (body: JobDetailsBody) =>
-  fetchJson<{ job: JobRecord }>('/api/jobs', { method: 'POST', body: JSON.stringify(body) });
+export const updateJobRequest = (jobId: number, body: UpdateJobBodyInput) =>
+  fetchJson<{ job: WireOf<typeof updateJob> }>(`/api/jobs/${jobId}`, {
+    method: 'PATCH',
+    body: JSON.stringify(body),
+  });
 
-export const updateJobRequest = (jobId: number, body: JobDetailsBody) =>
-  fetchJson<{ job: JobRecord }>(`/api/jobs/${jobId}`, { method: 'PATCH', body: JSON.stringify(body) });
+export const addItemRequest = (jobId: number, body: JobItemBodyInput) =>
+  fetchJson<{ item: WireOf<typeof addJobItem> }>(`/api/jobs/${jobId}/items`, {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });
 
-export type ItemBody = {
-  sectionId?: number;
-  length?: number | string;
-  quantity?: number;
-  label?: string;
-  note?: string;
-  /** Nominal without a figure: the section's tolerance, else the yard's. */
-  nominal?: boolean;
-  toleranceMm?: number | null;
-};
-
-export const addItemRequest = (jobId: number, body: ItemBody) =>
-  fetchJson(`/api/jobs/${jobId}/items`, { method: 'POST', body: JSON.stringify(body) });
-
-export const updateItemRequest = (jobId: number, itemId: number, body: ItemBody) =>
-  fetchJson(`/api/jobs/${jobId}/items/${itemId}`, { method: 'PATCH', body: JSON.stringify(body) });
+export const updateItemRequest = (jobId: number, itemId: number, body: UpdateJobItemBodyInput) =>
+  fetchJson<{ item: WireOf<typeof updateJobItem> }>(`/api/jobs/${jobId}/items/${itemId}`, {
+    method: 'PATCH',
+    body: JSON.stringify(body),
+  });
 
 export const deleteItemRequest = (jobId: number, itemId: number) =>
-  fetchJson(`/api/jobs/${jobId}/items/${itemId}`, { method: 'DELETE' });
+  fetchJson<WireOf<typeof deleteJobItem>>(`/api/jobs/${jobId}/items/${itemId}`, { method: 'DELETE' });
 
 export const importItemsRequest = (jobId: number, csvText: string, replace: boolean) =>
   fetchJson<{ imported: number }>(`/api/jobs/${jobId}/items/import${replace ? '?replace=1' : ''}`, {

@@ -1,28 +1,19 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
-import type { OffcutStatus } from '@/db/enums';
+import type { importOffcuts } from '@/lib/offcuts/import-offcuts';
+import type { listOffcuts } from '@/lib/offcuts/list-offcuts';
 import type { moveOffcuts } from '@/lib/offcuts/move-offcuts';
+import type { scrapOffcuts } from '@/lib/offcuts/scrap-offcuts';
+import type {
+  ImportOffcutsBodyInput,
+  MoveOffcutsBodyInput,
+  ScrapOffcutsBodyInput,
+} from '@/lib/validations/offcuts';
 import { fetchJson } from './fetch-json';
 import { offcutKeys } from './query-keys';
+import type { WireOf } from './wire';
 
-export type OffcutRow = {
-  id: number;
-  tag: string;
-  sectionId: number;
-  sectionName: string;
-  lengthMm: number;
-  location: string;
-  status: OffcutStatus;
-  origin: string;
-  scrapReason: string | null;
-  createdAt: string;
-};
-export type OffcutPage = {
-  offcuts: OffcutRow[];
-  total: number;
-  page: number;
-  pageSize: number;
-  locations: string[];
-};
+export type OffcutPage = WireOf<typeof listOffcuts>;
+export type OffcutRow = OffcutPage['offcuts'][number];
 /** Filters as they sit in the URL: every value a string, empty meaning "any". */
 export type RackFilters = Record<
   | 'q'
@@ -52,19 +43,19 @@ export const offcutsQuery = (filters: Partial<RackFilters>) =>
 
 /** Moves one offcut or many to a rack location: the rack's bulk move, its row move and the saw's labels. */
 export const moveOffcutsRequest = (ids: number[], location: string) =>
-  fetchJson<Awaited<ReturnType<typeof moveOffcuts>>>('/api/offcuts/move', {
+  fetchJson<WireOf<typeof moveOffcuts>>('/api/offcuts/move', {
     method: 'POST',
-    body: JSON.stringify({ ids, location }),
+    body: JSON.stringify({ ids, location } satisfies MoveOffcutsBodyInput),
   });
 
 export const scrapOffcutsRequest = (ids: number[], reason: string) =>
-  fetchJson<{ scrapped: number }>('/api/offcuts/scrap', {
+  fetchJson<WireOf<typeof scrapOffcuts>>('/api/offcuts/scrap', {
     method: 'POST',
-    body: JSON.stringify({ ids, reason }),
+    body: JSON.stringify({ ids, reason } satisfies ScrapOffcutsBodyInput),
   });
 
 export const importOffcutsRequest = (csv: string) =>
-  fetchJson<{ imported: number; tags: string[] }>('/api/offcuts/import', {
+  fetchJson<WireOf<typeof importOffcuts>>('/api/offcuts/import', {
     method: 'POST',
-    body: JSON.stringify({ csv }),
+    body: JSON.stringify({ csv } satisfies ImportOffcutsBodyInput),
   });

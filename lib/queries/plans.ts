@@ -1,44 +1,39 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { BoardStatus, PlanStatus } from '@/db/enums';
-import type { CuttingPlanPrice } from '@/lib/pricing/pricing-types';
-import type { BoardPiece, PlanSection, PlanSettings, PlanTotals } from '@/lib/plans/plan-shapes';
-import type { QuoteView } from '@/lib/quotes/get-plan-quote';
-import type { PaymentState } from '@/lib/quotes/payment-state';
-import type { ReleasePlanBody } from '@/lib/validations/quotes';
+import type { emailCutSheet } from '@/lib/cut-sheets/email-cut-sheet';
+import type { PlanView } from '@/lib/plans/get-plan';
+import type { getPlanWithQuote } from '@/lib/plans/get-plan-with-quote';
+import type { PlanRunView as ServerPlanRunView } from '@/lib/plans/queue/plan-runs';
+import type { releasePlan } from '@/lib/plans/release-plan';
+import type { unreleasePlan } from '@/lib/plans/unrelease-plan';
+import type { createQuoteLink, revokeQuoteLinks } from '@/lib/quotes/quote-links';
+import type { checkPlanStock } from '@/lib/stock/check-plan-stock';
+import type { EmailCutSheetBodyInput } from '@/lib/validations/mail';
+import type { CreatePlanBodyInput } from '@/lib/validations/plans';
+import type { ReleasePlanBodyInput } from '@/lib/validations/quotes';
 import { fetchJson } from './fetch-json';
 import { planKeys } from './query-keys';
+import type { Wire, WireOf } from './wire';
 
-export type PlanBoardView = {
-  id: number;
-  boardNo: number;
-  sectionId: number;
-  source: 'stock' | 'offcut';
-  stockLengthId: number | null;
-  offcutId: number | null;
-  lengthMm: number;
-  trimMm: number;
-  pieces: BoardPiece[];
-  remainderMm: number;
-  keepRemainder: boolean;
-  /** One piece sold at the whole stock length: no trim, no cut (absent on older plans). */
-  fullLength?: boolean;
-  status: BoardStatus;
-};
-
-export type PlanViewData = {
-  id: number;
-  jobId: number;
-  status: PlanStatus;
-  settings: PlanSettings;
-  sections: PlanSection[];
-  totals: PlanTotals;
-  price: CuttingPlanPrice | null;
-  pricePence: number;
-  createdAt: string;
-  releasedAt: string | null;
-  boards: PlanBoardView[];
-  quote: QuoteView & { paidPence: number; paymentState: PaymentState };
-};
+export type PlanViewData = WireOf<typeof getPlanWithQuote>;
+type PlanBoardRow = PlanViewData['boards'][number];
+/** A board as the diagrams draw it: the same from a server page's plan and from the API. */
+export type PlanBoardView = Pick<
+  PlanBoardRow,
+  | 'id'
+  | 'boardNo'
+  | 'sectionId'
+  | 'source'
+  | 'stockLengthId'
+  | 'offcutId'
+  | 'lengthMm'
+  | 'trimMm'
+  | 'pieces'
+  | 'remainderMm'
+  | 'keepRemainder'
+  | 'status'
+> &
+  Partial<Pick<PlanBoardRow, 'fullLength'>>;
+export type PlanRunView = Wire<ServerPlanRunView>;
 
 export const planQuery = (planId: number) =>
   queryOptions({
@@ -46,17 +41,12 @@ export const planQuery = (planId: number) =>
     queryFn: () => fetchJson<PlanViewData>(`/api/plans/${planId}`),
   });
 
-export type PlanOverrides = Partial<PlanSettings>;
-
-export type PlanRunView = {
-  runId: number;
-  jobId: number;
-  status: 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
-  sectionsTotal: number;
-  sectionsDone: number;
-  planId: number | null;
-  error: string | null;
-};
+/** Stock lengths the plan needs more of than the yard holds. */
+export const planStockCheckQuery = (planId: number) =>
+  queryOptions({
+    queryKey: planKeys.stockCheck(planId),
+    queryFn: () => fetchJson<WireOf<typeof checkPlanStock>>(`/api/plans/${planId}/stock-check`),
+  });
 
 export const cancelPlanRunRequest = (runId: number) =>
   fetchJson<PlanRunView>(`/api/plan-runs/${runId}`, { method: 'DELETE' });
@@ -69,10 +59,10 @@ const RUN_POLL_MS = 1_000;
  */
 export async function createPlanRequest(
   jobId: number,
-  overrides: PlanOverrides = {},
+  overrides: CreatePlanBodyInput = {},
   onProgress?: (run: PlanRunView) => void,
-): Promise<PlanViewData> {
-  const answer = await fetchJson<PlanViewData | { runId: number }>(`/api/jobs/${jobId}/plans`, {
+): Promise<Wire<PlanView>> {
+  const answer = await fetchJson<Wire<PlanView> | { runId: number }>(`/api/jobs/${jobId}/plans`, {
     method: 'POST',
     body: JSON.stringify(overrides),
   });
@@ -95,20 +85,23 @@ export function describePlanRun(run: PlanRunView): string {
   return run.status === 'done' ? 'Done, opening the plan…' : 'Stopped.';
 }
 
-export const releasePlanRequest = (planId: number, { override, confirmShortfall }: ReleasePlanBody = {}) =>
-  fetchJson<{ planId: number }>(`/api/plans/${planId}/release`, {
+export const releasePlanRequest = (
+  planId: number,
+  { override, confirmShortfall }: ReleasePlanBodyInput = {},
+) =>
+  fetchJson<WireOf<typeof releasePlan>>(`/api/plans/${planId}/release`, {
     method: 'POST',
     body: JSON.stringify({ override, confirmShortfall }),
   });
 export const createQuoteLinkRequest = (planId: number) =>
-  fetchJson<{ url: string; expiresAt: string }>(`/api/plans/${planId}/quote-link`, { method: 'POST' });
+  fetchJson<WireOf<typeof createQuoteLink>>(`/api/plans/${planId}/quote-link`, { method: 'POST' });
 export const revokeQuoteLinksRequest = (planId: number) =>
-  fetchJson<{ revoked: number }>(`/api/plans/${planId}/quote-link`, { method: 'DELETE' });
+  fetchJson<WireOf<typeof revokeQuoteLinks>>(`/api/plans/${planId}/quote-link`, { method: 'DELETE' });
 export const unreleasePlanRequest = (planId: number) =>
-  fetchJson<{ planId: number }>(`/api/plans/${planId}/unrelease`, { method: 'POST' });
+  fetchJson<WireOf<typeof unreleasePlan>>(`/api/plans/${planId}/unrelease`, { method: 'POST' });
 
-export const emailPlanRequest = (planId: number, body: { to?: string; message?: string }) =>
-  fetchJson<{ sent: boolean; to: string; quoteUrl: string }>(`/api/plans/${planId}/email`, {
+export const emailPlanRequest = (planId: number, body: EmailCutSheetBodyInput) =>
+  fetchJson<WireOf<typeof emailCutSheet>>(`/api/plans/${planId}/email`, {
     method: 'POST',
     body: JSON.stringify(body),
   });

@@ -1,13 +1,20 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { SawPlan } from '@/lib/saw/get-saw-plan';
-import type { SawQueueEntry } from '@/lib/saw/get-saw-queue';
-import type { OffcutBrief } from '@/lib/saw/find-offcut';
-import type { ReportDefectBody } from '@/lib/validations/saw';
+import type { PlanViewData } from './plans';
+import type { confirmBoard } from '@/lib/saw/confirm-board';
+import type { findOffcutByTag } from '@/lib/saw/find-offcut';
+import type { getSawPlan } from '@/lib/saw/get-saw-plan';
+import type { getSawQueue } from '@/lib/saw/get-saw-queue';
+import type { reportDefect } from '@/lib/saw/report-defect';
+import type { undoLastBoard } from '@/lib/saw/undo-last-board';
+import type { ConfirmBoardBodyInput, ReportDefectBodyInput } from '@/lib/validations/saw';
 import { fetchJson } from './fetch-json';
 import { planKeys, sawKeys } from './query-keys';
+import type { WireOf } from './wire';
 
-export type { SawPlan, SawQueueEntry, OffcutBrief };
+export type SawPlan = WireOf<typeof getSawPlan>;
 export type SawBoard = SawPlan['boards'][number];
+export type SawQueueEntry = WireOf<typeof getSawQueue>[number];
+export type OffcutBrief = WireOf<typeof findOffcutByTag>;
 
 export const sawQueueQuery = () =>
   queryOptions({
@@ -28,7 +35,7 @@ export const planProgressQuery = (planId: number) =>
   queryOptions({
     queryKey: planKeys.progress(planId),
     queryFn: () =>
-      fetchJson<{ status: string; boards: { status: string }[] }>(`/api/plans/${planId}`).then((p) => ({
+      fetchJson<PlanViewData>(`/api/plans/${planId}`).then((p) => ({
         status: p.status,
         boards: p.boards.length,
         boardsDone: p.boards.filter((b) => b.status !== 'pending').length,
@@ -36,33 +43,20 @@ export const planProgressQuery = (planId: number) =>
     refetchInterval: 5_000,
   });
 
-export type BoardDoneAnswer = {
-  boardNo: number;
-  alreadyDone: boolean;
-  newOffcut: { id: number; tag: string } | null;
-  boards: number;
-  boardsDone: number;
-  planStatus: string;
-  jobStatus: string;
-};
+export type BoardDoneAnswer = WireOf<typeof confirmBoard>;
 
 export const confirmBoardRequest = (planId: number, boardNo: number, boardThere?: true) =>
   fetchJson<BoardDoneAnswer>(`/api/plans/${planId}/boards/${boardNo}/done`, {
     method: 'POST',
-    body: JSON.stringify(boardThere ? { boardThere } : {}),
+    body: JSON.stringify((boardThere ? { boardThere } : {}) satisfies ConfirmBoardBodyInput),
   });
 
 export const undoBoardRequest = (planId: number) =>
-  fetchJson<{ boardNo: number }>(`/api/plans/${planId}/undo-board`, { method: 'POST' });
+  fetchJson<WireOf<typeof undoLastBoard>>(`/api/plans/${planId}/undo-board`, { method: 'POST' });
 
-export type DefectAnswer = {
-  boardNo: number;
-  alreadyReported: boolean;
-  newOffcut: { id: number; tag: string } | null;
-  replan: { boardNos: number[]; unplaced: { label: string; length: number }[] } | null;
-};
+export type DefectAnswer = WireOf<typeof reportDefect>;
 
-export const reportDefectRequest = (planId: number, boardNo: number, body: ReportDefectBody) =>
+export const reportDefectRequest = (planId: number, boardNo: number, body: ReportDefectBodyInput) =>
   fetchJson<DefectAnswer>(`/api/plans/${planId}/boards/${boardNo}/defect`, {
     method: 'POST',
     body: JSON.stringify(body),

@@ -1,15 +1,11 @@
 import { queryOptions } from '@tanstack/react-query';
 import { fetchJson } from './fetch-json';
 import { sectionKeys } from './query-keys';
-import type { SectionRow } from './stock';
+import type { SectionRow, StockLengthRow } from './stock';
 
-export type SectionOption = {
-  id: number;
-  code: string;
-  name: string;
-  /** Tolerance a line marked nominal gets: the section's own, else the yard's. */
-  nominalDefaultMm: number;
-  stockLengths: { id: number; lengthMm: number; pricePence: number; onHand: number | null }[];
+/** A section a cut list may use; `nominalDefaultMm` is what a line marked nominal gets. */
+export type SectionOption = Pick<SectionRow, 'id' | 'code' | 'name' | 'nominalDefaultMm'> & {
+  stockLengths: Pick<StockLengthRow, 'id' | 'lengthMm' | 'pricePence' | 'onHand'>[];
 };
 
 /** The sections catalogue (every section and stock length, active or not): the one fetch of it. */

@@ -1,57 +1,17 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { MoistureState } from '@/db/enums';
+import type { listSections } from '@/lib/stock/list-sections';
+import type { listStockMovements } from '@/lib/stock/list-stock-movements';
+import type { receiveStock } from '@/lib/stock/receive-stock';
+import type { createSection, updateSection } from '@/lib/stock/save-section';
+import type { takeStock } from '@/lib/stock/take-stock';
+import type { ReceiptBodyInput, SectionBodyInput, StocktakeBodyInput } from '@/lib/validations/stock';
 import { fetchJson } from './fetch-json';
 import { stockKeys } from './query-keys';
+import type { WireOf } from './wire';
 
-export type StockLengthRow = {
-  id: number;
-  lengthMm: number;
-  pricePence: number;
-  /** Owner only; null when not entered or not shown. */
-  costPence: number | null;
-  onHand: number | null;
-  active: boolean;
-};
-export type SectionRow = {
-  id: number;
-  code: string;
-  name: string;
-  thicknessMm: number;
-  widthMm: number;
-  species: string;
-  grade: string;
-  treatment: string;
-  finish: 'sawn' | 'planed';
-  finishedThicknessMm: number | null;
-  finishedWidthMm: number | null;
-  moisture: MoistureState;
-  minKeepMm: number | null;
-  /** How short a nominal piece may be; null: the yard's setting. */
-  nominalToleranceMm: number | null;
-  nominalDefaultMm: number;
-  active: boolean;
-  lengths: StockLengthRow[];
-};
-export type MovementRow = {
-  id: number;
-  at: string;
-  kind: string;
-  sectionName: string;
-  lengthMm: number;
-  quantityDelta: number;
-  reason: string;
-  userName: string | null;
-};
-export type SectionInput = Omit<SectionRow, 'id' | 'lengths' | 'nominalDefaultMm'> & {
-  lengths: {
-    id?: number;
-    lengthMm: number;
-    pricePence: number;
-    costPence: number | null;
-    unlimited: boolean;
-    active: boolean;
-  }[];
-};
+export type SectionRow = WireOf<typeof listSections>[number];
+export type StockLengthRow = SectionRow['lengths'][number];
+export type MovementRow = WireOf<typeof listStockMovements>[number];
 
 export const stockMovementsQuery = () =>
   queryOptions({
@@ -59,18 +19,20 @@ export const stockMovementsQuery = () =>
     queryFn: () => fetchJson<{ movements: MovementRow[] }>('/api/stock/movements').then((r) => r.movements),
   });
 
-export const receiveStockRequest = (body: {
-  reference: string;
-  lines: { stockLengthId: number; quantity: number }[];
-}) => fetchJson('/api/stock/receipts', { method: 'POST', body: JSON.stringify(body) });
-
-export const stocktakeRequest = (body: {
-  reason: string;
-  counts: { stockLengthId: number; counted: number }[];
-}) => fetchJson('/api/stock/stocktakes', { method: 'POST', body: JSON.stringify(body) });
-
-export const saveSectionRequest = (sectionId: number | null, body: SectionInput) =>
-  fetchJson(sectionId ? `/api/sections/${sectionId}` : '/api/sections', {
-    method: sectionId ? 'PATCH' : 'POST',
+export const receiveStockRequest = (body: ReceiptBodyInput) =>
+  fetchJson<{ movements: WireOf<typeof receiveStock> }>('/api/stock/receipts', {
+    method: 'POST',
     body: JSON.stringify(body),
   });
+
+export const stocktakeRequest = (body: StocktakeBodyInput) =>
+  fetchJson<{ movements: WireOf<typeof takeStock> }>('/api/stock/stocktakes', {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });
+
+export const saveSectionRequest = (sectionId: number | null, body: SectionBodyInput) =>
+  fetchJson<{ section: WireOf<typeof createSection> | WireOf<typeof updateSection> }>(
+    sectionId ? `/api/sections/${sectionId}` : '/api/sections',
+    { method: sectionId ? 'PATCH' : 'POST', body: JSON.stringify(body) },
+  );

@@ -1,16 +1,15 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { Role } from '@/db/enums';
+import type { createUser, listUsers, updateUser } from '@/lib/users/manage-users';
+import type {
+  ChangeOwnPasswordBodyInput,
+  CreateUserBodyInput,
+  UpdateUserBodyInput,
+} from '@/lib/validations/users';
 import { fetchJson } from './fetch-json';
 import { userKeys } from './query-keys';
+import type { WireOf } from './wire';
 
-export type UserRow = {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  disabled: boolean;
-  canUseSaw: boolean;
-};
+export type UserRow = WireOf<typeof listUsers>[number];
 
 export const usersQuery = () =>
   queryOptions({
@@ -18,19 +17,22 @@ export const usersQuery = () =>
     queryFn: () => fetchJson<{ users: UserRow[] }>('/api/users').then((r) => r.users),
   });
 
-export function updateUserRequest(userId: number, changes: Partial<UserRow> & { password?: string }) {
-  return fetchJson<{ user: UserRow }>(`/api/users/${userId}`, {
+export function updateUserRequest(userId: number, changes: UpdateUserBodyInput) {
+  return fetchJson<{ user: WireOf<typeof updateUser> }>(`/api/users/${userId}`, {
     method: 'PATCH',
     body: JSON.stringify(changes),
   });
 }
 
-export function createUserRequest(body: { email: string; name: string; role: Role; password: string }) {
-  return fetchJson<{ user: UserRow }>('/api/users', { method: 'POST', body: JSON.stringify(body) });
+export function createUserRequest(body: CreateUserBodyInput) {
+  return fetchJson<{ user: WireOf<typeof createUser> }>('/api/users', {
+    method: 'POST',
+    body: JSON.stringify(body),
+  });
 }
 
-export function changeOwnPasswordRequest(body: { currentPassword: string; newPassword: string }) {
-  return fetchJson<{ changed: true }>('/api/account/password', {
+export function changeOwnPasswordRequest(body: ChangeOwnPasswordBodyInput) {
+  return fetchJson<{ changed: true; signInAgain: true }>('/api/account/password', {
     method: 'POST',
     body: JSON.stringify(body),
   });

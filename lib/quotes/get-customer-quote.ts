@@ -19,6 +19,7 @@ export async function getCustomerQuote({ token }: { token: string }) {
         lengthMm: jobItems.lengthMm,
         quantity: jobItems.quantity,
         label: jobItems.label,
+        toleranceMm: jobItems.toleranceMm,
       })
       .from(jobItems)
       .innerJoin(sections, eq(sections.id, jobItems.sectionId))

@@ -12,7 +12,7 @@ export async function getPaymentsOverview(now = new Date()) {
   const paidSum = sql<number>`sum(${payments.amountPence})::int`;
   const [ledger, live, refundsDue] = await Promise.all([
     db
-      .select({ payment: payments, reference: jobs.reference, customer: jobs.customerName })
+      .select({ payment: payments, reference: jobs.reference, customerName: jobs.customerName })
       .from(payments)
       .innerJoin(jobs, eq(jobs.id, payments.jobId))
       .orderBy(desc(payments.at))
@@ -21,7 +21,7 @@ export async function getPaymentsOverview(now = new Date()) {
       .select({
         quote: quotes,
         reference: jobs.reference,
-        customer: jobs.customerName,
+        customerName: jobs.customerName,
         jobStatus: jobs.status,
       })
       .from(quotes)
@@ -29,7 +29,12 @@ export async function getPaymentsOverview(now = new Date()) {
       .innerJoin(jobs, eq(jobs.id, quotes.jobId))
       .where(inArray(plans.status, ['planned', 'released', 'done'])),
     db
-      .select({ jobId: jobs.id, reference: jobs.reference, customer: jobs.customerName, paidPence: paidSum })
+      .select({
+        jobId: jobs.id,
+        reference: jobs.reference,
+        customerName: jobs.customerName,
+        paidPence: paidSum,
+      })
       .from(payments)
       .innerJoin(jobs, eq(jobs.id, payments.jobId))
       .where(and(eq(jobs.status, 'cancelled'), eq(payments.status, 'succeeded')))
@@ -43,13 +48,13 @@ export async function getPaymentsOverview(now = new Date()) {
     : [];
   const rows = live
     .filter((q) => q.jobStatus !== 'cancelled')
-    .map(({ quote, reference, customer }) => {
+    .map(({ quote, reference, customerName }) => {
       const paid = paidPence(allPayments.filter((p) => p.jobId === quote.jobId));
       return {
         quoteId: quote.id,
         number: quote.number,
         reference,
-        customer,
+        customerName,
         account: quote.account,
         grossPence: quote.grossPence,
         paidPence: paid,
@@ -59,11 +64,11 @@ export async function getPaymentsOverview(now = new Date()) {
       };
     });
   return {
-    payments: ledger.map(({ payment, reference, customer }) => ({
+    payments: ledger.map(({ payment, reference, customerName }) => ({
       ...payment,
       at: payment.at.toISOString(),
       reference,
-      customer,
+      customerName,
     })),
     outstanding: rows.filter((r) => r.state !== 'not_accepted' && r.balancePence > 0),
     awaitingAcceptance: rows.filter((r) => r.state === 'not_accepted' && new Date(r.validUntil) > now),

@@ -1,5 +1,5 @@
 import { IMPERIAL_DENOMINATOR } from './length-constants';
-import type { LengthUnit } from './length-result';
+import type { DisplayUnit } from '@/db/enums';
 
 const SIXTEENTHS_PER_FOOT = 12 * IMPERIAL_DENOMINATOR;
 
@@ -46,6 +46,11 @@ export function formatFeetInches(mm: number): string {
   return feet === 0 ? `${sign}${inches}` : `${sign}${feet}′-${inches}`;
 }
 
-export function formatLength(mm: number, unit: LengthUnit): string {
-  return unit === 'imperial' ? formatFeetInches(mm) : formatMillimetres(mm);
+/**
+ * The one length formatter: millimetres or feet and inches, as the display unit says. `withUnit` adds
+ * " mm" to metric (feet and inches carry their marks), for text where a bare number could be misread.
+ */
+export function formatLength(mm: number, unit: DisplayUnit, { withUnit = false } = {}): string {
+  if (unit === 'imperial') return formatFeetInches(mm);
+  return withUnit ? `${formatMillimetres(mm)} mm` : formatMillimetres(mm);
 }

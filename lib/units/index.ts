@@ -2,5 +2,6 @@
 export { parseLength } from './parse-length';
 export { formatLength, formatMillimetres, formatFeetInches, millimetresToSixteenths } from './format-length';
 export { lengthInputSchema } from './length-input-schema';
-export type { ParseLengthResult, LengthUnit } from './length-result';
+export type { ParseLengthResult } from './length-result';
+export type { DisplayUnit } from '@/db/enums';
 export { shortPieceMessage } from './short-piece';

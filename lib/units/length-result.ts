@@ -1,7 +1,5 @@
 export type ParseLengthResult = { ok: true; mm: number } | { ok: false; message: string };
 
-export type LengthUnit = 'mm' | 'imperial';
-
 export function lengthError(message: string): ParseLengthResult {
   return { ok: false, message };
 }

@@ -30,6 +30,10 @@ const tradeTermsMessage = {
 /** POST /api/customers, and a customer made inline with a new job */
 export const createCustomerBodySchema = customerFields.refine(tradeTermsOnlyForTrade, tradeTermsMessage);
 export type CreateCustomerBody = z.infer<typeof createCustomerBodySchema>;
+export type CreateCustomerBodyInput = z.input<typeof createCustomerBodySchema>;
+
+/** Who a new job is for: an existing customer record, or a new one made together with the job. */
+export type CustomerChoice = { customerId: number } | { newCustomer: CreateCustomerBodyInput };
 
 /** PATCH /api/customers/[customerId] */
 export const updateCustomerBodySchema = customerFields
@@ -37,6 +41,7 @@ export const updateCustomerBodySchema = customerFields
   .strict()
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
 export type UpdateCustomerBody = z.infer<typeof updateCustomerBodySchema>;
+export type UpdateCustomerBodyInput = z.input<typeof updateCustomerBodySchema>;
 
 /** GET /api/customers?q= */
 export const listCustomersQuerySchema = z.object({ q: z.string().trim().max(100).optional() });

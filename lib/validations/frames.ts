@@ -29,6 +29,7 @@ export const saveFrameScheduleBodySchema = z
       ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
   });
 export type SaveFrameScheduleBody = z.output<typeof saveFrameScheduleBodySchema>;
+export type SaveFrameScheduleBodyInput = z.input<typeof saveFrameScheduleBodySchema>;
 
 const dueDateSchema = z.iso.date({ error: 'Due date must be a date like 2026-12-01' });
 
@@ -72,3 +73,4 @@ export const sendScheduleToJobBodySchema = z
     path: ['jobId'],
   });
 export type SendScheduleToJobBody = z.output<typeof sendScheduleToJobBodySchema>;
+export type SendScheduleToJobBodyInput = z.input<typeof sendScheduleToJobBodySchema>;

@@ -29,7 +29,7 @@ export const createJobBodySchema = z
   .object({
     customerId: z.number().int().positive().optional(),
     newCustomer: createCustomerBodySchema.optional(),
-    customer: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
+    customerName: z.string().trim().min(1, 'Enter the customer.').max(120).optional(),
     deliveryChargePence: deliveryChargePence.optional(),
     reference: z
       .string()
@@ -41,16 +41,17 @@ export const createJobBodySchema = z
     customerEmail: email.optional(),
     notes: z.string().max(2000).optional(),
   })
-  .refine((v) => [v.customerId, v.newCustomer, v.customer].filter((x) => x !== undefined).length === 1, {
+  .refine((v) => [v.customerId, v.newCustomer, v.customerName].filter((x) => x !== undefined).length === 1, {
     message: 'Choose a customer or enter a new one.',
     path: ['customerId'],
   });
 export type CreateJobBody = z.infer<typeof createJobBodySchema>;
+export type CreateJobBodyInput = z.input<typeof createJobBodySchema>;
 
 /** PATCH /api/jobs/[jobId]: edit details, cancel (status "cancelled") or reopen a cancelled job (status "draft"). */
 export const updateJobBodySchema = z
   .object({
-    customer: z.string().trim().min(1, 'Enter the customer.').max(120),
+    customerName: z.string().trim().min(1, 'Enter the customer.').max(120),
     reference: z.string().trim().min(1, 'Enter a reference.').max(40),
     dueDate: dueDate.nullable(),
     customerEmail: email,
@@ -64,6 +65,7 @@ export const updateJobBodySchema = z
   .strict()
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
 export type UpdateJobBody = z.infer<typeof updateJobBodySchema>;
+export type UpdateJobBodyInput = z.input<typeof updateJobBodySchema>;
 
 /** GET /api/jobs query: search text (reference or customer), status, due date range. */
 export const listJobsQuerySchema = z.object({
@@ -125,19 +127,18 @@ const keepTypedLength = (body: unknown) =>
 
 /** One line item from the editable table; length in mm or any notation lib/units reads. */
 export const jobItemBodySchema = z.preprocess(keepTypedLength, jobItemFields);
-export type JobItemBody = z.input<typeof jobItemFields>;
+export type JobItemBodyInput = z.input<typeof jobItemFields>;
 export type JobItemFields = z.output<typeof jobItemFields>;
 
 /** A partial change: fields left out keep their values (no defaults here, or they would wipe them). */
-export const updateJobItemBodySchema = z.preprocess(
-  keepTypedLength,
-  z
-    .object(itemFields)
-    .partial()
-    .strict()
-    .refine((v) => Object.keys(v).length > 0, 'Nothing to change.')
-    .refine(toleranceShorterThanPiece, toleranceIssue),
-);
+const updateJobItemFields = z
+  .object(itemFields)
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change.')
+  .refine(toleranceShorterThanPiece, toleranceIssue);
+export const updateJobItemBodySchema = z.preprocess(keepTypedLength, updateJobItemFields);
+export type UpdateJobItemBodyInput = z.input<typeof updateJobItemFields>;
 
 /** Largest cut list the import accepts, in bytes. */
 export const MAX_IMPORT_BYTES = 5 * 1024 * 1024;

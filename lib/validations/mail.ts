@@ -9,3 +9,4 @@ export const emailCutSheetBodySchema = z
     message: z.string().max(2000).optional(),
   })
   .strict();
+export type EmailCutSheetBodyInput = z.input<typeof emailCutSheetBodySchema>;

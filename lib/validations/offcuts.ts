@@ -30,13 +30,16 @@ export const moveOffcutsBodySchema = z
     location: z.string().trim().min(1, 'Enter a rack location.').max(60, 'At most 60 characters.'),
   })
   .strict();
+export type MoveOffcutsBodyInput = z.input<typeof moveOffcutsBodySchema>;
 
 export const scrapOffcutsBodySchema = z.object({
   ids: z.array(dbIdSchema()).min(1, 'Choose at least one offcut.').max(1000),
   reason: z.string().trim().min(1, 'Say why these offcuts are scrapped.').max(200),
 });
 export type ScrapOffcutsBody = z.infer<typeof scrapOffcutsBodySchema>;
+export type ScrapOffcutsBodyInput = z.input<typeof scrapOffcutsBodySchema>;
 
 export const importOffcutsBodySchema = z.object({
   csv: z.string().min(1, 'The file is empty.').max(2_000_000, 'The file is too large (2 MB at most).'),
 });
+export type ImportOffcutsBodyInput = z.input<typeof importOffcutsBodySchema>;

@@ -16,3 +16,4 @@ export const createPlanBodySchema = z
   .partial()
   .strict();
 export type CreatePlanBody = z.infer<typeof createPlanBodySchema>;
+export type CreatePlanBodyInput = z.input<typeof createPlanBodySchema>;

@@ -14,6 +14,7 @@ export const confirmBoardBodySchema = z
   })
   .strict();
 export type ConfirmBoardBody = z.infer<typeof confirmBoardBodySchema>;
+export type ConfirmBoardBodyInput = z.input<typeof confirmBoardBodySchema>;
 
 export const reportDefectBodySchema = z
   .object({
@@ -26,6 +27,7 @@ export const reportDefectBodySchema = z
   })
   .strict();
 export type ReportDefectBody = z.infer<typeof reportDefectBodySchema>;
+export type ReportDefectBodyInput = z.input<typeof reportDefectBodySchema>;
 
 export const findOffcutQuerySchema = z.object({
   tag: z

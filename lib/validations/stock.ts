@@ -68,6 +68,7 @@ export const sectionBodySchema = z
     path: ['finishedWidthMm'],
   });
 export type SectionBody = z.infer<typeof sectionBodySchema>;
+export type SectionBodyInput = z.input<typeof sectionBodySchema>;
 
 export const receiptBodySchema = z.object({
   reference: text(80).min(1, 'Enter the delivery note or supplier reference.'),
@@ -82,6 +83,7 @@ export const receiptBodySchema = z.object({
     .max(100),
 });
 export type ReceiptBody = z.infer<typeof receiptBodySchema>;
+export type ReceiptBodyInput = z.input<typeof receiptBodySchema>;
 
 export const stocktakeBodySchema = z.object({
   reason: text(200).min(1, 'Say why the count changed (e.g. monthly count, damaged boards).'),
@@ -96,3 +98,4 @@ export const stocktakeBodySchema = z.object({
     .max(500),
 });
 export type StocktakeBody = z.infer<typeof stocktakeBodySchema>;
+export type StocktakeBodyInput = z.input<typeof stocktakeBodySchema>;

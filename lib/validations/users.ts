@@ -14,6 +14,7 @@ export const createUserBodySchema = z.object({
   password,
 });
 export type CreateUserBody = z.infer<typeof createUserBodySchema>;
+export type CreateUserBodyInput = z.input<typeof createUserBodySchema>;
 
 export const updateUserBodySchema = z
   .object({
@@ -27,6 +28,7 @@ export const updateUserBodySchema = z
   .partial()
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change.');
 export type UpdateUserBody = z.infer<typeof updateUserBodySchema>;
+export type UpdateUserBodyInput = z.input<typeof updateUserBodySchema>;
 
 export const changeOwnPasswordBodySchema = z
   .object({
@@ -38,3 +40,4 @@ export const changeOwnPasswordBodySchema = z
     path: ['newPassword'],
   });
 export type ChangeOwnPasswordBody = z.infer<typeof changeOwnPasswordBodySchema>;
+export type ChangeOwnPasswordBodyInput = z.input<typeof changeOwnPasswordBodySchema>;

@@ -32,3 +32,4 @@ export const yardSettingsBodySchema = z.object({
   depositPercent: z.number().int('A whole percent.').min(0).max(100).optional(),
 });
 export type YardSettingsBody = z.infer<typeof yardSettingsBodySchema>;
+export type YardSettingsBodyInput = z.input<typeof yardSettingsBodySchema>;

@@ -13,7 +13,7 @@ test.describe('nominal pieces and full lengths', () => {
     browser,
   }) => {
     await signIn(page, DEMO.hand);
-    const created = await page.request.post('/api/jobs', { data: { customer: 'Hollin Lane Sheds' } });
+    const created = await page.request.post('/api/jobs', { data: { customerName: 'Hollin Lane Sheds' } });
     expect(created.status()).toBe(201);
     const { job } = await created.json();
     const { sections } = await (await page.request.get('/api/sections')).json();
@@ -70,6 +70,18 @@ test.describe('nominal pieces and full lengths', () => {
     const pdf = await page.request.get(`/api/plans/${plan.id}/cut-sheet`);
     expect(pdf.status()).toBe(200);
     expect(pdf.headers()['content-type']).toBe('application/pdf');
+
+    // The customer's quote page says which pieces are nominal and which are cut exact.
+    const link = await (await page.request.post(`/api/plans/${plan.id}/quote-link`)).json();
+    const customer = await browser.newContext();
+    const quotePage = await customer.newPage();
+    await quotePage.goto(link.url);
+    const kinds = quotePage.getByTestId('customer-pieces').getByTestId('piece-length-kind');
+    await expect(kinds).toHaveCount(2);
+    await expect(kinds.nth(0)).toHaveText('exact length');
+    await expect(kinds.nth(1)).toHaveText('nominal: may be up to 5 mm short');
+    await quotePage.screenshot({ path: 'test-results/screens/nominal-customer-quote.png', fullPage: true });
+    await customer.close();
 
     await acceptAndPayDeposit(page.request, plan.id);
     expect((await page.request.post(`/api/plans/${plan.id}/release`)).status()).toBe(200);

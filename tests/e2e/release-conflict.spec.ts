@@ -4,8 +4,8 @@ import { DEMO, signIn } from './support/sign-in';
 
 type Board = { source: 'stock' | 'offcut'; offcutId: number | null; lengthMm: number; sectionId: number };
 
-async function jobWithOnePiece(request: APIRequestContext, customer: string, lengthMm: number) {
-  const { job } = await (await request.post('/api/jobs', { data: { customer } })).json();
+async function jobWithOnePiece(request: APIRequestContext, customerName: string, lengthMm: number) {
+  const { job } = await (await request.post('/api/jobs', { data: { customerName } })).json();
   const imported = await request.post(`/api/jobs/${job.id}/items/import`, {
     data: `section,length,quantity,label\nT47100,${lengthMm},1,gate rail`,
     headers: { 'content-type': 'text/csv' },

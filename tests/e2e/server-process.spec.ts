@@ -31,8 +31,8 @@ function percentile(times: number[], share: number): number {
   return Math.round(sorted[Math.min(sorted.length - 1, Math.floor(share * sorted.length))]);
 }
 
-async function newJob(request: APIRequestContext, customer: string): Promise<number> {
-  const response = await request.post('/api/jobs', { data: { customer } });
+async function newJob(request: APIRequestContext, customerName: string): Promise<number> {
+  const response = await request.post('/api/jobs', { data: { customerName } });
   expect(response.status()).toBe(201);
   return (await response.json()).job.id;
 }
@@ -145,7 +145,7 @@ test('kill -9 during writes, twice: every acknowledged write survives and on han
         const reference = `Kill ${round}-${name}-${i}`;
         try {
           if (name === 'jobs') {
-            const response = await page.request.post('/api/jobs', { data: { customer: reference } });
+            const response = await page.request.post('/api/jobs', { data: { customerName: reference } });
             if (response.status() !== 201) return;
             jobIds.push((await response.json()).job.id);
           } else {

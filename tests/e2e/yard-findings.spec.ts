@@ -25,7 +25,7 @@ type SawBoard = { boardNo: number; source: string; status: string; section: { id
 /** A job of two sections whose 47×150 stock length the count says is gone; planned, accepted and paid. */
 async function shortJob(owner: Page) {
   const request = owner.request;
-  const created = await request.post('/api/jobs', { data: { customer: 'Wren Lane Allotments' } });
+  const created = await request.post('/api/jobs', { data: { customerName: 'Wren Lane Allotments' } });
   expect(created.status()).toBe(201);
   const { job } = await created.json();
   const imported = await request.post(`/api/jobs/${job.id}/items/import`, {
@@ -250,7 +250,7 @@ test('a cut list comes in as a workbook or a pasted block, and an unknown sectio
   browser,
 }) => {
   const hand = await signedIn(browser, DEMO.hand);
-  const created = await hand.request.post('/api/jobs', { data: { customer: 'Orchard Row Sheds' } });
+  const created = await hand.request.post('/api/jobs', { data: { customerName: 'Orchard Row Sheds' } });
   const { job } = await created.json();
   await hand.goto(`/jobs/${job.id}`);
 

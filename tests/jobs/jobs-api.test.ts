@@ -35,7 +35,7 @@ describe('GET /api/sections', () => {
 
 describe('POST /api/jobs', () => {
   it('creates a draft job with the next J-number when no reference is given', async () => {
-    const res = await create({ customer: 'Orla Penhaligon', dueDate: '2026-12-24' });
+    const res = await create({ customerName: 'Orla Penhaligon', dueDate: '2026-12-24' });
     expect(res.status).toBe(201);
     expect(res.json.job).toMatchObject({
       reference: 'J-1005',
@@ -43,21 +43,21 @@ describe('POST /api/jobs', () => {
       dueDate: '2026-12-24',
       status: 'draft',
     });
-    const second = await create({ customer: 'B', reference: '' });
+    const second = await create({ customerName: 'B', reference: '' });
     expect(second.json.job.reference).toBe('J-1006');
   });
 
   it('keeps a given reference and refuses a duplicate with 409', async () => {
-    expect((await create({ customer: 'A', reference: 'SHED-7' })).json.job.reference).toBe('SHED-7');
-    expect((await create({ customer: 'B', reference: 'SHED-7' })).status).toBe(409);
+    expect((await create({ customerName: 'A', reference: 'SHED-7' })).json.job.reference).toBe('SHED-7');
+    expect((await create({ customerName: 'B', reference: 'SHED-7' })).status).toBe(409);
   });
 
   it('answers 422 for a missing customer or a bad date, 403 to saw operators', async () => {
-    const bad = await create({ customer: ' ', dueDate: '24/12/2026' });
+    const bad = await create({ customerName: ' ', dueDate: '24/12/2026' });
     expect(bad.status).toBe(422);
-    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['customer', 'dueDate']);
+    expect(bad.json.issues.map((i: { path: string }) => i.path).sort()).toEqual(['customerName', 'dueDate']);
     actAs(AS.saw);
-    expect((await create({ customer: 'A' })).status).toBe(403);
+    expect((await create({ customerName: 'A' })).status).toBe(403);
   });
 });
 
@@ -148,7 +148,7 @@ describe('job details, edits and cancelling', () => {
     const edit = await call(patchJob, {
       method: 'PATCH',
       params: { jobId: '1' },
-      body: { customer: 'Priya H.', dueDate: null },
+      body: { customerName: 'Priya H.', dueDate: null },
     });
     expect(edit.status).toBe(200);
     expect(edit.json.job).toMatchObject({ customerName: 'Priya H.', dueDate: null });

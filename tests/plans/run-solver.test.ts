@@ -1,5 +1,5 @@
 import { afterAll, describe, expect, it } from 'vitest';
-import { runSolver, solverPoolStats, stopSolverThreads } from '@/lib/plans/run-solver';
+import { runSolver, solverPoolStats, stopSolverThreads, warmSolverThreads } from '@/lib/plans/run-solver';
 import type { SolveInput } from '@/solver';
 
 /** Many distinct lengths keep the search busy until its time limit. */
@@ -56,6 +56,18 @@ describe('runSolver', () => {
     expect(second.unplaced).toEqual([]);
     expect(solverPoolStats().started).toBe(before);
     expect(solverPoolStats().alive).toBeGreaterThanOrEqual(1);
+  });
+
+  it('warms its threads ahead of the first plan, and the plan uses one of them', async () => {
+    await stopSolverThreads();
+    const before = solverPoolStats().started;
+    warmSolverThreads();
+    warmSolverThreads(); // a second call starts no more
+    expect(solverPoolStats().alive).toBe(2);
+    expect(solverPoolStats().started).toBe(before + 2);
+    const plan = await runSolver(longJob(200));
+    expect(plan.boards.flatMap((b) => b.pieces)).toHaveLength(540);
+    expect(solverPoolStats().started).toBe(before + 2);
   });
 
   it('says clearly when the thread dies mid-solve, and the next solve starts a fresh one', async () => {

@@ -58,20 +58,20 @@ describe('jobs', () => {
   it('numbers the next job after a huge typed-in reference, twice over', async () => {
     actAs(AS.hand);
     expect(
-      (await call(createJob, { method: 'POST', body: { customer: 'Big', reference: 'J-99999999999' } }))
+      (await call(createJob, { method: 'POST', body: { customerName: 'Big', reference: 'J-99999999999' } }))
         .status,
     ).toBe(201);
-    const first = await call(createJob, { method: 'POST', body: { customer: 'Next' } });
+    const first = await call(createJob, { method: 'POST', body: { customerName: 'Next' } });
     expect(first.status).toBe(201);
     expect(first.json.job.reference).toBe('J-100000000000');
-    const second = await call(createJob, { method: 'POST', body: { customer: 'After' } });
+    const second = await call(createJob, { method: 'POST', body: { customerName: 'After' } });
     expect(second.status).toBe(201);
     expect(second.json.job.reference).toBe('J-100000000001');
   });
 
   it('keeps the label and note of a line item on a partial change', async () => {
     actAs(AS.hand);
-    const job = await call(createJob, { method: 'POST', body: { customer: 'Partial' } });
+    const job = await call(createJob, { method: 'POST', body: { customerName: 'Partial' } });
     const jobId = String(job.json.job.id);
     const added = await call(addItem, {
       method: 'POST',

@@ -21,7 +21,7 @@ describe('kerf, trim and marks', () => {
     // usable = 2400 − 10 − 3 = 2387; cuts after each piece: 1000 and 1000 + 3 + 1000
     expect(b.marks).toEqual([1000, 2003]);
     expect(b.remainder).toBe(2387 - 2000 - 2 * 3);
-    expect(b.remainderKept).toBe(true);
+    expect(b.keepRemainder).toBe(true);
     expect(b.kerfLoss).toBe(3 * 3); // trim cut + two piece cuts
     expect(b.scrap).toBe(10);
   });

@@ -85,7 +85,7 @@ export function checkPlan(input: SolveInput, plan: SolvePlan): string[] {
     const remainder = Math.max(0, usable - used);
     if (b.remainder !== remainder) errors.push(`${where}: remainder ${b.remainder} expected ${remainder}`);
     const kept = remainder > 0 && remainder >= minOffcut;
-    if (b.remainderKept !== kept) errors.push(`${where}: remainderKept wrong`);
+    if (b.keepRemainder !== kept) errors.push(`${where}: keepRemainder wrong`);
     const scrap = boardTrim + (kept ? 0 : remainder);
     if (b.scrap !== scrap) errors.push(`${where}: scrap ${b.scrap} expected ${scrap}`);
     const pieceSum = b.cutLengths.reduce((s, l) => s + l, 0);

@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { CustomerForm } from '@/components/customers/customer-form';
 import { CustomerImport } from '@/components/customers/customer-import';
 import { CustomerTable } from '@/components/customers/customer-table';
@@ -15,8 +14,7 @@ export const dynamic = 'force-dynamic';
 type Props = { searchParams: Promise<{ q?: string }> };
 
 export default async function CustomersPage({ searchParams }: Props) {
-  const user = await requirePageUser();
-  if (!can(user.role, 'customers:read')) return <AccessDenied />;
+  const user = await requirePageUser('customers:read');
   const { q } = await searchParams;
   const customers = await listCustomers({ q: q?.trim().slice(0, 100) || undefined });
   return (

@@ -1,20 +1,17 @@
 import type { Metadata } from 'next';
-import { AccessDenied } from '@/components/layout/access-denied';
 import { PaymentLedger } from '@/components/payments/payment-ledger';
 import { RefundDueList } from '@/components/payments/refund-due-list';
 import { QuoteStateTable } from '@/components/payments/quote-state-table';
 import { Card } from '@/components/ui/field';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { can } from '@/lib/auth/permissions';
 import { getPaymentsOverview } from '@/lib/quotes/get-payments-overview';
 
 export const metadata: Metadata = { title: 'Payments' };
 export const dynamic = 'force-dynamic';
 
 export default async function PaymentsPage() {
-  const user = await requirePageUser();
-  if (!can(user.role, 'payments:read')) return <AccessDenied />;
+  await requirePageUser('payments:read');
   const overview = await getPaymentsOverview();
   const sections = [
     ['Balances outstanding', overview.outstanding],

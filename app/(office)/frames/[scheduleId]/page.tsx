@@ -2,18 +2,19 @@ import type { Metadata } from 'next';
 import { FrameScheduleEditor } from '@/components/frames/frame-schedule-editor';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/page-user';
-import { getFrameScheduleById } from '@/lib/frames-data/frame-schedules';
 import { getYardFrameSections } from '@/lib/frames-data/get-yard-frame-sections';
 import { listJobsOpenForFrames } from '@/lib/frames-data/send-schedule-to-job';
-import { findOrNotFound } from '@/lib/pages/find-or-not-found';
+import { frameScheduleOrNotFound } from '@/lib/pages/page-records';
 
 export const metadata: Metadata = { title: 'Frame schedule' };
 
 export default async function FrameSchedulePage({ params }: { params: Promise<{ scheduleId: string }> }) {
   await requirePageUser('frames:edit');
-  const [schedule, sections, openJobs] = await findOrNotFound((await params).scheduleId, (id) =>
-    Promise.all([getFrameScheduleById({ id }), getYardFrameSections(), listJobsOpenForFrames()]),
-  );
+  const [schedule, sections, openJobs] = await Promise.all([
+    params.then((p) => frameScheduleOrNotFound(p.scheduleId)),
+    getYardFrameSections(),
+    listJobsOpenForFrames(),
+  ]);
   return (
     <>
       <PageHeader

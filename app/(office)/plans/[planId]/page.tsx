@@ -3,8 +3,7 @@ import { PlanView } from '@/components/plans/plan-view';
 import { DisplayUnitProvider } from '@/components/units/display-unit';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { can } from '@/lib/auth/permissions';
-import { findOrNotFound } from '@/lib/pages/find-or-not-found';
-import { getPlanContext } from '@/lib/plans/get-plan-context';
+import { planOrNotFound } from '@/lib/pages/page-records';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Plan' };
@@ -14,10 +13,7 @@ type Props = { params: Promise<{ planId: string }>; searchParams: Promise<{ prev
 export default async function PlanPage({ params, searchParams }: Props) {
   const user = await requirePageUser('plans:read');
   const [{ planId }, { previous }, yard] = await Promise.all([params, searchParams, getYardSettings()]);
-  const { id, context } = await findOrNotFound(planId, async (id) => ({
-    id,
-    context: await getPlanContext({ planId: id }),
-  }));
+  const { id, context } = await planOrNotFound(planId);
   return (
     <DisplayUnitProvider yardUnit={yard.displayUnit}>
       <PlanView

@@ -5,19 +5,16 @@ import { PrintButton } from '@/components/plans/print-button';
 import { DisplayUnitProvider } from '@/components/units/display-unit';
 import { requirePageUser } from '@/lib/auth/page-user';
 import { getJobById } from '@/lib/jobs/get-job';
-import { findOrNotFound } from '@/lib/pages/find-or-not-found';
+import { planOrNotFound } from '@/lib/pages/page-records';
 import { getPlanById } from '@/lib/plans/get-plan';
-import { getPlanContext } from '@/lib/plans/get-plan-context';
-import type { PlanViewData } from '@/lib/queries/plans';
 import { getYardSettings } from '@/lib/yard/get-yard-settings';
 
 export const metadata: Metadata = { title: 'Cut sheet' };
 
 export default async function CutSheetPage({ params }: { params: Promise<{ planId: string }> }) {
   await requirePageUser('plans:read');
-  const [planId, plan, context, yard] = await findOrNotFound((await params).planId, (id) =>
-    Promise.all([id, getPlanById({ planId: id }), getPlanContext({ planId: id }), getYardSettings()]),
-  );
+  const { id: planId, context } = await planOrNotFound((await params).planId);
+  const [plan, yard] = await Promise.all([getPlanById({ planId }), getYardSettings()]);
   const { job } = await getJobById({ jobId: plan.jobId });
   return (
     <DisplayUnitProvider yardUnit={yard.displayUnit}>
@@ -30,12 +27,7 @@ export default async function CutSheetPage({ params }: { params: Promise<{ planI
           Back to the plan
         </Link>
       </div>
-      <CutSheet
-        plan={JSON.parse(JSON.stringify(plan)) as PlanViewData}
-        job={job}
-        yardName={yard.yardName}
-        offcutTags={context.offcutTags}
-      />
+      <CutSheet plan={plan} job={job} yardName={yard.yardName} offcutTags={context.offcutTags} />
     </DisplayUnitProvider>
   );
 }

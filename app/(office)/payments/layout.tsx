@@ -1,0 +1,3 @@
+import { roleGateLayout } from '@/lib/pages/feature-gate';
+
+export default roleGateLayout('payments:read');
