@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
 
@@ -67,6 +68,10 @@ export default defineConfig({
     // The first file to need the demo yard seeds it for the whole run; on a busy machine that is slow.
     hookTimeout: 300_000,
     pool: 'forks',
+    // Vitest's default is one worker fewer than the cores: a single worker on a 2-core machine. Much of
+    // a test file's time is spent waiting (child processes, the PostgreSQL server, solver threads), so
+    // two workers there use the second core; `KERFWISE_TEST_WORKERS` overrides.
+    maxWorkers: Number(process.env.KERFWISE_TEST_WORKERS) || Math.max(2, availableParallelism() - 1),
     setupFiles: ['tests/support/setup.ts'],
     projects,
   },

@@ -1,8 +1,9 @@
-import { spawn } from 'node:child_process';
+import { spawn, type ChildProcess } from 'node:child_process';
 import { once } from 'node:events';
 import { existsSync, mkdirSync, mkdtempSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { createInterface } from 'node:readline';
 import { describe, expect, it } from 'vitest';
 import { openDatabase } from '@/db/client';
 import { acquireDataDirLock, dataDirHolder, lockFilePath } from '@/db/data-dir-lock';
@@ -11,31 +12,38 @@ import { jobs } from '@/db/schema';
 const root = mkdtempSync(path.join(tmpdir(), 'kerfwise-lock-'));
 const DEAD_PID = '999999999';
 
-/** Starts `count` processes, lets them all load, then tells them at once to race for `dir`. */
-async function race(mode: 'lock' | 'write', dir: string, count: number): Promise<string[]> {
-  const children = Array.from({ length: count }, () =>
-    spawn('node_modules/.bin/tsx', ['tests/db/lock-child.ts', mode, dir], {
-      stdio: ['pipe', 'pipe', 'inherit'],
-    }),
-  );
-  const outputs = children.map((child) => {
-    let text = '';
-    child.stdout.on('data', (chunk: Buffer) => (text += chunk));
-    return { child, text: () => text.replace(/^ready\n/, '') };
+type Child = { child: ChildProcess; lines: string[]; waiters: (() => void)[] };
+
+/** Starts `count` lock-test processes and waits until every one has loaded and said "ready". */
+async function startChildren(count: number, args: string[]): Promise<Child[]> {
+  const children = Array.from({ length: count }, () => {
+    const c: Child = {
+      child: spawn('node_modules/.bin/tsx', ['tests/db/lock-child.ts', ...args], {
+        stdio: ['pipe', 'pipe', 'inherit'],
+      }),
+      lines: [],
+      waiters: [],
+    };
+    createInterface({ input: c.child.stdout! }).on('line', (line) => {
+      c.lines.push(line);
+      c.waiters.splice(0).forEach((wake) => wake());
+    });
+    return c;
   });
-  await Promise.all(
-    children.map(
-      (child) =>
-        new Promise<void>((resolve) => {
-          child.stdout.on('data', (chunk: Buffer) => {
-            if (String(chunk).includes('ready')) resolve();
-          });
-        }),
-    ),
-  );
-  for (const child of children) child.stdin.write('go\n');
-  await Promise.all(children.map((child) => once(child, 'exit')));
-  return outputs.map((o) => o.text());
+  await Promise.all(children.map((c) => lineMatching(c, (l) => l === 'ready')));
+  return children;
+}
+
+/** Resolves with the first line (already printed or still to come) that passes `test`. */
+function lineMatching(c: Child, test: (line: string) => boolean): Promise<string> {
+  return new Promise((resolve) => {
+    const look = () => {
+      const found = c.lines.find(test);
+      if (found !== undefined) resolve(found);
+      else c.waiters.push(look);
+    };
+    look();
+  });
 }
 
 describe('data folder lock', () => {
@@ -86,22 +94,38 @@ describe('data folder lock', () => {
     expect(() => acquireDataDirLock(link)).toThrow(/already open/);
   });
 
-  // Each round starts three processes at one instant; odd rounds race to reclaim a stale lock too.
-  it('lets exactly one of several processes started together take the folder, 6 rounds of 3', async () => {
-    const winners: number[] = [];
-    for (let round = 0; round < 6; round++) {
-      const dir = path.join(root, `race-${round}`);
-      if (round % 2) writeFileSync(lockFilePath(dir), DEAD_PID);
-      const outputs = await race('lock', dir, 3);
-      winners.push(outputs.filter((o) => o.startsWith('won')).length);
-      expect(outputs.filter((o) => o.startsWith('refused'))).toHaveLength(2);
+  // Three processes race for a fresh folder at one instant, six times (odd rounds also race to
+  // reclaim a stale lock). The same three serve every round: each keeps what it won, in folders the
+  // later rounds never touch, so every round is a race between three live processes.
+  it('lets exactly one of several processes racing together take the folder, 6 rounds of 3', async () => {
+    const children = await startChildren(3, ['lock']);
+    try {
+      const winners: number[] = [];
+      for (let round = 0; round < 6; round++) {
+        const dir = path.join(root, `race-${round}`);
+        if (round % 2) writeFileSync(lockFilePath(dir), DEAD_PID);
+        for (const c of children) c.child.stdin!.write(`go ${dir}\n`);
+        const outputs = await Promise.all(
+          children.map((c) =>
+            lineMatching(c, (l) => l.startsWith(`won ${dir}`) || l.startsWith(`refused ${dir} `)),
+          ),
+        );
+        winners.push(outputs.filter((o) => o.startsWith('won')).length);
+        expect(outputs.filter((o) => o.startsWith('refused'))).toHaveLength(2);
+      }
+      expect(winners).toEqual(Array(6).fill(1));
+    } finally {
+      for (const c of children) c.child.stdin!.end();
+      await Promise.all(children.map((c) => (c.child.exitCode === null ? once(c.child, 'close') : null)));
     }
-    expect(winners).toEqual(Array(6).fill(1));
   }, 300_000);
 
   it('loses nothing acknowledged when two processes open one database together', async () => {
     const dir = path.join(root, 'db');
-    const outputs = await race('write', dir, 2);
+    const children = await startChildren(2, ['write', dir]);
+    for (const c of children) c.child.stdin!.write('go\n');
+    await Promise.all(children.map((c) => once(c.child, 'close')));
+    const outputs = children.map((c) => c.lines.filter((l) => l !== 'ready').join('\n'));
     const acked = outputs.flatMap((o) => [...o.matchAll(/^ack (\S+)$/gm)].map((m) => m[1]));
     expect(outputs.filter((o) => o.startsWith('refused'))).toHaveLength(1);
     expect(acked).toHaveLength(10);

@@ -32,7 +32,7 @@ describe('rack import', () => {
     const res = await call(importRack, { method: 'POST', body: { csv: rackCsv(10_000) } });
     expect(res.status).toBe(201);
     expect(res.json.imported).toBe(10_000);
-  });
+  }, 120_000); // 10 000 rows through the embedded database: over 30 s on a loaded 2-core machine
 
   it('refuses more than the stated row limit with 422 and imports nothing', async () => {
     actAs(AS.hand);
