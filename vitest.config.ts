@@ -25,13 +25,36 @@ const serverSuites = [
 const serverUrl = process.env.KERFWISE_TEST_DATABASE_URL;
 const snapshotSetup = 'tests/support/global-setup.ts';
 
+// Most files run many to a process (`isolate: false`): each process keeps its embedded databases and
+// loaded modules for the next file, which saves seconds per file (see tests/support/test-db.ts). The
+// files below need a process of their own: they mock modules, or count or tune the process's solver
+// threads.
+const ownProcessSuites = [
+  'tests/auth/sign-in-throttle.test.ts',
+  'tests/plans/run-solver.test.ts',
+  'tests/plans/solver-priority.test.ts',
+  'tests/saw/defect.test.ts',
+  'tests/security/authorisation-matrix.test.ts',
+];
+const notEmbedded = ['tests/e2e/**', 'tests/server/**', 'tests/instances/**', 'node_modules/**'];
+
 const projects: TestProjectInlineConfiguration[] = [
   {
     extends: true,
     test: {
       name: 'pglite',
       include: ['tests/**/*.test.ts'],
-      exclude: ['tests/e2e/**', 'tests/server/**', 'tests/instances/**', 'node_modules/**'],
+      exclude: [...notEmbedded, ...ownProcessSuites],
+      isolate: false,
+      env: { KERFWISE_TEST_REUSE_DB: '1' },
+      globalSetup: [snapshotSetup],
+    },
+  },
+  {
+    extends: true,
+    test: {
+      name: 'pglite-own-process',
+      include: ownProcessSuites,
       globalSetup: [snapshotSetup],
     },
   },

@@ -8,15 +8,15 @@ export interface SqlClient {
   exec(text: string): Promise<unknown>;
 }
 
-const SAVED = 'test_saved_rows';
 const ident = (name: string) => `"${name.replace(/"/g, '""')}"`;
 
 export interface SavedRows {
   restore: () => Promise<void>;
 }
 
-/** Copies every table of the public schema aside, with the sequences' positions. */
-export async function saveRows(client: SqlClient): Promise<SavedRows> {
+/** Copies every table of the public schema aside (into the schema `aside`), with the sequences' positions. */
+export async function saveRows(client: SqlClient, aside = 'test_saved_rows'): Promise<SavedRows> {
+  const SAVED = ident(aside);
   const tables = (
     await client.query<{ name: string }>(
       `select tablename as name from pg_tables where schemaname = 'public' order by tablename`,

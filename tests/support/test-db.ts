@@ -3,6 +3,9 @@
 // back with the rows reset, which is much faster than opening or cloning a database per test.
 // Embedded: an in-memory PGlite from a snapshot. Server-mode project (KERFWISE_TEST_SERVER=1): a
 // database on the test PostgreSQL server, copied from a template database.
+// Projects that run many files in one process (KERFWISE_TEST_REUSE_DB=1, see vitest.config.ts) keep
+// a file's databases for the next file of that process, with the rows put back as they were at the
+// start: opening a database costs seconds on this machine, putting its rows back milliseconds.
 import { setDbForTests } from '@/db';
 import { wrapClient, type Db } from '@/db/client';
 import { connectServer } from '@/db/server-client';
@@ -23,7 +26,15 @@ interface OpenedDb {
   end: () => Promise<void>;
 }
 
-interface SuiteDb extends OpenedDb {
+type Start = 'demo' | 'migrated';
+
+/** An opened database and how to put it back to its starting point (kept only when reused). */
+interface StartedDb extends OpenedDb {
+  start: Start;
+  pristine: SavedRows | null;
+}
+
+interface SuiteDb extends StartedDb {
   saved: SavedRows;
   inUse: boolean;
 }
@@ -31,12 +42,16 @@ interface SuiteDb extends OpenedDb {
 const suites = new Map<Fixture | 'demo', Promise<SuiteDb>>();
 let serverDbCount = 0;
 
-async function openEmbedded(start: 'demo' | 'migrated'): Promise<OpenedDb> {
+const reuseAcrossFiles = process.env.KERFWISE_TEST_REUSE_DB === '1';
+// On globalThis: the one list of the process, whatever becomes of this module between files.
+const idle = ((globalThis as unknown as { kerfwiseIdleTestDbs?: StartedDb[] }).kerfwiseIdleTestDbs ??= []);
+
+async function openEmbedded(start: Start): Promise<OpenedDb> {
   const client = await openSnapshot(start);
   return { db: wrapClient(client), client, end: () => client.close() };
 }
 
-async function openOnServer(serverUrl: string, start: 'demo' | 'migrated'): Promise<OpenedDb> {
+async function openOnServer(serverUrl: string, start: Start): Promise<OpenedDb> {
   const name = `${TEST_DB_PREFIX}${process.pid}_${++serverDbCount}`;
   await onServer(serverUrl, [`create database ${name} template ${TEMPLATE_DBS[start]} strategy file_copy`]);
   const url = urlForDatabase(serverUrl, name);
@@ -51,19 +66,33 @@ async function openOnServer(serverUrl: string, start: 'demo' | 'migrated'): Prom
   return { db, client, url, end: () => pool.end() };
 }
 
-async function openSuiteDb(fixture: Fixture | 'demo'): Promise<SuiteDb> {
-  const start = fixture === 'demo' ? 'demo' : 'migrated';
+/** A database at its starting point: an earlier file's, with its rows put back, or a new one. */
+async function startDb(start: Start): Promise<StartedDb> {
+  const kept = idle.findIndex((d) => d.start === start);
+  if (kept !== -1) {
+    const [reused] = idle.splice(kept, 1);
+    await reused.pristine!.restore();
+    return reused;
+  }
   const serverUrl = serverTestUrl();
   const opened = serverUrl ? await openOnServer(serverUrl, start) : await openEmbedded(start);
+  const pristine = reuseAcrossFiles ? await saveRows(opened.client, 'test_start_rows') : null;
+  return { ...opened, start, pristine };
+}
+
+async function openSuiteDb(fixture: Fixture | 'demo'): Promise<SuiteDb> {
+  const started = await startDb(fixture === 'demo' ? 'demo' : 'migrated');
   if (fixture !== 'demo') {
-    setDbForTests(opened.db); // lib functions reach the database through getDb()
+    setDbForTests(started.db); // lib functions reach the database through getDb()
     try {
-      await fixture(opened.db);
+      await fixture(started.db);
     } finally {
       setDbForTests(undefined);
     }
   }
-  return { ...opened, saved: await saveRows(opened.client), inUse: false };
+  // The demo yard's starting rows are already set aside when the database is kept for reuse.
+  const saved = fixture === 'demo' && started.pristine ? started.pristine : await saveRows(started.client);
+  return { ...started, saved, inUse: false };
 }
 
 export interface TestDb {
@@ -97,9 +126,16 @@ export async function createTestDb({
   };
 }
 
-/** Closes the file's databases (call in afterAll, or Vitest will not exit). */
+/**
+ * Closes the file's databases (call in afterAll, or Vitest will not exit), or keeps them for the
+ * next file of the process when databases are reused.
+ */
 export async function closeTemplate(): Promise<void> {
   const open = [...suites.values()];
   suites.clear();
-  for (const suite of open) await (await suite).end();
+  for (const suite of open) {
+    const { saved: _saved, inUse: _inUse, ...started } = await suite;
+    if (reuseAcrossFiles) idle.push(started);
+    else await started.end();
+  }
 }
