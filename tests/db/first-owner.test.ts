@@ -1,22 +1,25 @@
 // The production way into a new yard: the first owner from a command or the environment, no demo data.
-import { PGlite } from '@electric-sql/pglite';
-import { migrate } from 'drizzle-orm/pglite/migrator';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { migrationsFolder, wrapClient } from '@/db/client';
+import type { Db } from '@/db';
 import * as schema from '@/db/schema';
 import { verifyPassword } from '@/lib/auth/password';
 import { prepareYard } from '@/lib/server/prepare-yard';
 import { createFirstOwner } from '@/lib/users/first-owner';
+import { closeTemplate, createTestDb, type Fixture, type TestDb } from '../support/test-db';
 
-let client: PGlite;
-let db: ReturnType<typeof wrapClient>;
+let db: Db;
+let testDb: TestDb | undefined;
+// An empty migrated database with no rows at all: a yard before its first start.
+const noRows: Fixture = async () => {};
 // Set up in a hook: starting PGlite can outlast a test's time limit on a busy machine.
 beforeAll(async () => {
-  client = new PGlite();
-  db = wrapClient(client);
-  await migrate(db, { migrationsFolder });
+  testDb = await createTestDb({ fixture: noRows });
+  db = testDb.db;
 });
-afterAll(() => client?.close());
+afterAll(async () => {
+  await testDb?.close();
+  await closeTemplate();
+});
 
 describe('the first owner of an empty yard', () => {
   it('refuses a password the sign-up rules refuse, and writes nothing', async () => {

@@ -134,8 +134,8 @@ export async function closeTemplate(): Promise<void> {
   const open = [...suites.values()];
   suites.clear();
   for (const suite of open) {
-    const { saved: _saved, inUse: _inUse, ...started } = await suite;
-    if (reuseAcrossFiles) idle.push(started);
-    else await started.end();
+    const { start, db, client, url, end, pristine } = await suite;
+    if (reuseAcrossFiles) idle.push({ start, db, client, url, end, pristine });
+    else await end();
   }
 }
