@@ -60,15 +60,31 @@ const projects: TestProjectInlineConfiguration[] = [
   },
 ];
 if (serverUrl) {
-  projects.push({
-    extends: true,
-    test: {
-      name: 'postgres',
-      include: serverSuites,
-      env: { KERFWISE_TEST_SERVER: '1' },
-      globalSetup: [snapshotSetup, 'tests/support/server-global-setup.ts'],
+  const serverSetup = [snapshotSetup, 'tests/support/server-global-setup.ts'];
+  // The same split: the queue's client is one per process, and the defect suite mocks the solver.
+  const serverOwnProcessSuites = ['tests/saw/defect.test.ts', 'tests/server/**/*.test.ts'];
+  projects.push(
+    {
+      extends: true,
+      test: {
+        name: 'postgres',
+        include: serverSuites,
+        exclude: serverOwnProcessSuites,
+        isolate: false,
+        env: { KERFWISE_TEST_SERVER: '1', KERFWISE_TEST_REUSE_DB: '1' },
+        globalSetup: serverSetup,
+      },
     },
-  });
+    {
+      extends: true,
+      test: {
+        name: 'postgres-own-process',
+        include: serverOwnProcessSuites,
+        env: { KERFWISE_TEST_SERVER: '1' },
+        globalSetup: serverSetup,
+      },
+    },
+  );
 } else {
   // Said from a global setup: the config itself is loaded more than once, so a log here printed twice.
   projects[0].test!.globalSetup = [snapshotSetup, 'tests/support/postgres-skipped-notice.ts'];

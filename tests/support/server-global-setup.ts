@@ -1,4 +1,4 @@
-// Vitest global setup of the server-mode project: builds the two template databases once per run
+// Vitest global setup of the server-mode projects: builds the two template databases once per run
 // and drops every per-file database at the end.
 import pg from 'pg';
 import { openServerDatabase } from '@/db/server-client';
@@ -15,12 +15,27 @@ async function buildTemplate(serverUrl: string, name: string, seed: boolean) {
   await pool.end(); // a template must have no open connections while it is copied
 }
 
+// Global setups run in the one main process; the server-mode projects share the templates: the
+// first setup builds them, and the last teardown drops the per-file databases.
+const USERS = 'KERFWISE_TEST_SERVER_TEMPLATE_USERS';
+
 export default async function setup() {
   const serverUrl = process.env.KERFWISE_TEST_DATABASE_URL;
   if (!serverUrl) throw new Error('The server-mode project needs KERFWISE_TEST_DATABASE_URL.');
-  await buildTemplate(serverUrl, TEMPLATE_DBS.migrated, false);
-  await buildTemplate(serverUrl, TEMPLATE_DBS.demo, true);
-  return () => dropTestDatabases(serverUrl);
+  const users = Number(process.env[USERS] ?? 0);
+  if (users === 0) {
+    await buildTemplate(serverUrl, TEMPLATE_DBS.migrated, false);
+    await buildTemplate(serverUrl, TEMPLATE_DBS.demo, true);
+  }
+  process.env[USERS] = String(users + 1);
+  return async () => {
+    const left = Number(process.env[USERS]) - 1;
+    process.env[USERS] = String(left);
+    if (left === 0) {
+      delete process.env[USERS];
+      await dropTestDatabases(serverUrl);
+    }
+  };
 }
 
 async function dropTestDatabases(serverUrl: string) {
