@@ -1,6 +1,7 @@
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { defineConfig, type TestProjectInlineConfiguration } from 'vitest/config';
+import { WaitingFirstSequencer } from './tests/support/waiting-first-sequencer';
 
 // The suites whose data work can differ on a PostgreSQL server run twice: on embedded PGlite, and on
 // a server when KERFWISE_TEST_DATABASE_URL names one (`.ci/run` starts a throwaway cluster and sets
@@ -112,6 +113,7 @@ export default defineConfig({
     // two workers there use the second core; `KERFWISE_TEST_WORKERS` overrides.
     maxWorkers: Number(process.env.KERFWISE_TEST_WORKERS) || Math.max(2, availableParallelism() - 1),
     setupFiles: ['tests/support/setup.ts'],
+    sequence: { sequencer: WaitingFirstSequencer },
     projects,
   },
 });
