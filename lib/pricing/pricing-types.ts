@@ -25,7 +25,7 @@ export type PriceLine = {
   amountPence: number;
 };
 
-/** A plan's price before tax (plans.price). Plans stored before pence held pounds: see drizzle 0006. */
+/** A plan's price before tax (plans.price). Plans stored before pence held pounds: see drizzle/*_plan-json-words.sql. */
 export type CuttingPlanPrice = {
   lines: PriceLine[];
   materialsPence: number;
