@@ -252,7 +252,7 @@ export const plans = pgTable('plans', {
   sections: jsonb('sections').notNull(),
   totals: jsonb('totals').notNull(),
   pricePence: integer('price_pence').notNull().default(0),
-  // The quote: { lines, materials, cutting, total } in pounds (lib/pricing).
+  // The price before tax: { lines, materialsPence, cuttingPence, totalPence } in whole pence (lib/pricing).
   price: jsonb('price'),
   createdBy: integer('created_by').references(() => users.id),
   createdAt: createdAt(),

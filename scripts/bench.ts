@@ -1,4 +1,4 @@
-// npm run bench [-- --set hard28,falkenauer_u120,yard,yard-exact] [--limit 20] [--yard 20] [--exact 80] [--write]
+// npm run bench [-- --set hard28,falkenauer_u120,yard,yard-exact] [--limit 20] [--only Hard28_BPP13,…] [--yard 20] [--exact 80] [--write]
 // Runs the public benchmark sets (read from ../shared/benchmarks) and seeded yard jobs, side by side
 // with first-fit decreasing. Prints tables; writes docs/benchmarks.md on a full run or with --write.
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
@@ -28,8 +28,10 @@ function arg(name: string): string | undefined {
 
 const chosen = arg('set')?.split(',') ?? [...Object.keys(SET_LIMITS), 'yard', 'yard-exact'];
 const limit = Number(arg('limit') ?? Infinity);
+// Instance names to run (for working on one instance at a time); the others are skipped.
+const only = arg('only')?.split(',');
 const yardCount = Number(arg('yard') ?? 20);
-const full = !arg('set') && !arg('limit');
+const full = !arg('set') && !arg('limit') && !only;
 const write = full || process.argv.includes('--write');
 let peakRss = 0;
 const sample = () => (peakRss = Math.max(peakRss, process.memoryUsage().rss));
@@ -45,7 +47,7 @@ const setRows: SetRow[] = [];
 const published = chosen.filter((s) => s in SET_LIMITS);
 const all = published.length > 0 ? readOptima() : [];
 for (const set of published) {
-  const list = all.filter((i) => i.set === set).slice(0, limit);
+  const list = all.filter((i) => i.set === set && (!only || only.includes(i.name))).slice(0, limit);
   const times: number[] = [];
   let atOpt = 0;
   let above = 0;

@@ -88,9 +88,15 @@ export function firstFitDecreasing(model: Model, demand: number[], binsLeft: num
 }
 
 /** Longest-first as a yard does it by hand: shortest fitting offcut first, else the longest stock length. */
-export function longestFirst(model: Model, demand: number[], binsLeft: number[]): Packing {
+export function longestFirst(
+  model: Model,
+  demand: number[],
+  binsLeft: number[],
+  { offcuts = true }: { offcuts?: boolean } = {},
+): Packing {
   const order = model.bins
     .map((_, j) => j)
+    .filter((j) => offcuts || model.bins[j].source !== 'offcut')
     .sort((a, b) => {
       const ba = model.bins[a];
       const bb = model.bins[b];

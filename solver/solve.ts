@@ -5,6 +5,7 @@ import { arcFlowStep } from './arc-flow';
 import { residualStep } from './residual-step';
 import { exactStep } from './exact-step';
 import { firstFitDecreasing, longestFirst, sequentialFill } from './greedy-fill';
+import { downsizeBoards } from './board-swaps';
 import { lengthBound, lpBound, maxBound } from './lower-bounds';
 import { buildModel, type Model } from './model';
 import { compareScores, scorePacking, type Packing } from './packing';
@@ -35,9 +36,12 @@ export function solve(input: SolveInput): SolvePlan {
   };
   const ffd = firstFitDecreasing(model, demand, limits);
   consider(ffd);
-  // The plan must never cost more than the plain longest-first a yard would cut by hand.
-  const byHand = longestFirst(model, demand, limits);
+  // The plan must never cost more than the plain longest-first a yard would cut by hand: from new
+  // stock only, each board then cut from the cheapest length that holds it (the reports' baseline),
+  // and the same with rack offcuts first. Both come before any time check.
+  const byHand = downsizeBoards(model, longestFirst(model, demand, limits));
   consider(byHand);
+  consider(downsizeBoards(model, longestFirst(model, demand, limits, { offcuts: false })));
 
   const firstPlans = [best];
   let bound = lengthBound(model, placedDemand(model, best), limits);

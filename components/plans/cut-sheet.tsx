@@ -6,7 +6,7 @@ import { actualCutMm, cutRange } from '@/lib/plans/cut-words';
 import { useFormatLength } from '@/components/units/display-unit';
 import type { PlanBoardView, PlanViewData } from '@/lib/queries/plans';
 import { DiagramLegend } from './diagram-legend';
-import { formatPounds } from '@/lib/format/money';
+import { formatPence } from '@/lib/format/money';
 import { PlanSectionBoards } from './plan-section-boards';
 
 /** What the sheet draws: the plan's settings, sections, boards and price (the server page passes its own). */
@@ -115,15 +115,15 @@ export function CutSheet({
               <tr key={i} className="border-b border-shaving">
                 <td className="py-1">{l.description}</td>
                 <td className="py-1 text-right tabular-nums">
-                  {l.quantity} × {formatPounds(l.unitPrice)}
+                  {l.quantity} × {formatPence(l.unitPence)}
                 </td>
-                <td className="py-1 text-right tabular-nums">{formatPounds(l.amount)}</td>
+                <td className="py-1 text-right tabular-nums">{formatPence(l.amountPence)}</td>
               </tr>
             ))}
             <tr className="text-lg font-bold">
               <td className="pt-2">Total</td>
               <td />
-              <td className="pt-2 text-right tabular-nums">{formatPounds(plan.price.total)}</td>
+              <td className="pt-2 text-right tabular-nums">{formatPence(plan.price.totalPence)}</td>
             </tr>
           </tbody>
         </table>

@@ -5,14 +5,16 @@ import type { PlanViewData } from '@/lib/queries/plans';
 import { describeGap } from './gap-words';
 import { countBoardsByLength } from '@/lib/plans/group-boards';
 import { BaselineComparison } from './baseline-comparison';
-import { formatPence, formatPounds } from '@/lib/format/money';
+import { formatPence } from '@/lib/format/money';
 
 /** Totals over the plan (boards per length, offcuts, waste, yield, kept) and the price. */
 export function PlanFigures({ plan }: { plan: PlanViewData }) {
   const fmt = useFormatLength();
   const t = plan.totals;
   const waste =
-    t.materialMm > 0 ? Math.round((1000 * (t.scrapMm + t.kerfMm)) / (t.materialMm - t.keptMm || 1)) / 10 : 0;
+    t.materialMm > 0
+      ? Math.round((1000 * (t.scrapMm + t.kerfLossMm)) / (t.materialMm - t.keptMm || 1)) / 10
+      : 0;
   return (
     <div className="grid gap-6 lg:grid-cols-2">
       <div data-testid="plan-totals">
@@ -26,7 +28,7 @@ export function PlanFigures({ plan }: { plan: PlanViewData }) {
           <dd className="text-right font-semibold tabular-nums">{t.yieldPercent}%</dd>
           <dt>Waste (scrap and kerf)</dt>
           <dd className="text-right tabular-nums">
-            {waste}% · {fmt(t.scrapMm + t.kerfMm)}
+            {waste}% · {fmt(t.scrapMm + t.kerfLossMm)}
           </dd>
           <dt>Kept offcuts</dt>
           <dd className="text-right tabular-nums">
@@ -70,9 +72,9 @@ export function PlanFigures({ plan }: { plan: PlanViewData }) {
                 <tr key={i} className="border-b border-shaving">
                   <td className="py-1">{line.description}</td>
                   <td className="py-1 text-right tabular-nums">
-                    {line.quantity} × {formatPounds(line.unitPrice)}
+                    {line.quantity} × {formatPence(line.unitPence)}
                   </td>
-                  <td className="py-1 text-right tabular-nums">{formatPounds(line.amount)}</td>
+                  <td className="py-1 text-right tabular-nums">{formatPence(line.amountPence)}</td>
                 </tr>
               ))}
             </tbody>
@@ -80,18 +82,18 @@ export function PlanFigures({ plan }: { plan: PlanViewData }) {
               <tr>
                 <td className="pt-2">Timber</td>
                 <td />
-                <td className="pt-2 text-right tabular-nums">{formatPounds(plan.price.materials)}</td>
+                <td className="pt-2 text-right tabular-nums">{formatPence(plan.price.materialsPence)}</td>
               </tr>
               <tr>
                 <td>Cutting</td>
                 <td />
-                <td className="text-right tabular-nums">{formatPounds(plan.price.cutting)}</td>
+                <td className="text-right tabular-nums">{formatPence(plan.price.cuttingPence)}</td>
               </tr>
               <tr className="text-lg font-bold">
                 <td>Total</td>
                 <td />
                 <td className="text-right tabular-nums" data-testid="plan-total-price">
-                  {formatPounds(plan.price.total)}
+                  {formatPence(plan.price.totalPence)}
                 </td>
               </tr>
             </tfoot>

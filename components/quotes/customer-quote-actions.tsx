@@ -8,6 +8,7 @@ import { formatPence } from '@/lib/format/money';
 import { acceptQuoteRequest, payQuoteRequest } from '@/lib/queries/quotes';
 import { useApiMutation } from '@/lib/queries/use-api-mutation';
 import type { CustomerQuote } from '@/lib/quotes/get-customer-quote';
+import { CARD_MINIMUM_PENCE } from '@/lib/quotes/payment-state';
 
 /** Accept (typed name, non-returnable tick, on account for trade), then pay a deposit or in full. */
 export function CustomerQuoteActions({ token, data }: { token: string; data: CustomerQuote }) {
@@ -79,8 +80,10 @@ export function CustomerQuoteActions({ token, data }: { token: string; data: Cus
       </form>
     );
   }
-  const depositDue = quote.depositPence - payment.paidPence;
-  const canPay = payment.state !== 'paid' && payment.state !== 'on_account' && payment.balancePence > 0;
+  const depositDue = payment.depositDuePence;
+  const open = payment.state !== 'paid' && payment.state !== 'on_account' && payment.balancePence > 0;
+  // Pennies left over (a re-plan after the deposit) are below the smallest card payment.
+  const canPay = open && payment.balancePence >= CARD_MINIMUM_PENCE;
   return (
     <section
       className="space-y-3 rounded-xl border border-sand bg-white p-4 sm:p-6"
@@ -105,6 +108,12 @@ export function CustomerQuoteActions({ token, data }: { token: string; data: Cus
             Pay {formatPence(payment.balancePence)} {payment.paidPence > 0 ? 'balance' : 'in full'}
           </Button>
         </div>
+      )}
+      {open && !canPay && (
+        <p data-testid="pay-at-collection">
+          {formatPence(payment.balancePence)} is left to pay, less than the smallest card payment: settle it
+          with the yard when you collect.
+        </p>
       )}
       {error && (
         <Notice tone="error" data-testid="payment-error">

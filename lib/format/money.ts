@@ -1,15 +1,9 @@
 // The one way money is written for people, in the product and in its e-mails and PDFs.
-import { toPence } from '../pricing/money';
 
 /** Whole pence as pounds for people: 123456 → "£1,234.56". */
 export function formatPence(pence: number): string {
   const sign = pence < 0 ? '−' : '';
   return `${sign}£${(Math.abs(pence) / 100).toLocaleString('en-GB', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
-}
-
-/** An amount still held in pounds (a plan's price lines), shown as formatPence shows pence. */
-export function formatPounds(pounds: number): string {
-  return formatPence(toPence(pounds));
 }
 
 /** Millimetres as metres to one decimal: 12345 → "12.3 m". */

@@ -1,7 +1,7 @@
 // Builds a whole plan from a job's planning data: solver input and result per section, totals,
 // price and the saw's board list. No database access, so the demo seed can use it too.
 import type { SolveInput, SolvePlan } from '@/solver';
-import { priceCuttingPlan } from '@/lib/pricing';
+import { priceCuttingPlan, toPence } from '@/lib/pricing';
 import {
   buildSolverInput,
   type PlanningItem,
@@ -52,13 +52,13 @@ export async function composePlan({
     });
   }
   const price = priceCuttingPlan({
-    perCutCharge: perCutChargePence / 100,
+    perCutPence: perCutChargePence,
     sections: planSections.map((s) => ({
       sectionName: s.sectionName,
       boards: s.output.boards.map((b) => ({
         source: b.source,
         length: b.length,
-        cost: b.cost,
+        costPence: toPence(b.cost), // the solver's costs are the stock prices in pounds
         cuts: sawCuts(b),
       })),
     })),
@@ -73,7 +73,7 @@ export async function composePlan({
     sections: planSections,
     totals: summarisePlan(planSections),
     price,
-    pricePence: Math.round(price.total * 100),
+    pricePence: price.totalPence,
     boards: planBoardRows(planSections, labels),
   };
 }

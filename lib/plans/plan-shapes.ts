@@ -28,7 +28,8 @@ export type PlanTotals = {
   offcutsUsed: number;
   materialMm: number;
   pieceMm: number;
-  kerfMm: number;
+  /** Length lost to saw cuts over the plan (the blade's width is PlanSettings.kerfMm). */
+  kerfLossMm: number;
   scrapMm: number;
   keptMm: number;
   keptOffcuts: number;

@@ -36,7 +36,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     offcutsUsed: 0,
     materialMm: 0,
     pieceMm: 0,
-    kerfMm: 0,
+    kerfLossMm: 0,
     scrapMm: 0,
     keptMm: 0,
     keptOffcuts: 0,
@@ -56,7 +56,7 @@ export function summarisePlan(sections: PlanSection[]): PlanTotals {
     t.stockBoards += o.boards - o.offcutsUsed;
     t.materialMm += o.materialLength;
     t.pieceMm += o.pieceLength;
-    t.kerfMm += o.kerfLoss;
+    t.kerfLossMm += o.kerfLoss;
     t.scrapMm += o.scrap;
     t.keptMm += o.keptLength;
     t.keptOffcuts += o.keptOffcuts;

@@ -1,4 +1,4 @@
 export { priceCuttingPlan } from './price-cutting-plan';
 export { priceCuttingPlanInputSchema } from './price-cutting-plan-input-schema';
-export { toPence, toPounds } from './money';
+export { toPence } from './money';
 export type { CuttingPlanPrice, PriceCuttingPlanInput, PricedBoard, PriceLine } from './pricing-types';

@@ -1,4 +1,4 @@
-// Money is held in whole pence while adding up, so totals never drift by floating-point error.
+// Amounts in pounds (a solver's board cost, a typed price) become whole pence once, here.
 
 /** Pounds to whole pence, halves rounded up; "1.005" is treated as written, not as 1.00499…. */
 export function toPence(pounds: number): number {
@@ -7,8 +7,4 @@ export function toPence(pounds: number): number {
   // Shifting the decimal point in the text avoids 1.005 × 100 = 100.49999…
   const shifted = text.includes('e') ? pounds * 100 : Number(`${text}e2`);
   return Math.round(shifted);
-}
-
-export function toPounds(pence: number): number {
-  return pence / 100;
 }

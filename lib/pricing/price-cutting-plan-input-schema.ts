@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-const money = z.number().finite().nonnegative().max(1_000_000);
+const pence = z.number().int('Whole pence.').nonnegative().max(100_000_000);
 
 /** Validates a pricing request before priceCuttingPlan, which throws on bad numbers. */
 export const priceCuttingPlanInputSchema = z.object({
@@ -11,12 +11,12 @@ export const priceCuttingPlanInputSchema = z.object({
         z.object({
           source: z.enum(['stock', 'offcut']),
           length: z.number().int().positive().describe('whole millimetres'),
-          cost: money,
+          costPence: pence,
           cuts: z.number().int().nonnegative().max(10_000),
         }),
       ),
     }),
   ),
-  perCutCharge: money,
-  offcutPricePerMetre: money.nullish(),
+  perCutPence: pence,
+  offcutPencePerMetre: pence.nullish(),
 });

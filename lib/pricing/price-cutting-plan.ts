@@ -1,14 +1,11 @@
 import { formatMillimetres } from '@/lib/units';
-import { toPence, toPounds } from './money';
 import type { CuttingPlanPrice, PriceCuttingPlanInput, PricedBoard, PriceLine } from './pricing-types';
 
-type PenceLine = Omit<PriceLine, 'unitPrice' | 'amount'> & { unitPence: number; amountPence: number };
-
 /** One line per stock length and price, in the order the plan first uses them. */
-function priceStockBoards(sectionName: string, boards: PricedBoard[]): PenceLine[] {
+function priceStockBoards(sectionName: string, boards: PricedBoard[]): PriceLine[] {
   const groups = new Map<string, { length: number; unitPence: number; count: number }>();
   for (const board of boards) {
-    const unitPence = toPence(board.cost);
+    const unitPence = board.costPence;
     const key = `${board.length}:${unitPence}`;
     const group = groups.get(key) ?? { length: board.length, unitPence, count: 0 };
     group.count += 1;
@@ -24,7 +21,7 @@ function priceStockBoards(sectionName: string, boards: PricedBoard[]): PenceLine
 }
 
 /** One line per section for rack offcuts, charged on their total length, rounded once to the penny. */
-function priceOffcuts(sectionName: string, boards: PricedBoard[], perMetrePence: number): PenceLine[] {
+function priceOffcuts(sectionName: string, boards: PricedBoard[], perMetrePence: number): PriceLine[] {
   if (boards.length === 0) return [];
   const totalMm = boards.reduce((sum, board) => sum + board.length, 0);
   const pieces = `${boards.length} ${boards.length === 1 ? 'piece' : 'pieces'}`;
@@ -39,28 +36,29 @@ function priceOffcuts(sectionName: string, boards: PricedBoard[], perMetrePence:
   ];
 }
 
+const whole = (n: number) => Number.isInteger(n) && n >= 0;
+
 function checkBoard(board: PricedBoard): void {
-  const whole = (n: number) => Number.isInteger(n) && n >= 0;
-  if (!whole(board.length) || !whole(board.cuts) || !(board.cost >= 0)) {
-    throw new RangeError('Board lengths and cut counts must be whole numbers and costs not negative.');
+  if (!whole(board.length) || !whole(board.cuts) || !whole(board.costPence)) {
+    throw new RangeError('Board lengths, cut counts and costs must be whole numbers, not negative.');
   }
 }
 
 /**
  * Prices a cutting plan: new stock at the yard's price per board, rack offcuts at a price per metre
- * (free when none is set), and a charge for every saw cut. Prices are before any tax; all sums are
- * made in whole pence and returned in pounds.
+ * (free when none is set), and a charge for every saw cut. Prices are before any tax, in whole pence.
  */
 export function priceCuttingPlan({
   sections,
-  perCutCharge,
-  offcutPricePerMetre,
+  perCutPence,
+  offcutPencePerMetre,
 }: PriceCuttingPlanInput): CuttingPlanPrice {
-  const perCutPence = toPence(perCutCharge);
-  const perMetrePence = offcutPricePerMetre == null ? 0 : toPence(offcutPricePerMetre);
-  if (perCutPence < 0 || perMetrePence < 0) throw new RangeError('Charges cannot be negative.');
+  const perMetrePence = offcutPencePerMetre ?? 0;
+  if (!whole(perCutPence) || !whole(perMetrePence)) {
+    throw new RangeError('Charges must be whole pence, not negative.');
+  }
 
-  const lines: PenceLine[] = [];
+  const lines: PriceLine[] = [];
   let cuts = 0;
   for (const { sectionName, boards } of sections) {
     boards.forEach(checkBoard);
@@ -90,14 +88,5 @@ export function priceCuttingPlan({
       amountPence: cuttingPence,
     });
 
-  return {
-    lines: lines.map(({ unitPence, amountPence, ...line }) => ({
-      ...line,
-      unitPrice: toPounds(unitPence),
-      amount: toPounds(amountPence),
-    })),
-    materials: toPounds(materialsPence),
-    cutting: toPounds(cuttingPence),
-    total: toPounds(materialsPence + cuttingPence),
-  };
+  return { lines, materialsPence, cuttingPence, totalPence: materialsPence + cuttingPence };
 }

@@ -1,9 +1,10 @@
+// Every amount here is whole pence.
 export type PricedBoard = {
   source: 'stock' | 'offcut';
   /** Whole millimetres. */
   length: number;
   /** Yard price of this stock length; ignored for offcuts, which are priced per metre. */
-  cost: number;
+  costPence: number;
   /** Pieces cut off this board, each one saw cut. */
   cuts: number;
 };
@@ -11,17 +12,23 @@ export type PricedBoard = {
 export type PriceCuttingPlanInput = {
   sections: Array<{ sectionName: string; boards: PricedBoard[] }>;
   /** Charge per saw cut. */
-  perCutCharge: number;
+  perCutPence: number;
   /** Price per metre of offcut used; omitted or null means offcuts are free. */
-  offcutPricePerMetre?: number | null;
+  offcutPencePerMetre?: number | null;
 };
 
 export type PriceLine = {
   description: string;
   quantity: number;
   unit: 'board' | 'metre' | 'cut';
-  unitPrice: number;
-  amount: number;
+  unitPence: number;
+  amountPence: number;
 };
 
-export type CuttingPlanPrice = { lines: PriceLine[]; materials: number; cutting: number; total: number };
+/** A plan's price before tax (plans.price). Plans stored before pence held pounds: see drizzle/*_plan-json-words.sql. */
+export type CuttingPlanPrice = {
+  lines: PriceLine[];
+  materialsPence: number;
+  cuttingPence: number;
+  totalPence: number;
+};

@@ -4,7 +4,7 @@ import { asc, eq } from 'drizzle-orm';
 import { getDb } from '@/db';
 import { customers, jobItems, jobs, payments, sections, yardSettings } from '@/db/schema';
 import { quoteView } from './get-plan-quote';
-import { paidPence, paymentState } from './payment-state';
+import { depositDuePence, paidPence, paymentState } from './payment-state';
 import { resolveQuoteToken } from './quote-links';
 
 export async function getCustomerQuote({ token }: { token: string }) {
@@ -50,6 +50,7 @@ export async function getCustomerQuote({ token }: { token: string }) {
       state: paymentState(quote, paid),
       paidPence: paid,
       balancePence: quote.grossPence - paid,
+      depositDuePence: depositDuePence(quote, paid),
       lastFailure:
         lastFailure && !ledger.some((p) => p.status === 'succeeded' && p.at > lastFailure.at)
           ? lastFailure.note

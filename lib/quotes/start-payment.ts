@@ -6,7 +6,8 @@ import { getDb } from '@/db';
 import { payments } from '@/db/schema';
 import { AppError } from '@/lib/errors';
 import { paymentClient } from '@/lib/payments/payment-client';
-import { paidPence } from './payment-state';
+import { formatPence } from '@/lib/format/money';
+import { CARD_MINIMUM_PENCE, depositDuePence, paidPence } from './payment-state';
 import { resolveQuoteToken } from './quote-links';
 
 export async function startPayment({
@@ -22,11 +23,17 @@ export async function startPayment({
   if (!quote.acceptedAt) throw new AppError('conflict', 'Accept the quote first, then pay.');
   const db = await getDb();
   const paid = paidPence(await db.select().from(payments).where(eq(payments.jobId, quote.jobId)));
-  const amount = (share === 'deposit' ? quote.depositPence : quote.grossPence) - paid;
+  const amount = share === 'deposit' ? depositDuePence(quote, paid) : quote.grossPence - paid;
   if (amount <= 0)
     throw new AppError(
       'conflict',
       share === 'deposit' ? 'The deposit is already paid.' : 'This quote is paid in full.',
+    );
+  if (amount < CARD_MINIMUM_PENCE)
+    throw new AppError(
+      'conflict',
+      `${formatPence(amount)} is left to pay, less than the smallest card payment ` +
+        `(${formatPence(CARD_MINIMUM_PENCE)}): settle it with the yard when you collect.`,
     );
   const kind = share === 'full' ? (paid > 0 ? 'balance' : 'full') : 'deposit';
   const metadata = { quoteId: String(quote.id), jobId: String(quote.jobId), kind };

@@ -6,7 +6,10 @@ import path from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
 import { migrate } from 'drizzle-orm/pglite/migrator';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { setDbForTests } from '@/db';
 import { migrationsFolder, wrapClient } from '@/db/client';
+import { formatPence } from '@/lib/format/money';
+import { getPlanById } from '@/lib/plans/get-plan';
 
 interface Journal {
   entries: { idx: number; tag: string }[];
@@ -16,8 +19,11 @@ const journal = JSON.parse(
 ) as Journal;
 const scratch = mkdtempSync(path.join(tmpdir(), 'kerfwise-migrations-'));
 let client: PGlite;
+let oldPlanClient: PGlite;
 afterAll(async () => {
+  setDbForTests(undefined);
   await client?.close();
+  await oldPlanClient?.close();
   rmSync(scratch, { recursive: true, force: true });
 });
 
@@ -81,5 +87,126 @@ describe('database upgrades', () => {
          from users u, offcuts o, jobs j, yard_settings y`,
     );
     expect(rows).toEqual([{ email: 'owner@upgrade.test', tag: 'U-0001', reference: 'J-UP-1', kerf: 4 }]);
+  });
+});
+
+// A plan saved before the plan-json-words migration, as the code of that time stored it: the plan's kerf
+// loss under totals.kerfMm and its price in pounds. The prices are invented; the pounds are the
+// pence of the pricing test's worked example (tests/pricing/price-cutting-plan.test.ts) divided by 100.
+const oldTotals = {
+  boards: 4,
+  stockBoards: 3,
+  offcutsUsed: 1,
+  materialMm: 14450,
+  pieceMm: 13200,
+  kerfMm: 18,
+  scrapMm: 432,
+  keptMm: 800,
+  keptOffcuts: 1,
+  yieldPercent: 96.7,
+  stockCostPence: 2645,
+  cuts: 6,
+  lowerBoundBoards: 4,
+  gapBoards: 0,
+  unplacedPieces: 0,
+  baseline: { boards: 4, stockCostPence: 3365, scrapMm: 1700 },
+};
+const oldPrice = {
+  lines: [
+    {
+      description: '47 x 100, 4800 mm stock length',
+      quantity: 2,
+      unit: 'board',
+      unitPrice: 9.6,
+      amount: 19.2,
+    },
+    {
+      description: '47 x 100, 3600 mm stock length',
+      quantity: 1,
+      unit: 'board',
+      unitPrice: 7.25,
+      amount: 7.25,
+    },
+    { description: 'Cutting to length', quantity: 6, unit: 'cut', unitPrice: 0.35, amount: 2.1 },
+  ],
+  materials: 26.45,
+  cutting: 2.1,
+  total: 28.55,
+};
+
+describe('saved plans in the shape before the plan-json-words migration', () => {
+  // Found by name, so the test still holds if the migration is renumbered when branches merge.
+  const before = journal.entries.findIndex((e) => e.tag.endsWith('_plan-json-words'));
+
+  beforeAll(async () => {
+    oldPlanClient = new PGlite();
+    await migrate(wrapClient(oldPlanClient), { migrationsFolder: firstMigrations(before) });
+    await oldPlanClient.exec(initialRows);
+    await oldPlanClient.query(
+      `insert into plans (job_id, status, settings, sections, totals, price_pence, price)
+       values (1, 'planned', $1, '[]', $2, 2855, $3)`,
+      [
+        JSON.stringify({
+          kerfMm: 3,
+          trimMm: 5,
+          minOffcutMm: 300,
+          useOffcuts: true,
+          stockLengthIds: null,
+          timeLimitMs: 2000,
+        }),
+        JSON.stringify(oldTotals),
+        JSON.stringify(oldPrice),
+      ],
+    );
+    // A plan stored without a price (the demo history's plans) must come through untouched.
+    await oldPlanClient.query(
+      `insert into plans (job_id, status, settings, sections, totals, price_pence)
+       values (1, 'superseded', '{}', '[]', $1, 2855)`,
+      [JSON.stringify(oldTotals)],
+    );
+  });
+
+  it('come out with the kerf loss and the price in whole pence under their new names, and the app reads them', async () => {
+    expect(before).toBeGreaterThan(0);
+    await migrate(wrapClient(oldPlanClient), { migrationsFolder });
+    const { rows } = await oldPlanClient.query<{ totals: Record<string, unknown>; price: unknown }>(
+      'select totals, price from plans order by id',
+    );
+    for (const { totals } of rows) {
+      expect(totals).not.toHaveProperty('kerfMm');
+      const { kerfMm, ...rest } = oldTotals;
+      expect(totals).toEqual({ ...rest, kerfLossMm: kerfMm });
+    }
+    expect(rows[0].price).toEqual({
+      lines: [
+        {
+          description: '47 x 100, 4800 mm stock length',
+          quantity: 2,
+          unit: 'board',
+          unitPence: 960,
+          amountPence: 1920,
+        },
+        {
+          description: '47 x 100, 3600 mm stock length',
+          quantity: 1,
+          unit: 'board',
+          unitPence: 725,
+          amountPence: 725,
+        },
+        { description: 'Cutting to length', quantity: 6, unit: 'cut', unitPence: 35, amountPence: 210 },
+      ],
+      materialsPence: 2645,
+      cuttingPence: 210,
+      totalPence: 2855,
+    });
+    expect(rows[1].price).toBeNull();
+
+    setDbForTests(wrapClient(oldPlanClient));
+    const plan = await getPlanById({ planId: 1 });
+    expect(plan.totals.kerfLossMm).toBe(18);
+    expect(plan.settings.kerfMm).toBe(3);
+    expect(plan.price?.totalPence).toBe(plan.pricePence);
+    expect(formatPence(plan.price!.totalPence)).toBe('£28.55');
+    expect(plan.price!.lines.map((l) => formatPence(l.amountPence))).toEqual(['£19.20', '£7.25', '£2.10']);
   });
 });

@@ -62,7 +62,14 @@ test.describe('the yard hand flow', () => {
     await expect(page.getByTestId('board-diagram').first()).toBeVisible();
     await expect(page.getByTestId('diagram-legend')).toContainText('Scrap');
     await expect(page.getByTestId('plan-gap')).toBeVisible();
-    await expect(page.getByTestId('plan-total-price')).toContainText('£');
+    // The page shows the price the plan stored in whole pence, written as pounds and pence.
+    const stored = (await (await page.request.get(`/api/plans/${page.url().split('/').pop()}`)).json()) as {
+      pricePence: number;
+      price: { totalPence: number };
+    };
+    expect(stored.price.totalPence).toBe(stored.pricePence);
+    const pounds = (stored.pricePence / 100).toLocaleString('en-GB', { minimumFractionDigits: 2 });
+    await expect(page.getByTestId('plan-total-price')).toHaveText(`£${pounds}`);
 
     const reference = (await page.getByRole('link', { name: /Wren Castellane/ }).textContent())!
       .split(' · ')[0]

@@ -4,6 +4,7 @@ import { GET as cutSheet } from '@/app/api/plans/[planId]/cut-sheet/route';
 import { POST as emailPlan } from '@/app/api/plans/[planId]/email/route';
 import * as schema from '@/db/schema';
 import { startMailCatcher } from '@/lib/mail/mail-catcher';
+import type { CuttingPlanPrice } from '@/lib/pricing';
 import { actAs, AS, call, useApiTestDb } from '../support/api';
 import { closeTemplate } from '../support/test-db';
 
@@ -109,6 +110,6 @@ describe('prices of stored plans', () => {
       .reduce((sum, b) => sum + prices.get(b.stockLengthId!)!, 0);
     const cuts = boards.reduce((sum, b) => sum + (b.pieces as unknown[]).length, 0);
     expect(plan.pricePence).toBe(stockPence + cuts * yard.perCutChargePence);
-    expect((plan.price as { total: number }).total * 100).toBeCloseTo(plan.pricePence, 6);
+    expect((plan.price as CuttingPlanPrice).totalPence).toBe(plan.pricePence);
   });
 });

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { longestFirstBaseline } from '@/lib/plans/longest-first-baseline';
 import { solve, type SolveInput } from '@/solver';
+import { jobArbitrary } from '../solver/job-arbitrary';
 
 // Kerf arithmetic follows the product's solver contract (DESIGN.md): a board holds Σ(piece + kerf) ≤ usable + kerf,
 // usable = length − trim − kerf when trimmed; n pieces from one end take n kerfs, n − 1 when the last ends at
@@ -82,6 +83,28 @@ describe('longestFirstBaseline (hand-worked)', () => {
       { numRuns: 40 },
     );
   });
+  it('is never cheaper than the solver’s plan, even when the solver has no time beyond its first plans', () => {
+    // The product's promise (DESIGN.md): never dearer than plain longest-first. With uncapped stock both
+    // place every piece that fits a source; offcuts are free to the solver and unused by the baseline.
+    const uncapped = jobArbitrary.map((job) => ({
+      ...job,
+      timeLimitMs: 1,
+      stock: job.stock.map((s) => ({ ...s, available: null })),
+    }));
+    fc.assert(
+      fc.property(uncapped, (input) => {
+        // Only jobs the baseline places in full: it skips a piece no stock length holds at its ordered length.
+        const usable = (l: number) => l - input.trim - (input.trim > 0 ? input.kerf : 0);
+        fc.pre(input.pieces.every((p) => input.stock.some((s) => usable(s.length) >= p.length)));
+        const plan = solve(input);
+        const stockCost = plan.boards.filter((b) => b.source === 'stock').reduce((n, b) => n + b.cost, 0);
+        // Costs are pounds as decimals here: compared to a millionth, as the baseline rounds them.
+        expect(stockCost).toBeLessThanOrEqual(longestFirstBaseline(input).cost + 1e-6);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
   // Two cases worked by hand by the planning side, kept here. Scrap follows PlanTotals (trim plus
   // remainders shorter than the minimum offcut), the same definition as the solver's plans.
   it('packs longest first into the first board that fits (no trim)', () => {

@@ -195,6 +195,40 @@ describe('paying through the payment service', () => {
     expect((await releasePlan(planId)).status).toBe(200);
   });
 
+  it('pennies left under the smallest card payment are not charged by card and do not block release', async () => {
+    const { planId, jobId } = await plannedJobFor(t.db, 'retail', 'J-Q8');
+    const { token } = await linkFor(planId);
+    actAs(AS.nobody);
+    await call(accept, {
+      method: 'POST',
+      ...tok(token),
+      body: { name: 'Robin Customer', nonReturnable: true },
+    });
+    expect((await payWithCard(token, TEST_CARDS.approved)).status).toBe(303);
+    const [paid] = (await ledger(jobId)).filter((r) => r.status === 'succeeded');
+    // As after a re-plan that moved the price up by pennies: 18p more deposit, 18p left in all.
+    const byPlan = eq(schema.quotes.planId, planId);
+    await t.db
+      .update(schema.quotes)
+      .set({ depositPence: paid.amountPence + 18, grossPence: paid.amountPence + 18 })
+      .where(byPlan);
+
+    actAs(AS.nobody);
+    const deposit = await call(pay, { method: 'POST', ...tok(token), body: { share: 'deposit' } });
+    expect(deposit.status).toBe(409);
+    expect(deposit.json.error).toBe('The deposit is already paid.');
+    const rest = await call(pay, { method: 'POST', ...tok(token), body: { share: 'full' } });
+    expect(rest.status).toBe(409);
+    expect(rest.json.error).toContain('£0.18 is left to pay, less than the smallest card payment (£0.30)');
+    expect((await call(openLink, tok(token))).json.payment).toMatchObject({
+      state: 'deposit_paid',
+      depositDuePence: 0,
+      balancePence: 18,
+    });
+    actAs(AS.hand);
+    expect((await releasePlan(planId)).status).toBe(200);
+  });
+
   it('a replayed event changes nothing; a missing or wrong signature is 400 and records nothing', async () => {
     const { planId, jobId } = await plannedJobFor(t.db, 'retail', 'J-Q7');
     const { token } = await linkFor(planId);
