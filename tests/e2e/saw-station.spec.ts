@@ -23,6 +23,8 @@ test.describe('the saw station in landscape (1024×768, touch)', () => {
     page,
     browser,
   }) => {
+    // A whole plan cut board by board, with the office watching: the longest flow here.
+    test.setTimeout(120_000);
     await signIn(page, DEMO.saw);
     await expect(page).toHaveURL(/\/saw$/);
     await page.getByTestId('queue-J-1002').tap();

@@ -7,10 +7,8 @@ import { PGlite } from '@electric-sql/pglite';
 import { expect, test, type APIRequestContext } from '@playwright/test';
 import { DEMO, signIn } from './support/sign-in';
 import { startProcess, startServer, stopServer, waitForHealth } from './support/own-server';
+import { currentStack } from './support/stack';
 
-// The same port and folder as the server in playwright.config.ts.
-const PORT = Number(process.env.PW_PORT ?? 3107);
-const MAIN_DATA_DIR = `.data-e2e-${PORT}`;
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 /** Asks /api/health every 100 ms while `go()` holds, up to `most` times: how long each answer took. */
@@ -100,13 +98,15 @@ test('a second server and db:reset are both refused while the server holds its d
   baseURL,
 }) => {
   test.setTimeout(120_000);
-  const second = startServer(MAIN_DATA_DIR, PORT + 7);
+  // The folder of the server this test's project runs against (playwright.config.ts).
+  const { port, dataDir } = currentStack();
+  const second = startServer(dataDir, port + 7);
   expect(await second.exited).toBe(1);
   expect(second.output()).toMatch(/data folder .* is already open in process \d+/);
 
   const reset = startProcess('node_modules/.bin/tsx', ['scripts/db-reset.ts'], {
     ...process.env,
-    KERFWISE_DATA_DIR: MAIN_DATA_DIR,
+    KERFWISE_DATA_DIR: dataDir,
   });
   expect(await reset.exited).toBe(1);
   expect(reset.output()).toMatch(/already open in process \d+/);
@@ -123,7 +123,7 @@ test('kill -9 during writes, twice: every acknowledged write survives and on han
 }) => {
   test.setTimeout(300_000);
   const dataDir = mkdtempSync(path.join(tmpdir(), 'kerfwise-kill-'));
-  const port = PORT + 9;
+  const port = currentStack().port + 9;
   const jobIds: number[] = [];
   const receipts: string[] = [];
   for (let round = 1; round <= 2; round++) {

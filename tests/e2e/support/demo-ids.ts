@@ -9,7 +9,8 @@ export type DemoIds = {
 };
 
 async function json<T>(request: APIRequestContext, url: string): Promise<T> {
-  const response = await request.get(url);
+  // A kept-alive connection the server closes just as it is reused answers ECONNRESET; a GET may ask again.
+  const response = await request.get(url, { maxRetries: 1 });
   expect(response.ok(), url).toBe(true);
   return (await response.json()) as T;
 }

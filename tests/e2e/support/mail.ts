@@ -1,7 +1,5 @@
-// The browser tests' mail catcher (see playwright.config.ts): SMTP 500 below the app's port, HTTP 10 000 above that.
-const PORT = Number(process.env.PW_PORT ?? 3107);
-const SMTP_PORT = Number(process.env.PW_SMTP_PORT ?? PORT - 500);
-export const MAIL_CATCHER_URL = `http://127.0.0.1:${SMTP_PORT + 10_000}`;
+// The mail catcher of the stack the test runs against (see stack.ts).
+import { currentStack } from './stack';
 
 export type CaughtMail = {
   from: string;
@@ -12,6 +10,6 @@ export type CaughtMail = {
 };
 
 export async function caughtMail(): Promise<CaughtMail[]> {
-  const response = await fetch(`${MAIL_CATCHER_URL}/messages`);
+  const response = await fetch(`${currentStack().mailCatcherURL}/messages`);
   return ((await response.json()) as { messages: CaughtMail[] }).messages;
 }

@@ -1,9 +1,7 @@
-// The browser tests' payment fake (see playwright.config.ts) and a quick way to get a plan's quote
+// The browser tests' payment fake (see stack.ts) and a quick way to get a plan's quote
 // accepted and paid through the same public calls and card page the customer uses.
 import { expect, type APIRequestContext } from '@playwright/test';
 
-const PORT = Number(process.env.PW_PORT ?? 3107);
-export const PAYMENT_FAKE_URL = `http://127.0.0.1:${PORT + 1000}`;
 export const CARDS = { approved: '4242 4242 4242 4242', declined: '4000 0000 0000 0002' } as const;
 
 /** As the yard hand makes a link; as the customer accepts it and pays the deposit by card. */
